@@ -1,0 +1,24 @@
+export type { WeightedGraph } from "./graph/weighted-graph.js";
+export { density, edgeCount, nodeLabel, possibleEdgeCount } from "./graph/weighted-graph.js";
+export { GraphInputError } from "./graph/graph-input-error.js";
+export type { GraphInputLocation, GraphInputProblem } from "./graph/graph-input-error.js";
+export type { NegativePolicy, SymmetrizePolicy, WarningSink } from "./graph/policies.js";
+export { fromEdgeList } from "./graph/from-edge-list.js";
+export type { EdgeListInput } from "./graph/from-edge-list.js";
+export { fromDenseMatrix } from "./graph/from-dense-matrix.js";
+export type { DenseMatrixOptions } from "./graph/from-dense-matrix.js";
+export { fromGraphology } from "./graph/from-graphology.js";
+export type { GraphologyOptions } from "./graph/from-graphology.js";
+
+export { fromFiltrationValue, toFiltrationValue } from "./filtration/weight-semantics.js";
+export type { WeightSemantics } from "./filtration/weight-semantics.js";
+export { edgeFiltration, filtrationStart } from "./filtration/edge-filtration.js";
+export { edgeBins } from "./filtration/edge-bins.js";
+export {
+  allEdgesGrid,
+  densityGrid,
+  evenGrid,
+  explicitGrid,
+  gridFiltrationValues,
+} from "./filtration/threshold-grid.js";
+export type { ThresholdGrid } from "./filtration/threshold-grid.js";

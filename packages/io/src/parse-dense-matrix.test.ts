@@ -1,0 +1,184 @@
+import { fromDenseMatrix } from "@cliquescape/core";
+import { describe, expect, it } from "vitest";
+import { InputFileError } from "./input-file-error.js";
+import { type DenseMatrixTextOptions, parseDenseMatrixText } from "./parse-dense-matrix.js";
+
+const N = Number.NaN;
+
+function failure(text: string, options: DenseMatrixTextOptions = {}): InputFileError {
+  try {
+    parseDenseMatrixText(text, "m.csv", options);
+  } catch (error) {
+    if (error instanceof InputFileError) return error;
+    throw error;
+  }
+  throw new Error("expected an InputFileError");
+}
+
+/** Edges as "u-v:w" strings, each once, for readable comparisons. */
+function edges(text: string, options: DenseMatrixTextOptions = {}): string[] {
+  const { graph } = parseDenseMatrixText(text, "m.csv", options);
+  const out: string[] = [];
+  for (let u = 0; u < graph.n; u++) {
+    for (let s = graph.offsets[u]; s < graph.offsets[u + 1]; s++) {
+      const v = graph.targets[s];
+      if (graph.directed || u < v) out.push(`${u}-${v}:${graph.weights[s]}`);
+    }
+  }
+  return out;
+}
+
+describe("parseDenseMatrixText: what is an edge", () => {
+  it("reads a CSV matrix into the same graph the core builder makes from the numbers", () => {
+    const { graph } = parseDenseMatrixText("0,0.5,0.25\n0.5,0,\n0.25,,0\n", "m.csv");
+    expect(graph).toEqual(fromDenseMatrix(3, [N, 0.5, 0.25, 0.5, N, N, 0.25, N, N], { directed: false }));
+  });
+
+  it("drops zeros for similarity-like weights (the default) and keeps them for distances or zeroIsEdge", () => {
+    const text = "0,0,2\n0,0,3\n2,3,0\n";
+    expect(edges(text)).toEqual(["0-2:2", "1-2:3"]);
+    expect(edges(text, { semantics: "distance" })).toEqual(["0-1:0", "0-2:2", "1-2:3"]);
+    expect(edges(text, { zeroIsEdge: true })).toEqual(["0-1:0", "0-2:2", "1-2:3"]);
+    expect(edges(text, { semantics: "distance", zeroIsEdge: false })).toEqual(["0-2:2", "1-2:3"]);
+  });
+
+  it("ignores the diagonal, even NaN or infinity there", () => {
+    expect(edges("nan,1\n1,inf\n")).toEqual(["0-1:1"]);
+  });
+
+  it("reads directed matrices row → column", () => {
+    expect(edges("0,1,0\n0,0,2\n3,0,0\n", { directed: true })).toEqual(["0-1:1", "1-2:2", "2-0:3"]);
+  });
+
+  it("applies symmetrize and negative policies from the core", () => {
+    expect(edges("0,1\n3,0\n", { symmetrize: "max" })).toEqual(["0-1:3"]);
+    expect(edges("0,-1\n-1,0\n", { negative: "abs" })).toEqual(["0-1:1"]);
+  });
+
+  it("reads NaN as no edge when asked", () => {
+    expect(edges("0,NaN,1\nNaN,0,2\n1,2,0\n", { nanIsNoEdge: true })).toEqual(["0-2:1", "1-2:2"]);
+  });
+});
+
+describe("parseDenseMatrixText: delimiters, comments and quoting", () => {
+  const expected = ["0-1:1", "0-2:2", "1-2:3"];
+  it("detects tab, comma, semicolon and whitespace", () => {
+    expect(edges("0\t1\t2\n1\t0\t3\n2\t3\t0\n")).toEqual(expected);
+    expect(edges("0;1;2\n1;0;3\n2;3;0\n")).toEqual(expected);
+    expect(edges("  0  1 2\n1 0   3\n\t2 3 0  \n")).toEqual(expected);
+    expect(edges("0 , 1 , 2\r\n1,0,3\r\n2,3,0\r\n")).toEqual(expected);
+  });
+
+  it("skips # comment lines and blank lines, and a UTF-8 byte-order mark", () => {
+    expect(edges("\uFEFF# made by hand\n\n0,1,2\n  # halfway\n1,0,3\n2,3,0\n\n")).toEqual(expected);
+  });
+});
+
+describe("parseDenseMatrixText: labels", () => {
+  it("detects a label row with a corner cell and a label column", () => {
+    const { graph } = parseDenseMatrixText(",a,b,c\na,0,1,2\nb,1,0,3\nc,2,3,0\n", "m.csv");
+    expect(graph.labels).toEqual(["a", "b", "c"]);
+    expect(graph.n).toBe(3);
+  });
+
+  it("detects a label row without a corner cell (n cells) over a label column", () => {
+    const { graph } = parseDenseMatrixText("a b c\na 0 1 2\nb 1 0 3\nc 2 3 0\n", "m.txt");
+    expect(graph.labels).toEqual(["a", "b", "c"]);
+  });
+
+  it("detects a label row alone and a label column alone", () => {
+    expect(parseDenseMatrixText("a,b\n0,1\n1,0\n", "m.csv").graph.labels).toEqual(["a", "b"]);
+    expect(parseDenseMatrixText("L_V1,0,1\nR_V1,1,0\n", "m.csv").graph.labels).toEqual(["L_V1", "R_V1"]);
+  });
+
+  it("reads quoted labels holding commas and quotes (RFC 4180 §2.6 and §2.7)", () => {
+    const { graph } = parseDenseMatrixText('"",  "x, left","say ""hi"""\n"x, left",0,1\n"say ""hi""",1,0\n', "m.csv");
+    expect(graph.labels).toEqual(["x, left", 'say "hi"']);
+  });
+
+  it("forces numeric labels with labelRow and labelColumn", () => {
+    const text = ",10,20\n10,0,1\n20,1,0\n";
+    expect(parseDenseMatrixText(text, "m.csv", { labelRow: true, labelColumn: true }).graph.labels).toEqual([
+      "10",
+      "20",
+    ]);
+  });
+
+  it("uses the labels option when the file has none", () => {
+    expect(parseDenseMatrixText("0,1\n1,0\n", "m.csv", { labels: ["p", "q"] }).graph.labels).toEqual(["p", "q"]);
+  });
+});
+
+describe("parseDenseMatrixText: errors name the file, line and cell", () => {
+  it("empty file and comment-only file", () => {
+    expect(failure("").message).toBe("m.csv: file is empty");
+    expect(failure("# nothing\n\n").message).toBe("m.csv: file holds no data, only blank or comment lines");
+    expect(failure("a,b,c\n").message).toBe("m.csv: file has a label row but no matrix rows");
+  });
+
+  it("non-numeric token, counting the comment line and the label column", () => {
+    const error = failure("# header comment\nx,0,1,2\ny,1,0,abc\nz,2,3,0\n");
+    expect(error.message).toBe('m.csv:3:4: "abc" is not a number');
+    expect([error.problem, error.line, error.column, error.reason]).toEqual([
+      "not-a-number",
+      3,
+      4,
+      '"abc" is not a number',
+    ]);
+  });
+
+  it("NaN and infinity off the diagonal", () => {
+    expect(failure("0,1\nNaN,0\n").message).toBe('m.csv:2:1: "NaN" is not a finite weight; leave the cell empty for "no edge"');
+    expect(failure("0,-Infinity\n1,0\n").problem).toBe("not-finite");
+    expect(failure("0,-Infinity\n1,0\n").column).toBe(2);
+  });
+
+  it("ragged rows", () => {
+    expect(failure("0,1,2\n1,0\n2,3,0\n").message).toBe("m.csv:2: row has 2 cells but line 1 has 3");
+  });
+
+  it("non-square matrices, both ways", () => {
+    expect(failure("0,1,2\n1,0,3\n").message).toBe("m.csv:2: matrix is not square: 2 rows but 3 columns");
+    expect(failure("0,1\n1,0\n2,3\n").message).toBe("m.csv:3: matrix is not square: more than 2 rows for 2 columns");
+  });
+
+  it("asymmetric matrix read as undirected names both cells", () => {
+    const error = failure("# c\n,a,b,c\na,0,1,2\nb,1,0,3\nc,2,5,0\n");
+    expect(error.message).toBe(
+      "m.csv:4:4: matrix is not symmetric: 3 here but 5 at line 5, column 3; read it as directed or choose a symmetrize policy (max, min, mean)",
+    );
+    expect(error.problem).toBe("asymmetric");
+  });
+
+  it("asymmetric with a missing side says 'no edge'", () => {
+    expect(failure("0,1\n,0\n").reason).toMatch(/^matrix is not symmetric: 1 here but no edge at line 2, column 1;/);
+  });
+
+  it("negative weight without a policy", () => {
+    const error = failure("a,b\n0,-0.5\n-0.5,0\n");
+    expect(error.message).toBe(
+      "m.csv:2:2: negative weight -0.5; choose a negative-weight policy (abs, drop or keep) to accept it",
+    );
+    expect(error.problem).toBe("negative-weight");
+  });
+
+  it("labels that disagree, repeat or miscount", () => {
+    expect(failure(",a,b\na,0,1\nc,1,0\n").message).toBe(
+      'm.csv:3:1: row label "c" differs from column label "b" at line 1, column 3; rows and columns must list the nodes in the same order',
+    );
+    expect(failure("a,a\n0,1\n1,0\n").message).toBe('m.csv:1:2: node label "a" appears twice; first at line 1, column 1');
+    expect(failure(",a,b,c\na,0,1\nb,1,0\n").message).toBe("m.csv:1: label row has 4 cells but the matrix has 2 columns");
+    expect(failure("0,1\n1,0\n", { labels: ["p"] }).message).toBe("m.csv: 1 labels given for a 2-node matrix");
+  });
+
+  it("bad quoting", () => {
+    expect(failure('0,"1\n1,0\n').message).toBe("m.csv:1:2: quoted cell is never closed");
+    expect(failure('0,"1"x\n1,0\n').message).toBe('m.csv:1:2: unexpected "x" after the closing quote of a cell');
+  });
+
+  it("refuses a matrix above the cell limit before allocating it", () => {
+    expect(failure("0,1,2\n1,0,3\n2,3,0\n", { maxCells: 8 }).message).toBe(
+      "m.csv:1: a 3×3 matrix has 9 cells, more than the limit of 8; raise maxCells if you have the memory",
+    );
+  });
+});

@@ -1,0 +1,242 @@
+import { fromDenseMatrix, GraphInputError, type WeightedGraph } from "@cliquescape/core";
+import { describePosition, InputFileError, type InputFilePosition } from "./input-file-error.js";
+import { classifyCell, looksNumeric } from "./parse-number.js";
+import { DEFAULT_MAX_CELLS, type GraphReadOptions, zeroIsEdge } from "./read-options.js";
+import { type Delimiter, detectDelimiter, type TextRow, textRows } from "./text-rows.js";
+
+export interface DenseMatrixTextOptions extends GraphReadOptions {
+  /** Default: detected from the first data line. */
+  delimiter?: Delimiter;
+  /** First data line holds node names. Default: detected (every cell after the first is non-numeric). */
+  labelRow?: boolean;
+  /** First cell of each row holds a node name. Default: detected (first cell of the first row is non-numeric). */
+  labelColumn?: boolean;
+}
+
+/** One graph read from a file, with the notes about what was fixed on the way. */
+export interface GraphReadResult {
+  graph: WeightedGraph;
+  warnings: string[];
+}
+
+/**
+ * Reads an n×n matrix written as text: CSV, TSV, semicolon- or whitespace-separated. An empty cell means
+ * no edge; the diagonal is ignored (it must still be a number or empty); a 0 is an edge only for
+ * distance-like weights or with `zeroIsEdge`. Node names come from a label row and/or label column.
+ */
+export function parseDenseMatrixText(
+  text: string,
+  file: string,
+  options: DenseMatrixTextOptions = {},
+): GraphReadResult {
+  const delimiter = options.delimiter ?? detectDelimiter(text);
+  const rows = textRows(text, delimiter, file);
+  let next = rows.next();
+  if (next.done) {
+    const reason = text.length === 0 ? "file is empty" : "file holds no data, only blank or comment lines";
+    throw new InputFileError(file, "empty-file", reason);
+  }
+  const labelRow = options.labelRow ?? isLabelRow(next.value.cells);
+  let header: TextRow | undefined;
+  if (labelRow) {
+    header = next.value;
+    next = rows.next();
+    if (next.done) throw new InputFileError(file, "empty-file", "file has a label row but no matrix rows");
+  }
+  const first = next.value;
+  // An empty first cell is the diagonal of an unlabelled matrix, not a missing label.
+  const labelColumn = options.labelColumn ?? (first.cells[0] !== "" && !looksNumeric(first.cells[0]));
+  const skip = labelColumn ? 1 : 0;
+  const width = first.cells.length;
+  const n = width - skip;
+  if (n < 1) throw new InputFileError(file, "not-square", "matrix has no columns", { line: first.line });
+  const maxCells = options.maxCells ?? DEFAULT_MAX_CELLS;
+  if (n * n > maxCells) {
+    throw new InputFileError(
+      file,
+      "too-large",
+      `a ${n}×${n} matrix has ${n * n} cells, more than the limit of ${maxCells}; raise maxCells if you have the memory`,
+      { line: first.line },
+    );
+  }
+
+  const zeroEdge = zeroIsEdge(options);
+  const values = new Float64Array(n * n);
+  const lineOfRow = new Int32Array(n);
+  const rowLabels: string[] = [];
+  let rowCount = 0;
+  for (; !next.done; next = rows.next()) {
+    const { line, cells } = next.value;
+    if (cells.length !== width) {
+      throw new InputFileError(
+        file,
+        "ragged-row",
+        `row has ${cells.length} cells but line ${first.line} has ${width}`,
+        { line },
+      );
+    }
+    if (rowCount === n) {
+      throw new InputFileError(
+        file,
+        "not-square",
+        `matrix is not square: more than ${n} rows for ${n} columns`,
+        {
+          line,
+        },
+      );
+    }
+    const i = rowCount++;
+    lineOfRow[i] = line;
+    if (labelColumn) rowLabels.push(cells[0]);
+    for (let j = 0; j < n; j++) {
+      const raw = cells[j + skip];
+      const cell = classifyCell(raw);
+      const at = () => ({ line, column: j + skip + 1 });
+      if (cell.kind === "text") {
+        throw new InputFileError(file, "not-a-number", `${JSON.stringify(raw)} is not a number`, at());
+      }
+      let w = Number.NaN;
+      if (i !== j) {
+        if (cell.kind === "number") {
+          w = cell.value === 0 && !zeroEdge ? Number.NaN : cell.value;
+        } else if (cell.kind === "not-finite" && !(Number.isNaN(cell.value) && options.nanIsNoEdge)) {
+          throw new InputFileError(
+            file,
+            "not-finite",
+            `${JSON.stringify(raw)} is not a finite weight; leave the cell empty for "no edge"`,
+            at(),
+          );
+        }
+      }
+      values[i * n + j] = w;
+    }
+  }
+  if (rowCount < n) {
+    throw new InputFileError(
+      file,
+      "not-square",
+      `matrix is not square: ${rowCount} row${rowCount === 1 ? "" : "s"} but ${n} columns`,
+      { line: lineOfRow[rowCount - 1] },
+    );
+  }
+
+  const labels = resolveLabels(file, n, header, labelColumn, rowLabels, lineOfRow, options.labels);
+  const warnings: string[] = [];
+  const cellAt = (row: number, col: number): InputFilePosition => ({
+    line: lineOfRow[row],
+    column: col + skip + 1,
+  });
+  try {
+    const graph = fromDenseMatrix(n, values, {
+      directed: options.directed ?? false,
+      symmetrize: options.symmetrize,
+      negative: options.negative,
+      labels,
+      onWarning: (message) => warnings.push(`${file}: ${message}`),
+    });
+    return { graph, warnings };
+  } catch (error) {
+    if (!(error instanceof GraphInputError)) throw error;
+    const { row, col } = error.location;
+    if (row === undefined || col === undefined) throw new InputFileError(file, "not-square", error.message);
+    if (error.problem === "asymmetric") {
+      const here = values[row * n + col];
+      const there = values[col * n + row];
+      throw new InputFileError(
+        file,
+        "asymmetric",
+        `matrix is not symmetric: ${describeWeight(here)} here but ${describeWeight(there)} at ` +
+          `${describePosition(cellAt(col, row))}; read it as directed or choose a symmetrize policy (max, min, mean)`,
+        cellAt(row, col),
+      );
+    }
+    const problem = error.problem === "negative-weight" ? "negative-weight" : "not-finite";
+    throw new InputFileError(file, problem, error.message, cellAt(row, col));
+  }
+}
+
+function describeWeight(w: number): string {
+  return Number.isNaN(w) ? "no edge" : String(w);
+}
+
+/** A label row names nodes: every cell after the first (which may be a corner cell) is non-numeric text. */
+function isLabelRow(cells: readonly string[]): boolean {
+  const named = cells.length === 1 ? cells : cells.slice(1);
+  return named.every((cell) => cell !== "" && !looksNumeric(cell));
+}
+
+/**
+ * Node names from the label row and/or column, or from the options. A label row may carry a corner
+ * cell above the label column (n + 1 cells) or not (n cells, as R's write.table does).
+ */
+function resolveLabels(
+  file: string,
+  n: number,
+  header: TextRow | undefined,
+  labelColumn: boolean,
+  rowLabels: readonly string[],
+  lineOfRow: Int32Array,
+  given: readonly string[] | undefined,
+): string[] | undefined {
+  let columnLabels: string[] | undefined;
+  let firstLabelColumn = 1;
+  if (header) {
+    if (header.cells.length === n) {
+      columnLabels = header.cells;
+    } else if (header.cells.length === n + 1 && labelColumn) {
+      columnLabels = header.cells.slice(1);
+      firstLabelColumn = 2;
+    } else {
+      throw new InputFileError(
+        file,
+        "bad-labels",
+        `label row has ${header.cells.length} cells but the matrix has ${n} columns`,
+        { line: header.line },
+      );
+    }
+  }
+  if (columnLabels && labelColumn) {
+    for (let i = 0; i < n; i++) {
+      if (rowLabels[i] !== columnLabels[i]) {
+        throw new InputFileError(
+          file,
+          "bad-labels",
+          `row label ${JSON.stringify(rowLabels[i])} differs from column label ${JSON.stringify(columnLabels[i])} ` +
+            `at line ${header!.line}, column ${i + firstLabelColumn}; rows and columns must list the nodes in the same order`,
+          { line: lineOfRow[i], column: 1 },
+        );
+      }
+    }
+  }
+  const labels = columnLabels ?? (labelColumn ? [...rowLabels] : undefined);
+  if (labels) {
+    const seen = new Map<string, number>();
+    labels.forEach((label, i) => {
+      const before = seen.get(label);
+      const position = columnLabels
+        ? { line: header!.line, column: i + firstLabelColumn }
+        : { line: lineOfRow[i], column: 1 };
+      if (label === "") throw new InputFileError(file, "bad-labels", "empty node label", position);
+      if (before !== undefined) {
+        const first = columnLabels
+          ? { line: header!.line, column: before + firstLabelColumn }
+          : { line: lineOfRow[before], column: 1 };
+        throw new InputFileError(
+          file,
+          "bad-labels",
+          `node label ${JSON.stringify(label)} appears twice; first at ${describePosition(first)}`,
+          position,
+        );
+      }
+      seen.set(label, i);
+    });
+    if (given && given.join("\u0000") !== labels.join("\u0000")) {
+      throw new InputFileError(file, "bad-labels", "the labels option differs from the labels in the file");
+    }
+    return labels;
+  }
+  if (given && given.length !== n) {
+    throw new InputFileError(file, "bad-labels", `${given.length} labels given for a ${n}-node matrix`);
+  }
+  return given ? [...given] : undefined;
+}

@@ -1,0 +1,170 @@
+import { InputFileError, type InputFileProblem } from "./input-file-error.js";
+import { type NpyDtype, parseDescr, readElement, SUPPORTED_DTYPES } from "./npy-dtype.js";
+import { PythonLiteralError, type PythonValue, parsePythonLiteral } from "./python-literal.js";
+
+/** A .npy array, not yet copied: elements are read from `bytes` on demand. */
+export interface NpyArray {
+  /** Format version as "major.minor". */
+  version: string;
+  dtype: NpyDtype;
+  fortranOrder: boolean;
+  shape: number[];
+  /** Byte offset of the first element in `bytes`. */
+  dataOffset: number;
+  bytes: Uint8Array;
+  /** Bytes after the last element (numpy ignores them; readers should warn). */
+  trailingBytes: number;
+}
+
+// NumPy format specification (NEP 1): the magic string is \x93NUMPY, then major and minor version bytes.
+const MAGIC = [0x93, 0x4e, 0x55, 0x4d, 0x50, 0x59];
+
+/**
+ * Parses the header of a .npy file (format versions 1.0, 2.0 and 3.0 of the NumPy format specification)
+ * and checks that the data the header promises is all there, before anything is allocated.
+ */
+export function parseNpy(bytes: Uint8Array, file: string): NpyArray {
+  const fail = (problem: InputFileProblem, reason: string, byteOffset?: number): never => {
+    throw new InputFileError(file, problem, reason, byteOffset === undefined ? {} : { byteOffset });
+  };
+  if (bytes.length === 0) fail("empty-file", "file is empty (0 bytes)");
+  for (let k = 0; k < MAGIC.length; k++) {
+    if (k >= bytes.length)
+      fail("truncated", `file is truncated: ${bytes.length} bytes, inside the .npy magic string`);
+    if (bytes[k] !== MAGIC[k]) fail("bad-npy", 'not a .npy file: it does not start with "\\x93NUMPY"', k);
+  }
+  if (bytes.length < 8)
+    fail("truncated", `file is truncated: ${bytes.length} bytes, before the version number`);
+  const major = bytes[6];
+  const minor = bytes[7];
+  if (major < 1 || major > 3 || minor !== 0) {
+    fail(
+      "bad-npy",
+      `unsupported .npy format version ${major}.${minor} (this reader knows 1.0, 2.0 and 3.0)`,
+      6,
+    );
+  }
+  // Version 1.0 stores the header length as a little-endian uint16, later versions as a uint32.
+  const lengthBytes = major === 1 ? 2 : 4;
+  const headerStart = 8 + lengthBytes;
+  if (bytes.length < headerStart) {
+    fail("truncated", `file is truncated: ${bytes.length} bytes, inside the header length field`);
+  }
+  const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  const headerLength = major === 1 ? view.getUint16(8, true) : view.getUint32(8, true);
+  const dataOffset = headerStart + headerLength;
+  if (dataOffset > bytes.length) {
+    fail(
+      "truncated",
+      `file is truncated: the header claims ${headerLength} bytes, ending at byte ${dataOffset}, but the file has ${bytes.length}`,
+      8,
+    );
+  }
+  // Versions 1.0 and 2.0 encode the header in latin-1, version 3.0 in UTF-8.
+  const headerText = new TextDecoder(major === 3 ? "utf-8" : "latin1").decode(
+    bytes.subarray(headerStart, dataOffset),
+  );
+  let header: PythonValue;
+  try {
+    header = parsePythonLiteral(headerText);
+  } catch (error) {
+    if (!(error instanceof PythonLiteralError)) throw error;
+    return fail("bad-npy", `header is not a valid dictionary: ${error.message}`, headerStart + error.offset);
+  }
+  if (header === null || typeof header !== "object" || Array.isArray(header)) {
+    return fail("bad-npy", "header is not a dictionary", headerStart);
+  }
+  const { descr, fortran_order: fortranOrder, shape } = header;
+  if (typeof descr !== "string") {
+    const what = Array.isArray(descr)
+      ? "structured (record) arrays are not supported"
+      : "header has no 'descr' string";
+    fail(Array.isArray(descr) ? "unsupported-dtype" : "bad-npy", what, headerStart);
+  }
+  const dtype = parseDescr(descr as string);
+  if (!dtype) {
+    throw new InputFileError(
+      file,
+      "unsupported-dtype",
+      `unsupported dtype ${JSON.stringify(descr)}; supported: ${SUPPORTED_DTYPES}`,
+      { byteOffset: headerStart },
+    );
+  }
+  if (typeof fortranOrder !== "boolean")
+    fail("bad-npy", "header has no 'fortran_order' True/False", headerStart);
+  if (
+    !Array.isArray(shape) ||
+    !shape.every((d) => typeof d === "number" && Number.isSafeInteger(d) && d >= 0)
+  ) {
+    return fail("bad-npy", "header 'shape' is not a tuple of non-negative integers", headerStart);
+  }
+  const dims = shape as number[];
+  // Multiply with a bound so a forged shape like (10**12, 10**12) is refused without overflow or allocation.
+  let elements = 1;
+  for (const d of dims) {
+    elements *= d;
+    if (elements * dtype.size > Number.MAX_SAFE_INTEGER) {
+      fail(
+        "too-large",
+        `header shape (${dims.join(", ")}) describes more data than any file can hold`,
+        headerStart,
+      );
+    }
+  }
+  const dataBytes = elements * dtype.size;
+  const available = bytes.length - dataOffset;
+  if (dataBytes > available) {
+    fail(
+      "truncated",
+      `file is truncated: shape (${dims.join(", ")}) of ${dtype.descr} needs ${dataBytes} bytes of data after ` +
+        `byte ${dataOffset}, but only ${available} are there`,
+      bytes.length,
+    );
+  }
+  return {
+    version: `${major}.${minor}`,
+    dtype,
+    fortranOrder: fortranOrder as boolean,
+    shape: dims,
+    dataOffset,
+    bytes,
+    trailingBytes: available - dataBytes,
+  };
+}
+
+/** Element strides per axis: how many elements apart neighbours along each axis lie, in C or Fortran order. */
+export function npyStrides(array: Pick<NpyArray, "shape" | "fortranOrder">): number[] {
+  const { shape, fortranOrder } = array;
+  const strides = new Array<number>(shape.length);
+  let step = 1;
+  for (let k = 0; k < shape.length; k++) {
+    const axis = fortranOrder ? k : shape.length - 1 - k;
+    strides[axis] = step;
+    step *= shape[axis];
+  }
+  return strides;
+}
+
+/** Byte offset of the element at `index` (one number per axis), honouring C or Fortran order. */
+export function npyElementOffset(array: NpyArray, index: readonly number[]): number {
+  const strides = npyStrides(array);
+  let flat = 0;
+  for (let axis = 0; axis < index.length; axis++) flat += index[axis] * strides[axis];
+  return array.dataOffset + flat * array.dtype.size;
+}
+
+/** All elements as float64 in C (row-major) order, whatever the file's order and type. */
+export function npyValues(array: NpyArray): Float64Array {
+  const count = array.shape.reduce((a, b) => a * b, 1);
+  const out = new Float64Array(count);
+  const view = new DataView(array.bytes.buffer, array.bytes.byteOffset, array.bytes.byteLength);
+  const index = new Array<number>(array.shape.length).fill(0);
+  for (let k = 0; k < count; k++) {
+    out[k] = readElement(view, npyElementOffset(array, index), array.dtype);
+    for (let axis = index.length - 1; axis >= 0; axis--) {
+      if (++index[axis] < array.shape[axis]) break;
+      index[axis] = 0;
+    }
+  }
+  return out;
+}

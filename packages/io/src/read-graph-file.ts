@@ -1,0 +1,71 @@
+import { extname } from "node:path";
+import { looksLikeEdgeListHeader } from "./edge-list-columns.js";
+import { InputFileError } from "./input-file-error.js";
+import { type GraphsReadResult, npyToGraphs } from "./npy-graphs.js";
+import { type DenseMatrixTextOptions, parseDenseMatrixText } from "./parse-dense-matrix.js";
+import { type EdgeListTextOptions, parseEdgeListText } from "./parse-edge-list.js";
+import { type NpyArray, parseNpy } from "./parse-npy.js";
+import { decodeText, readFileBytes } from "./read-file-bytes.js";
+import { DEFAULT_MAX_NPY_BYTES, DEFAULT_MAX_TEXT_BYTES } from "./read-options.js";
+import { detectDelimiter, textRows } from "./text-rows.js";
+
+/** The kinds of file `readGraphFile` reads. */
+export type GraphFileFormat = "dense-matrix" | "edge-list" | "npy";
+
+/** Options for `readGraphFile`: those of every reader, plus the format when the extension does not settle it. */
+export interface GraphFileOptions
+  extends DenseMatrixTextOptions,
+    Omit<EdgeListTextOptions, "labels" | "maxCells"> {
+  /**
+   * Default: .npy is NumPy; .csv, .tsv and .txt are an edge list when the first data line is a header naming
+   * a source and a target column, else a dense matrix.
+   */
+  format?: GraphFileFormat;
+}
+
+export interface GraphFileResult extends GraphsReadResult {
+  format: GraphFileFormat;
+}
+
+const TEXT_EXTENSIONS = new Set([".csv", ".tsv", ".txt"]);
+
+/** Reads a file of one graph (matrix or edge list) or several (a 3-D .npy stack), choosing the reader. */
+export function readGraphFile(path: string, options: GraphFileOptions = {}): GraphFileResult {
+  const extension = extname(path).toLowerCase();
+  const format =
+    options.format ?? (extension === ".npy" ? "npy" : TEXT_EXTENSIONS.has(extension) ? "text" : undefined);
+  if (format === undefined) {
+    throw new InputFileError(
+      path,
+      "unknown-format",
+      `cannot tell the format from the extension ${JSON.stringify(extension)}; use .csv, .tsv, .txt or .npy, or set the format option`,
+    );
+  }
+  if (format === "npy") {
+    return { format, ...npyToGraphs(readNpyFile(path, options.maxBytes), path, options) };
+  }
+  const text = decodeText(readFileBytes(path, options.maxBytes ?? DEFAULT_MAX_TEXT_BYTES), path);
+  const delimiter = options.delimiter ?? (extension === ".tsv" ? "\t" : detectDelimiter(text));
+  const textFormat = format === "text" ? guessTextFormat(text, path, delimiter, options) : format;
+  const withDelimiter = { ...options, delimiter };
+  const { graph, warnings } =
+    textFormat === "edge-list"
+      ? parseEdgeListText(text, path, withDelimiter)
+      : parseDenseMatrixText(text, path, withDelimiter);
+  return { format: textFormat, graphs: [graph], warnings };
+}
+
+/** Reads and checks a .npy file's header without copying its data. */
+export function readNpyFile(path: string, maxBytes = DEFAULT_MAX_NPY_BYTES): NpyArray {
+  return parseNpy(readFileBytes(path, maxBytes), path);
+}
+
+function guessTextFormat(
+  text: string,
+  file: string,
+  delimiter: DenseMatrixTextOptions["delimiter"] & {},
+  options: GraphFileOptions,
+): GraphFileFormat {
+  const first = textRows(text, delimiter, file).next();
+  return !first.done && looksLikeEdgeListHeader(first.value.cells, options) ? "edge-list" : "dense-matrix";
+}

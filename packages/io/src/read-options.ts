@@ -1,0 +1,51 @@
+import type { NegativePolicy, SymmetrizePolicy, WeightSemantics } from "@cliquescape/core";
+
+/** Options every reader understands. */
+export interface GraphReadOptions {
+  /** Read edges as arcs. Default false: undirected. */
+  directed?: boolean;
+  /**
+   * What the weights mean. Default "similarity" (correlations, streamline counts…). It decides what a
+   * zero is: for similarity-like weights 0 means "no edge"; for distance-like weights 0 is an edge of
+   * weight 0 (two nodes at distance 0 are as close as can be).
+   */
+  semantics?: WeightSemantics;
+  /** Override the zero rule: true keeps 0 as an edge, false drops it, whatever the semantics. */
+  zeroIsEdge?: boolean;
+  /** Treat NaN weights as "no edge" instead of an error (numpy writes missing values as NaN). Default false. */
+  nanIsNoEdge?: boolean;
+  /** Undirected only: how to merge a_ij and a_ji when they differ. Default "error". */
+  symmetrize?: SymmetrizePolicy;
+  /** Default "error". */
+  negative?: NegativePolicy;
+  /** Node names when the file carries none (a label row/column or node names in an edge list win). */
+  labels?: readonly string[];
+  /** Refuse files larger than this many bytes before reading them. Defaults: text 256 MiB, .npy 2 GiB. */
+  maxBytes?: number;
+  /**
+   * Refuse matrices with more than this many cells (n·n) before allocating them. Default 2^26
+   * (an 8192 × 8192 matrix, 512 MiB as float64).
+   */
+  maxCells?: number;
+}
+
+export const DEFAULT_MAX_TEXT_BYTES = 256 * 2 ** 20;
+export const DEFAULT_MAX_NPY_BYTES = 2 * 2 ** 30;
+export const DEFAULT_MAX_CELLS = 2 ** 26;
+
+/** Whether a weight of exactly 0 is an edge under these options. */
+export function zeroIsEdge(options: GraphReadOptions): boolean {
+  return options.zeroIsEdge ?? (options.semantics ?? "similarity") === "distance";
+}
+
+/** "1.5 MiB": sizes in messages people read. */
+export function formatBytes(bytes: number): string {
+  const units = ["bytes", "KiB", "MiB", "GiB", "TiB"];
+  let value = bytes;
+  let unit = 0;
+  while (value >= 1024 && unit < units.length - 1) {
+    value /= 1024;
+    unit++;
+  }
+  return unit === 0 ? `${bytes} bytes` : `${Number(value.toFixed(1))} ${units[unit]}`;
+}

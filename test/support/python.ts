@@ -1,0 +1,31 @@
+/**
+ * Runs Debian's python3 with general-purpose libraries (networkx, numpy) as an outside reference.
+ * Tests that need a module skip, with the reason in their name, only when that module is missing.
+ */
+import { spawnSync } from "node:child_process";
+import { fileURLToPath } from "node:url";
+
+const PYTHON = process.env.PYTHON ?? "python3";
+
+/** null when every module imports, otherwise a message saying what is missing and how to get it. */
+export function missingPythonModules(modules: string[]): string | null {
+  const probe = spawnSync(PYTHON, ["-c", modules.map((m) => `import ${m}`).join("; ")], { encoding: "utf8" });
+  if (probe.error) return `${PYTHON} not found (${probe.error.message})`;
+  if (probe.status !== 0) {
+    return `python module missing: ${modules.join(", ")} (apt-get install -y ${modules.map((m) => `python3-${m}`).join(" ")})`;
+  }
+  return null;
+}
+
+/** Runs test/support/python/<script> with `input` as JSON on stdin; returns its JSON stdout. */
+export function runPythonScript<T>(script: string, input: unknown): T {
+  const path = fileURLToPath(new URL(`./python/${script}`, import.meta.url));
+  const run = spawnSync(PYTHON, [path], {
+    input: JSON.stringify(input),
+    encoding: "utf8",
+    maxBuffer: 64 << 20,
+  });
+  if (run.error) throw run.error;
+  if (run.status !== 0) throw new Error(`${script} failed (exit ${run.status}):\n${run.stderr}`);
+  return JSON.parse(run.stdout) as T;
+}

@@ -92,7 +92,10 @@ describe("parseDenseMatrixText: labels", () => {
   });
 
   it("reads quoted labels holding commas and quotes (RFC 4180 §2.6 and §2.7)", () => {
-    const { graph } = parseDenseMatrixText('"",  "x, left","say ""hi"""\n"x, left",0,1\n"say ""hi""",1,0\n', "m.csv");
+    const { graph } = parseDenseMatrixText(
+      '"",  "x, left","say ""hi"""\n"x, left",0,1\n"say ""hi""",1,0\n',
+      "m.csv",
+    );
     expect(graph.labels).toEqual(["x, left", 'say "hi"']);
   });
 
@@ -105,7 +108,10 @@ describe("parseDenseMatrixText: labels", () => {
   });
 
   it("uses the labels option when the file has none", () => {
-    expect(parseDenseMatrixText("0,1\n1,0\n", "m.csv", { labels: ["p", "q"] }).graph.labels).toEqual(["p", "q"]);
+    expect(parseDenseMatrixText("0,1\n1,0\n", "m.csv", { labels: ["p", "q"] }).graph.labels).toEqual([
+      "p",
+      "q",
+    ]);
   });
 });
 
@@ -128,7 +134,9 @@ describe("parseDenseMatrixText: errors name the file, line and cell", () => {
   });
 
   it("NaN and infinity off the diagonal", () => {
-    expect(failure("0,1\nNaN,0\n").message).toBe('m.csv:2:1: "NaN" is not a finite weight; leave the cell empty for "no edge"');
+    expect(failure("0,1\nNaN,0\n").message).toBe(
+      'm.csv:2:1: "NaN" is not a finite weight; leave the cell empty for "no edge"',
+    );
     expect(failure("0,-Infinity\n1,0\n").problem).toBe("not-finite");
     expect(failure("0,-Infinity\n1,0\n").column).toBe(2);
   });
@@ -139,7 +147,9 @@ describe("parseDenseMatrixText: errors name the file, line and cell", () => {
 
   it("non-square matrices, both ways", () => {
     expect(failure("0,1,2\n1,0,3\n").message).toBe("m.csv:2: matrix is not square: 2 rows but 3 columns");
-    expect(failure("0,1\n1,0\n2,3\n").message).toBe("m.csv:3: matrix is not square: more than 2 rows for 2 columns");
+    expect(failure("0,1\n1,0\n2,3\n").message).toBe(
+      "m.csv:3: matrix is not square: more than 2 rows for 2 columns",
+    );
   });
 
   it("asymmetric matrix read as undirected names both cells", () => {
@@ -151,7 +161,9 @@ describe("parseDenseMatrixText: errors name the file, line and cell", () => {
   });
 
   it("asymmetric with a missing side says 'no edge'", () => {
-    expect(failure("0,1\n,0\n").reason).toMatch(/^matrix is not symmetric: 1 here but no edge at line 2, column 1;/);
+    expect(failure("0,1\n,0\n").reason).toMatch(
+      /^matrix is not symmetric: 1 here but no edge at line 2, column 1;/,
+    );
   });
 
   it("negative weight without a policy", () => {
@@ -166,14 +178,22 @@ describe("parseDenseMatrixText: errors name the file, line and cell", () => {
     expect(failure(",a,b\na,0,1\nc,1,0\n").message).toBe(
       'm.csv:3:1: row label "c" differs from column label "b" at line 1, column 3; rows and columns must list the nodes in the same order',
     );
-    expect(failure("a,a\n0,1\n1,0\n").message).toBe('m.csv:1:2: node label "a" appears twice; first at line 1, column 1');
-    expect(failure(",a,b,c\na,0,1\nb,1,0\n").message).toBe("m.csv:1: label row has 4 cells but the matrix has 2 columns");
-    expect(failure("0,1\n1,0\n", { labels: ["p"] }).message).toBe("m.csv: 1 labels given for a 2-node matrix");
+    expect(failure("a,a\n0,1\n1,0\n").message).toBe(
+      'm.csv:1:2: node label "a" appears twice; first at line 1, column 1',
+    );
+    expect(failure(",a,b,c\na,0,1\nb,1,0\n").message).toBe(
+      "m.csv:1: label row has 4 cells but the matrix has 2 columns",
+    );
+    expect(failure("0,1\n1,0\n", { labels: ["p"] }).message).toBe(
+      "m.csv: 1 labels given for a 2-node matrix",
+    );
   });
 
   it("bad quoting", () => {
     expect(failure('0,"1\n1,0\n').message).toBe("m.csv:1:2: quoted cell is never closed");
-    expect(failure('0,"1"x\n1,0\n').message).toBe('m.csv:1:2: unexpected "x" after the closing quote of a cell');
+    expect(failure('0,"1"x\n1,0\n').message).toBe(
+      'm.csv:1:2: unexpected "x" after the closing quote of a cell',
+    );
   });
 
   it("refuses a matrix above the cell limit before allocating it", () => {

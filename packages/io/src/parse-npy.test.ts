@@ -1,0 +1,197 @@
+import { describe, expect, it } from "vitest";
+import { encodeNpy } from "./encode-npy.js";
+import { InputFileError } from "./input-file-error.js";
+import { npyToGraphs } from "./npy-graphs.js";
+import { npyValues, parseNpy } from "./parse-npy.js";
+import type { GraphReadOptions } from "./read-options.js";
+
+/**
+ * Builds .npy bytes by hand, following the NumPy format specification (NEP 1): magic "\x93NUMPY",
+ * major and minor version bytes, header length (uint16 LE for 1.0, uint32 LE for 2.0/3.0), the header
+ * dictionary text ending in "\n", then the raw data.
+ */
+function npyBytes(header: string, data: ArrayLike<number>, major = 1): Uint8Array {
+  const lengthBytes = major === 1 ? 2 : 4;
+  const headerBytes = new TextEncoder().encode(`${header}\n`);
+  const out = new Uint8Array(8 + lengthBytes + headerBytes.length + data.length);
+  out.set([0x93, 0x4e, 0x55, 0x4d, 0x50, 0x59, major, 0]);
+  const view = new DataView(out.buffer);
+  if (major === 1) view.setUint16(8, headerBytes.length, true);
+  else view.setUint32(8, headerBytes.length, true);
+  out.set(headerBytes, 8 + lengthBytes);
+  out.set(Array.from(data), 8 + lengthBytes + headerBytes.length);
+  return out;
+}
+
+function failure(bytes: Uint8Array, options: GraphReadOptions = {}): InputFileError {
+  try {
+    npyToGraphs(parseNpy(bytes, "a.npy"), "a.npy", options);
+  } catch (error) {
+    if (error instanceof InputFileError) return error;
+    throw error;
+  }
+  throw new Error("expected an InputFileError");
+}
+
+const HEADER_2x2_U1 = "{'descr': '|u1', 'fortran_order': False, 'shape': (2, 2), }";
+
+describe("parseNpy: hand-built files per the format specification", () => {
+  it("reads versions 1.0, 2.0 and 3.0 (3.0 with a UTF-8 header)", () => {
+    for (const major of [1, 2, 3]) {
+      const array = parseNpy(npyBytes(HEADER_2x2_U1, [0, 7, 7, 0], major), "a.npy");
+      expect(array.version).toBe(`${major}.0`);
+      expect(Array.from(npyValues(array))).toEqual([0, 7, 7, 0]);
+    }
+  });
+
+  it("reads a big-endian int16 in Fortran order element by element", () => {
+    // Fortran order stores column by column: a[0,0], a[1,0], a[0,1], a[1,1] (NEP 1, 'fortran_order').
+    const header = "{'descr': '>i2', 'fortran_order': True, 'shape': (2, 2), }";
+    const data = [0, 1, 0xff, 0xfe, 0x01, 0x00, 0, 4]; // 1, -2, 256, 4 big-endian
+    expect(Array.from(npyValues(parseNpy(npyBytes(header, data), "a.npy")))).toEqual([1, 256, -2, 4]);
+  });
+
+  it("accepts Python 2 era headers with long integers and double quotes", () => {
+    const header = '{"descr": "|b1", "fortran_order": False, "shape": (2L, 2L)}';
+    expect(parseNpy(npyBytes(header, [0, 1, 1, 0]), "a.npy").shape).toEqual([2, 2]);
+  });
+});
+
+describe("parseNpy: errors", () => {
+  it("empty file", () => {
+    expect(failure(new Uint8Array(0)).message).toBe("a.npy: file is empty (0 bytes)");
+  });
+
+  it("bad magic, with the offending byte", () => {
+    const bytes = npyBytes(HEADER_2x2_U1, [0, 1, 1, 0]);
+    bytes[3] = 0x58;
+    expect(failure(bytes).message).toBe(
+      'a.npy: byte 3: not a .npy file: it does not start with "\\x93NUMPY"',
+    );
+    expect(failure(new TextEncoder().encode("0,1\n1,0\n")).problem).toBe("bad-npy");
+  });
+
+  it("unknown version", () => {
+    expect(failure(npyBytes(HEADER_2x2_U1, [0, 1, 1, 0], 4)).message).toBe(
+      "a.npy: byte 6: unsupported .npy format version 4.0 (this reader knows 1.0, 2.0 and 3.0)",
+    );
+  });
+
+  it("malformed header dictionary, with the byte where parsing stopped", () => {
+    // The dictionary is never closed: parsing stops at the end of the 58-byte header, byte 10 + 58 = 68.
+    const error = failure(npyBytes("{'descr': '<f8', 'fortran_order': False, 'shape': (2, 2) ", []));
+    expect(error.message).toBe(
+      'a.npy: byte 68: header is not a valid dictionary: expected "}" but found the end of the header',
+    );
+    expect(failure(npyBytes("{'descr': '<f8', 'shape': (2, 2)}", [])).reason).toBe(
+      "header has no 'fortran_order' True/False",
+    );
+    expect(failure(npyBytes("{'descr': '<f8', 'fortran_order': False, 'shape': (2, -1)}", [])).reason).toBe(
+      "header 'shape' is not a tuple of non-negative integers",
+    );
+  });
+
+  it("unsupported dtypes: complex, float16, strings, structured", () => {
+    for (const descr of ["<c16", "<f2", "<U8", "|S3", "<M8"]) {
+      const error = failure(
+        npyBytes(`{'descr': '${descr}', 'fortran_order': False, 'shape': (1, 1), }`, [0]),
+      );
+      expect(error.problem).toBe("unsupported-dtype");
+      expect(error.reason).toMatch(new RegExp(`^unsupported dtype "${descr}"; supported: float32, float64,`));
+    }
+    const structured = "{'descr': [('a', '<f8')], 'fortran_order': False, 'shape': (1,), }";
+    expect(failure(npyBytes(structured, [])).reason).toBe("structured (record) arrays are not supported");
+  });
+
+  it("truncated in the magic, in the header and in the data", () => {
+    const whole = encodeNpy([0, 1, 1, 0], [2, 2]);
+    expect(failure(whole.subarray(0, 4)).message).toBe(
+      "a.npy: file is truncated: 4 bytes, inside the .npy magic string",
+    );
+    expect(failure(whole.subarray(0, 40)).message).toBe(
+      "a.npy: byte 8: file is truncated: the header claims 118 bytes, ending at byte 128, but the file has 40",
+    );
+    expect(failure(whole.subarray(0, whole.length - 1)).message).toBe(
+      "a.npy: byte 159: file is truncated: shape (2, 2) of <f8 needs 32 bytes of data after byte 128, but only 31 are there",
+    );
+  });
+
+  it("refuses a forged huge shape before allocating anything", () => {
+    const error = failure(
+      npyBytes("{'descr': '<f8', 'fortran_order': False, 'shape': (100000000000, 100000000000), }", []),
+    );
+    expect(error.problem).toBe("too-large");
+    expect(error.reason).toBe(
+      "header shape (100000000000, 100000000000) describes more data than any file can hold",
+    );
+    const big = failure(
+      npyBytes("{'descr': '<f8', 'fortran_order': False, 'shape': (100000, 100000), }", []),
+    );
+    expect(big.problem).toBe("truncated");
+  });
+});
+
+describe("npyToGraphs", () => {
+  it("one graph from (n, n), k graphs from (k, n, n)", () => {
+    const stack = [0, 1, 1, 0, 0, 2, 2, 0, 0, 0, 0, 0];
+    const { graphs } = npyToGraphs(parseNpy(encodeNpy(stack, [3, 2, 2]), "s.npy"), "s.npy");
+    expect(graphs.map((g) => Array.from(g.weights))).toEqual([[1, 1], [2, 2], []]);
+  });
+
+  it("bool arrays: true is an edge of weight 1, false is none even for distances", () => {
+    const bytes = npyBytes(
+      "{'descr': '|b1', 'fortran_order': False, 'shape': (3, 3), }",
+      [1, 1, 0, 1, 1, 1, 0, 1, 1],
+    );
+    const { graphs } = npyToGraphs(parseNpy(bytes, "b.npy"), "b.npy", { semantics: "distance" });
+    expect(Array.from(graphs[0].targets)).toEqual([1, 0, 2, 1]);
+    expect(Array.from(graphs[0].weights)).toEqual([1, 1, 1, 1]);
+  });
+
+  it("shape errors", () => {
+    expect(failure(encodeNpy([1, 2, 3], [3])).message).toBe(
+      "a.npy: array of shape (3,) is neither a matrix (n, n) nor a stack of matrices (k, n, n)",
+    );
+    expect(failure(encodeNpy([1, 2, 3, 4, 5, 6], [2, 3])).message).toBe(
+      "a.npy: matrices of shape (2, 3) are not square",
+    );
+  });
+
+  it("NaN off the diagonal is an error naming the element and its byte; the diagonal is ignored", () => {
+    const error = failure(encodeNpy([Number.NaN, 1, Number.NaN, 0], [2, 2]));
+    expect(error.message).toBe(
+      'a.npy: element (1, 0) at byte 144: NaN is not a finite weight (set nanIsNoEdge to read NaN as "no edge")',
+    );
+    const { graphs } = npyToGraphs(
+      parseNpy(encodeNpy([Number.NaN, 1, Number.NaN, 0], [2, 2]), "a.npy"),
+      "a.npy",
+      {
+        nanIsNoEdge: true,
+        symmetrize: "max",
+      },
+    );
+    expect(Array.from(graphs[0].weights)).toEqual([1, 1]);
+  });
+
+  it("infinity, negative and asymmetric entries in a stack name the element", () => {
+    expect(failure(encodeNpy([0, Number.POSITIVE_INFINITY, 1, 0], [2, 2])).message).toBe(
+      "a.npy: element (0, 1) at byte 136: weight Infinity is not a finite number",
+    );
+    const stack = [0, 1, 1, 0, 0, -3, -3, 0];
+    expect(failure(encodeNpy(stack, [2, 2, 2])).message).toBe(
+      "a.npy: element (1, 0, 1) at byte 168: negative weight -3; choose a negative-weight policy (abs, drop or keep) to accept it",
+    );
+    expect(failure(encodeNpy([0, 1, 1, 0, 0, 2, 5, 0], [2, 2, 2])).message).toBe(
+      "a.npy: element (1, 0, 1) at byte 168: matrix is not symmetric: 2 here but 5 at element (1, 1, 0); read it as directed or choose a symmetrize policy (max, min, mean)",
+    );
+  });
+
+  it("warns about bytes after the data", () => {
+    const bytes = encodeNpy([0, 1, 1, 0], [2, 2]);
+    const padded = new Uint8Array(bytes.length + 3);
+    padded.set(bytes);
+    expect(npyToGraphs(parseNpy(padded, "a.npy"), "a.npy").warnings).toEqual([
+      "a.npy: ignored 3 bytes after the array data",
+    ]);
+  });
+});

@@ -22,3 +22,10 @@ export {
   gridFiltrationValues,
 } from "./filtration/threshold-grid.js";
 export type { ThresholdGrid } from "./filtration/threshold-grid.js";
+
+export { countSimplices } from "./count/count-simplices.js";
+export type { CountSimplicesOptions } from "./count/count-simplices.js";
+export { sweepSimplexCounts } from "./count/sweep-simplex-counts.js";
+export { SimplexBudgetError } from "./count/simplex-budget-error.js";
+export { DEFAULT_SIMPLEX_BUDGET } from "./count/defaults.js";
+export type { CountOptions, NodeParticipation, SimplexCounts, SweepCounts } from "./count/types.js";

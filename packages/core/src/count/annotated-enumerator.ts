@@ -1,0 +1,353 @@
+import { checkLocalSize } from "./bitset-counter.js";
+import type { EnumerationGraph } from "./enumeration-graph.js";
+import { SimplexBudgetError } from "./simplex-budget-error.js";
+
+/**
+ * Simplex enumeration that also records, per simplex, its threshold bin and (optionally) which nodes and
+ * edges it contains. Same local universes and bit rows as the plain counter; in addition every candidate
+ * carries the largest bin of its edges to the current simplex (`carried`), updated for the members of
+ * each new candidate set, so a simplex's bin costs O(1).
+ *
+ * Participation uses subtrees: a simplex's vertices are the vertices added along its path from the root,
+ * so the vertex added at node t lies in exactly the simplices of t's subtree, and so does each edge from
+ * an earlier path vertex to it. Per internal node we snapshot the per-dimension totals and credit the
+ * difference on return; per leaf we credit 1. Nothing is allocated per simplex.
+ */
+
+export interface AnnotateOptions {
+  maxDim: number;
+  budget: number;
+  /** Bin per input CSR slot (all listed edges have bin ≥ 0), or null for a single bin. */
+  bins: Int32Array | null;
+  binCount: number;
+  participation: boolean;
+  edgeParticipation: boolean;
+  /** Total CSR slots of the input graph (edge participation rows). */
+  slotCount: number;
+  /** Undirected edge participation: the twin slot of each slot. */
+  reverse: Int32Array | null;
+}
+
+export interface AnnotatedResult {
+  /** hist[k][b] = number of k-simplices entering at bin b. */
+  hist: Float64Array[];
+  truncated: boolean;
+  member?: Float64Array[];
+  source?: Float64Array[];
+  sink?: Float64Array[];
+  edges?: Float64Array[];
+}
+
+let loc = new Uint32Array(0);
+let stack = new Uint32Array(0);
+let lbin = new Int32Array(0); // bin of the edge between local vertices i, j at i*D + j
+let lslot = new Int32Array(0); // input slot of that edge
+let rootBin = new Int32Array(0);
+let rootSlot = new Int32Array(0);
+let carried = new Int32Array(0); // carried[level*D + c]
+let path = new Int32Array(0);
+let run = new Float64Array(0); // simplices counted per dimension
+let hist = new Float64Array(0); // flat [dim*G + bin]
+let snaps = new Float64Array(0);
+let sp = 0;
+let W = 1;
+let D = 1;
+let G = 1;
+let undirected = true;
+let capDim = 0;
+let truncated = false;
+let produced = 0;
+let budget = 0;
+let progress = 0;
+let withBins = false;
+let credit = false; // any participation
+let creditNodes = false;
+let creditEdges = false;
+let directedRoles = false;
+let listBase = 0;
+let gTargets: Int32Array = new Int32Array(0);
+let vertexOf: Int32Array = new Int32Array(0);
+let reverse: Int32Array | null = null;
+let nVertices = 0;
+let slotCount = 0;
+let member: Float64Array[] = [];
+let source: Float64Array[] = [];
+let sink: Float64Array[] = [];
+let edges: Float64Array[] = [];
+
+export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): AnnotatedResult {
+  const { n, offsets, targets, slots, maxList } = g;
+  const dmax = Math.max(maxList, 1);
+  const wmax = (dmax + 31) >>> 5;
+  checkLocalSize(dmax, wmax);
+  capDim = Math.min(o.maxDim, dmax + 1);
+  const levels = Math.min(dmax, capDim) + 3;
+  withBins = o.bins !== null;
+  creditNodes = o.participation;
+  creditEdges = o.edgeParticipation;
+  credit = creditNodes || creditEdges;
+  directedRoles = creditNodes && g.directed;
+  if ((withBins || creditEdges) && dmax * dmax > 2 ** 28) {
+    throw new RangeError(`a local universe of ${dmax} vertices is too large for per-edge annotations`);
+  }
+  loc = new Uint32Array(dmax * wmax);
+  stack = new Uint32Array(levels * wmax);
+  lbin = withBins ? new Int32Array(dmax * dmax) : new Int32Array(0);
+  lslot = creditEdges ? new Int32Array(dmax * dmax) : new Int32Array(0);
+  rootBin = new Int32Array(dmax);
+  rootSlot = new Int32Array(dmax);
+  carried = withBins ? new Int32Array(levels * dmax) : new Int32Array(0);
+  path = new Int32Array(levels + 1);
+  G = withBins ? o.binCount : 1;
+  run = new Float64Array(capDim + 2);
+  hist = new Float64Array((capDim + 2) * G);
+  snaps = new Float64Array(credit ? 4 * (dmax + 2) : 0);
+  sp = 0;
+  undirected = !g.directed;
+  truncated = false;
+  budget = o.budget;
+  produced = n;
+  progress = 0;
+  gTargets = targets;
+  vertexOf = g.vertexOf;
+  reverse = o.reverse;
+  nVertices = n;
+  slotCount = o.slotCount;
+  member = [];
+  source = [];
+  sink = [];
+  edges = [];
+  if (credit) ensureRows(Math.min(1, capDim));
+  if (creditNodes) {
+    member[0].fill(1);
+    if (directedRoles) {
+      source[0].fill(1);
+      sink[0].fill(1);
+    }
+  }
+  hist[0] = n;
+  run[0] = n;
+  if (produced > budget) fail();
+  if (capDim < 1) {
+    truncated = offsets[n] > 0;
+    return finish();
+  }
+
+  const bins = o.bins;
+  const mark = new Int32Array(n).fill(-1);
+  for (let v = 0; v < n; v++) {
+    const a = offsets[v];
+    const d = offsets[v + 1] - a;
+    if (d === 0) continue;
+    W = (d + 31) >>> 5;
+    D = d;
+    listBase = a;
+    for (let i = 0; i < d; i++) {
+      mark[targets[a + i]] = i;
+      if (withBins) rootBin[i] = bins![slots[a + i]];
+      rootSlot[i] = slots[a + i];
+    }
+    loc.fill(0, 0, d * W);
+    for (let i = 0; i < d; i++) {
+      const u = targets[a + i];
+      const row = i * W;
+      for (let s = offsets[u]; s < offsets[u + 1]; s++) {
+        const j = mark[targets[s]];
+        if (j < 0) continue;
+        loc[row + (j >>> 5)] |= 1 << (j & 31);
+        if (withBins) lbin[i * d + j] = bins![slots[s]];
+        if (creditEdges) lslot[i * d + j] = slots[s];
+      }
+    }
+    for (let i = 0; i < d; i++) mark[targets[a + i]] = -1;
+    progress = v / n;
+    for (let k = 0; k < W; k++) stack[k] = 0;
+    for (let i = 0; i < d; i++) {
+      stack[i >>> 5] |= 1 << (i & 31);
+      if (withBins) carried[i] = rootBin[i];
+    }
+    const root = vertexOf[v];
+    if (credit) {
+      const hi = Math.min(capDim, d);
+      ensureRows(hi);
+      const base = push(1, hi);
+      grow(0, 0, 0);
+      if (creditNodes) {
+        for (let k = 1; k <= hi; k++) {
+          const diff = run[k] - snaps[base + k - 1];
+          member[k][root] += diff;
+          if (directedRoles) source[k][root] += diff;
+        }
+      }
+      sp = base;
+    } else {
+      grow(0, 0, 0);
+    }
+  }
+  return finish();
+}
+
+/** Extends simplex path[0..level] (entering at bin `simplexBin`) by each candidate in stack[at..). */
+function grow(level: number, at: number, simplexBin: number): void {
+  const dim = level + 1;
+  const deeper = dim + 1 <= capDim;
+  const next = at + W;
+  const cRow = level * D;
+  const nRow = cRow + D;
+  const histRow = dim * G;
+  let made = 0;
+  for (let w = 0; w < W; w++) {
+    let bits = stack[at + w] | 0;
+    while (bits !== 0) {
+      const low = bits & -bits;
+      bits ^= low;
+      const i = (w << 5) + 31 - Math.clz32(low);
+      let b = simplexBin;
+      if (withBins) {
+        const ci = carried[cRow + i];
+        if (ci > b) b = ci;
+      }
+      hist[histRow + b]++;
+      made++;
+      if (directedRoles) sink[dim][vertexOf[gTargets[listBase + i]]]++;
+      const row = i * W;
+      let c = 0;
+      const k0 = undirected ? w : 0;
+      for (let k = 0; k < k0; k++) stack[next + k] = 0;
+      for (let k = k0; k < W; k++) {
+        const x = stack[at + k] & loc[row + k];
+        stack[next + k] = x;
+        c |= x;
+      }
+      if (c !== 0 && !deeper) {
+        truncated = true;
+        c = 0;
+      }
+      if (c === 0) {
+        if (credit) creditLeaf(dim, i);
+        continue;
+      }
+      path[dim] = i;
+      let size = 0;
+      for (let k = k0; k < W; k++) {
+        let y = stack[next + k] | 0;
+        while (y !== 0) {
+          const ly = y & -y;
+          y ^= ly;
+          size++;
+          if (withBins) {
+            const j = (k << 5) + 31 - Math.clz32(ly);
+            const e = lbin[i * D + j];
+            const cj = carried[cRow + j];
+            carried[nRow + j] = Math.max(e, cj);
+          }
+        }
+      }
+      if (credit) {
+        const hi = Math.min(capDim, dim + size);
+        ensureRows(hi);
+        const base = push(dim + 1, hi);
+        grow(level + 1, next, b);
+        creditSubtree(dim, i, hi, base);
+        sp = base;
+      } else {
+        grow(level + 1, next, b);
+      }
+    }
+  }
+  run[dim] += made;
+  produced += made;
+  if (produced > budget) fail();
+}
+
+/** Saves run[lo..hi] on the snapshot stack; returns where it starts. */
+function push(lo: number, hi: number): number {
+  const base = sp;
+  const need = base + hi - lo + 1;
+  if (need > snaps.length) {
+    const bigger = new Float64Array(Math.max(need, 2 * snaps.length));
+    bigger.set(snaps.subarray(0, base));
+    snaps = bigger;
+  }
+  for (let k = lo; k <= hi; k++) snaps[sp++] = run[k];
+  return base;
+}
+
+function creditLeaf(dim: number, i: number): void {
+  if (creditNodes) member[dim][vertexOf[gTargets[listBase + i]]]++;
+  if (creditEdges) {
+    const row = edges[dim];
+    for (let a = 0; a < dim; a++) {
+      const s = a === 0 ? rootSlot[i] : lslot[path[a] * D + i];
+      row[s]++;
+      if (reverse !== null) row[reverse[s]]++;
+    }
+  }
+}
+
+/** Credits the simplices of the subtree of node (dim, i): 1 at dim, run[k] − snapshot above. */
+function creditSubtree(dim: number, i: number, hi: number, base: number): void {
+  if (creditNodes) {
+    const v = vertexOf[gTargets[listBase + i]];
+    member[dim][v]++;
+    for (let k = dim + 1; k <= hi; k++) member[k][v] += run[k] - snaps[base + k - dim - 1];
+  }
+  if (creditEdges) {
+    for (let a = 0; a < dim; a++) {
+      const s = a === 0 ? rootSlot[i] : lslot[path[a] * D + i];
+      const t = reverse === null ? -1 : reverse[s];
+      edges[dim][s]++;
+      if (t >= 0) edges[dim][t]++;
+      for (let k = dim + 1; k <= hi; k++) {
+        const diff = run[k] - snaps[base + k - dim - 1];
+        edges[k][s] += diff;
+        if (t >= 0) edges[k][t] += diff;
+      }
+    }
+  }
+}
+
+function ensureRows(k: number): void {
+  if (creditNodes) {
+    while (member.length <= k) {
+      member.push(new Float64Array(nVertices));
+      if (directedRoles) {
+        source.push(new Float64Array(nVertices));
+        sink.push(new Float64Array(nVertices));
+      }
+    }
+  }
+  if (creditEdges) while (edges.length <= k) edges.push(new Float64Array(slotCount));
+}
+
+function topDim(): number {
+  let top = run.length - 1;
+  while (top > 0 && run[top] === 0) top--;
+  return nVertices === 0 ? -1 : top;
+}
+
+function finish(): AnnotatedResult {
+  const top = topDim();
+  const rows: Float64Array[] = [];
+  for (let k = 0; k <= top; k++) rows.push(hist.slice(k * G, (k + 1) * G));
+  const result: AnnotatedResult = { hist: rows, truncated };
+  const cut = (a: Float64Array[], size: number) => {
+    const out = a.slice(0, top + 1);
+    while (out.length < top + 1) out.push(new Float64Array(size));
+    return out;
+  };
+  if (creditNodes) {
+    result.member = cut(member, nVertices);
+    if (directedRoles) {
+      result.source = cut(source, nVertices);
+      result.sink = cut(sink, nVertices);
+    }
+  }
+  if (creditEdges) result.edges = cut(edges, slotCount);
+  return result;
+}
+
+function fail(): never {
+  const top = Math.max(topDim(), 0);
+  throw new SimplexBudgetError(budget, run.slice(0, top + 1), progress);
+}

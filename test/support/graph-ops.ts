@@ -52,3 +52,35 @@ export function significant(counts: ArrayLike<number>): number[] {
   while (out.length > 0 && out[out.length - 1] === 0) out.pop();
   return out;
 }
+
+/**
+ * Degeneracy of the underlying undirected graph (largest minimum degree over subgraphs), by repeatedly
+ * removing a vertex of minimum degree (D. W. Matula and L. L. Beck, J. ACM 30(3), 1983). Quadratic;
+ * for test-sized graphs only.
+ */
+export function degeneracy(graph: WeightedGraph): number {
+  const neighbours = Array.from({ length: graph.n }, () => new Set<number>());
+  for (let u = 0; u < graph.n; u++) {
+    for (let s = graph.offsets[u]; s < graph.offsets[u + 1]; s++) {
+      neighbours[u].add(graph.targets[s]);
+      neighbours[graph.targets[s]].add(u);
+    }
+  }
+  const alive = new Set(neighbours.keys());
+  let result = 0;
+  while (alive.size > 0) {
+    let v = -1;
+    for (const u of alive) if (v < 0 || neighbours[u].size < neighbours[v].size) v = u;
+    result = Math.max(result, neighbours[v].size);
+    for (const u of neighbours[v]) neighbours[u].delete(v);
+    alive.delete(v);
+  }
+  return result;
+}
+
+/** Largest out-degree (directed) or degree (undirected). */
+export function maxOutDegree(graph: WeightedGraph): number {
+  let max = 0;
+  for (let u = 0; u < graph.n; u++) max = Math.max(max, graph.offsets[u + 1] - graph.offsets[u]);
+  return max;
+}

@@ -28,11 +28,20 @@ export function explicitGrid(values: ArrayLike<number>, semantics: WeightSemanti
 }
 
 /** `count` evenly spaced thresholds from `first` to `last` inclusive (either order). */
-export function evenGrid(first: number, last: number, count: number, semantics: WeightSemantics): ThresholdGrid {
-  if (!Number.isInteger(count) || count < 1) throw new RangeError(`grid size must be a positive integer, got ${count}`);
+export function evenGrid(
+  first: number,
+  last: number,
+  count: number,
+  semantics: WeightSemantics,
+): ThresholdGrid {
+  if (!Number.isInteger(count) || count < 1)
+    throw new RangeError(`grid size must be a positive integer, got ${count}`);
   if (!Number.isFinite(first) || !Number.isFinite(last)) throw new RangeError("grid ends must be finite");
   const values = new Float64Array(count);
-  for (let i = 0; i < count; i++) values[i] = count === 1 ? last : first + ((last - first) * i) / (count - 1);
+  for (let i = 0; i < count; i++) values[i] = first + ((last - first) * i) / Math.max(1, count - 1);
+  // Pin the ends exactly: rounding must not leave the last edge just outside the grid.
+  values[0] = count === 1 ? last : first;
+  values[count - 1] = last;
   return explicitGrid(values, semantics);
 }
 

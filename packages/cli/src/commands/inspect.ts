@@ -1,0 +1,127 @@
+import { countSimplices, density, possibleEdgeCount } from "@cliquescape/core";
+import { Command } from "commander";
+import { loadGraph } from "../load-graph.js";
+import { addComplexOptions, complexOptionsOf } from "../options/complex-options.js";
+import { addGraphOptions, graphOptionsOf } from "../options/graph-options.js";
+import { addOutputOptions, type OutputFormat } from "../options/output-options.js";
+import { addSingleThresholdOptions, gridOf, thresholdChoiceOf } from "../options/threshold-options.js";
+import { csvDocument } from "../render/csv.js";
+import { formatCount, formatWeight } from "../render/format-number.js";
+import { keyValueLines, textTable } from "../render/text-table.js";
+
+/** The JSON object `inspect --format json` prints. Stable: later versions only add fields. */
+export interface InspectReport {
+  file: string;
+  directed: boolean;
+  weights: "distance" | "similarity";
+  /** Threshold in weight units; null when every edge is kept. */
+  threshold: number | null;
+  nodes: number;
+  edges: number;
+  density: number;
+  /** counts[k] = number of k-simplices. */
+  counts: number[];
+  euler: number;
+  /** True when --top-dim hid simplices of higher dimension (then euler is a partial sum). */
+  truncated: boolean;
+}
+
+export function inspectCommand(): Command {
+  const command = new Command("inspect")
+    .summary("one graph at one threshold: size, simplex counts, Euler characteristic")
+    .description(
+      "Reads one graph, keeps the edges present at the threshold (all edges if none is given) and counts the\n" +
+        "simplices of its clique complex (undirected) or directed flag complex (--directed), per dimension.",
+    )
+    .argument("<file>", "graph file: dense matrix (.csv .tsv .txt), edge list (.csv with a header) or .npy");
+  addGraphOptions(command);
+  addSingleThresholdOptions(command);
+  addComplexOptions(command);
+  addOutputOptions(command);
+  command.addHelpText(
+    "after",
+    `
+Examples:
+  cliquescape inspect demo-data/graphs/ring-01.csv
+  cliquescape inspect subject07.csv --threshold 0.4 --top-dim 3
+  cliquescape inspect net.npy --directed --density 0.1 --format json`,
+  );
+  command.action((file: string, raw: Record<string, unknown>) => {
+    const graphOptions = graphOptionsOf(raw);
+    const choice = thresholdChoiceOf(raw);
+    const { graph } = loadGraph(file, graphOptions);
+    const limits = complexOptionsOf(raw);
+    const thresholded = choice.threshold !== undefined || choice.density !== undefined;
+    const threshold = thresholded ? gridOf(graph, graphOptions.weights, choice).thresholds[0] : undefined;
+    const result = countSimplices(graph, {
+      threshold,
+      semantics: graphOptions.weights,
+      maxDim: limits.topDim,
+      budget: limits.budget,
+    });
+    const counts = Array.from(result.counts);
+    const edges = counts[1] ?? 0;
+    const possible = possibleEdgeCount(graph.n, graph.directed);
+    const report: InspectReport = {
+      file,
+      directed: graph.directed,
+      weights: graphOptions.weights,
+      threshold: threshold ?? null,
+      nodes: graph.n,
+      edges,
+      density: threshold === undefined ? density(graph) : possible === 0 ? 0 : edges / possible,
+      counts,
+      euler: result.euler,
+      truncated: result.truncated,
+    };
+    process.stdout.write(renderInspect(report, raw.format as OutputFormat));
+  });
+  return command;
+}
+
+export function renderInspect(report: InspectReport, format: OutputFormat): string {
+  if (format === "json") return `${JSON.stringify(report, null, 2)}\n`;
+  const dims = report.counts.map((_, k) => k);
+  if (format === "csv") {
+    return csvDocument(
+      [
+        "file",
+        "threshold",
+        "nodes",
+        "edges",
+        "density",
+        ...dims.map((k) => `simplices_${k}`),
+        "euler",
+        "truncated",
+      ],
+      [
+        [
+          report.file,
+          report.threshold ?? "",
+          report.nodes,
+          report.edges,
+          report.density,
+          ...report.counts,
+          report.euler,
+          String(report.truncated),
+        ],
+      ],
+    );
+  }
+  const kind = report.directed ? "directed flag complex" : "clique complex";
+  const keep =
+    report.threshold === null
+      ? "all edges"
+      : `${report.weights === "similarity" ? "w ≥" : "w ≤"} ${formatWeight(report.threshold)}`;
+  const summary = keyValueLines([
+    ["graph", `${report.file}  (${report.nodes} nodes, ${report.directed ? "directed" : "undirected"})`],
+    ["kept", `${keep}  (${report.weights} weights)`],
+    ["edges", `${formatCount(report.edges)}  (density ${report.density.toFixed(4)})`],
+    ["euler", `${report.euler}${report.truncated ? "  (partial: --top-dim hid higher simplices)" : ""}`],
+  ]);
+  const table = textTable(
+    ["dim", kind === "clique complex" ? "simplices" : "directed simplices"],
+    dims.map((k) => [String(k), formatCount(report.counts[k])]),
+  );
+  return `${summary}\n\n${table}\n`;
+}

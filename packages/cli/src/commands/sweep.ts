@@ -1,0 +1,102 @@
+import { possibleEdgeCount, sweepSimplexCounts } from "@cliquescape/core";
+import { Command } from "commander";
+import { loadGraph } from "../load-graph.js";
+import { addComplexOptions, complexOptionsOf } from "../options/complex-options.js";
+import { addGraphOptions, graphOptionsOf } from "../options/graph-options.js";
+import { addOutputOptions, type OutputFormat } from "../options/output-options.js";
+import { addGridOptions, gridOf, thresholdChoiceOf } from "../options/threshold-options.js";
+import { csvDocument } from "../render/csv.js";
+import { formatCount, formatWeight } from "../render/format-number.js";
+import { textTable } from "../render/text-table.js";
+
+/** The JSON object `sweep --format json` prints. Stable: later versions only add fields. */
+export interface SweepReport {
+  file: string;
+  directed: boolean;
+  weights: "distance" | "similarity";
+  nodes: number;
+  /** Thresholds in weight units, in the order edges enter. */
+  thresholds: number[];
+  /** counts[t][k] = number of k-simplices at thresholds[t]. */
+  counts: number[][];
+  euler: number[];
+  /** Edge density at each threshold. */
+  density: number[];
+  truncated: boolean;
+}
+
+const DEFAULT_STEPS = 20;
+
+export function sweepCommand(): Command {
+  const command = new Command("sweep")
+    .summary("simplex counts and Euler characteristic across a grid of thresholds")
+    .description(
+      "Counts the simplices of one graph's complex at every threshold of a grid in a single enumeration.\n" +
+        `Default grid: ${DEFAULT_STEPS} evenly spaced weights from the first edge to enter to the last.`,
+    )
+    .argument("<file>", "graph file: dense matrix (.csv .tsv .txt), edge list (.csv with a header) or .npy");
+  addGraphOptions(command);
+  addGridOptions(command);
+  addComplexOptions(command);
+  addOutputOptions(command);
+  command.addHelpText(
+    "after",
+    `
+Examples:
+  cliquescape sweep demo-data/graphs/ring-01.csv --top-dim 3
+  cliquescape sweep subject07.csv --density 0.05,0.1,0.15,0.2 --format csv > s07-sweep.csv
+  cliquescape sweep distances.tsv --weights distance --range 0:2.5 --steps 50 --format json`,
+  );
+  command.action((file: string, raw: Record<string, unknown>) => {
+    const graphOptions = graphOptionsOf(raw);
+    const { graph } = loadGraph(file, graphOptions);
+    const grid = gridOf(graph, graphOptions.weights, thresholdChoiceOf(raw), DEFAULT_STEPS);
+    const limits = complexOptionsOf(raw);
+    const result = sweepSimplexCounts(graph, grid, { maxDim: limits.topDim, budget: limits.budget });
+    const possible = possibleEdgeCount(graph.n, graph.directed);
+    const counts = result.counts.map((row) => Array.from(row));
+    const report: SweepReport = {
+      file,
+      directed: graph.directed,
+      weights: graphOptions.weights,
+      nodes: graph.n,
+      thresholds: Array.from(result.thresholds),
+      counts,
+      euler: Array.from(result.euler),
+      density: counts.map((row) => (possible === 0 ? 0 : (row[1] ?? 0) / possible)),
+      truncated: result.truncated,
+    };
+    process.stdout.write(renderSweep(report, raw.format as OutputFormat));
+  });
+  return command;
+}
+
+export function renderSweep(report: SweepReport, format: OutputFormat): string {
+  if (format === "json") return `${JSON.stringify(report)}\n`;
+  const top = Math.max(0, ...report.counts.map((row) => row.length - 1));
+  const dims = Array.from({ length: top + 1 }, (_, k) => k);
+  const cell = (row: number[], k: number) => row[k] ?? 0;
+  if (format === "csv") {
+    return csvDocument(
+      ["threshold", "density", ...dims.map((k) => `simplices_${k}`), "euler"],
+      report.thresholds.map((t, i) => [
+        t,
+        report.density[i],
+        ...dims.map((k) => cell(report.counts[i], k)),
+        report.euler[i],
+      ]),
+    );
+  }
+  const relation = report.weights === "similarity" ? "w ≥" : "w ≤";
+  const table = textTable(
+    [relation, "density", ...dims.map((k) => `dim ${k}`), "euler"],
+    report.thresholds.map((t, i) => [
+      formatWeight(t),
+      report.density[i].toFixed(4),
+      ...dims.map((k) => formatCount(cell(report.counts[i], k))),
+      String(report.euler[i]),
+    ]),
+  );
+  const note = report.truncated ? "\n(euler is partial: --top-dim hid higher simplices)" : "";
+  return `${table}${note}\n`;
+}

@@ -1,0 +1,24 @@
+import { Command } from "commander";
+import { inspectCommand } from "./commands/inspect.js";
+import { sweepCommand } from "./commands/sweep.js";
+import { VERSION } from "./version.js";
+
+/** The cliquescape command line, without running it (tests build it too). */
+export function createProgram(): Command {
+  const program = new Command("cliquescape")
+    .description(
+      "Topology of weighted networks: clique and directed flag complexes across weight thresholds.",
+    )
+    .version(VERSION)
+    .showHelpAfterError("(run with --help for usage)")
+    .addCommand(inspectCommand())
+    .addCommand(sweepCommand());
+  program.addHelpText(
+    "after",
+    `
+Examples:
+  cliquescape inspect demo-data/graphs/ring-01.csv --threshold 0.5
+  cliquescape sweep demo-data/graphs/ring-01.csv --top-dim 3 --format csv`,
+  );
+  return program;
+}

@@ -5,7 +5,6 @@ import { join } from "node:path";
 import { fromDenseMatrix } from "@cliquescape/core";
 import { afterAll, describe, expect, it } from "vitest";
 import { encodeNpy } from "./encode-npy.js";
-import { npyToGraphs } from "./npy-graphs.js";
 import { npyValues, parseNpy } from "./parse-npy.js";
 import { readGraphFile } from "./read-graph-file.js";
 
@@ -28,7 +27,7 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 // Writes one file per case with numpy and prints, for each, the values as numpy sees them in C order
 // (json uses Python's float repr, which round-trips float64 exactly) and the shape.
-const WRITER = String.raw`
+const WRITER = `
 import json, sys, numpy as np
 from numpy.lib import format as npformat
 d = sys.argv[1]
@@ -106,7 +105,7 @@ describe.skipIf(!hasNumpy)(".npy files written by numpy", () => {
   });
 
   it("our writer produces byte-for-byte what np.save writes for float64, float32 and int64", () => {
-    const script = String.raw`
+    const script = `
 import sys, numpy as np
 d = sys.argv[1]
 a = np.arange(12, dtype=np.float64).reshape(3, 4) / 8 - 0.5
@@ -128,7 +127,7 @@ np.save(f"{d}/ref_1d.npy", np.arange(3, dtype=np.float64))
     const values = [0.1, -2.5, 1e-300, 3.4e38, 7, 0];
     writeFileSync(join(dir, "ours.npy"), encodeNpy(values, [2, 3]));
     writeFileSync(join(dir, "ours_i8.npy"), encodeNpy([-(2 ** 53) + 1, 5], [2], "int64"));
-    const script = String.raw`
+    const script = `
 import sys, json, numpy as np
 d = sys.argv[1]
 a = np.load(f"{d}/ours.npy")

@@ -18,7 +18,7 @@ export interface GraphFileOptions
     Omit<EdgeListTextOptions, "labels" | "maxCells"> {
   /**
    * Default: .npy is NumPy; .csv, .tsv and .txt are an edge list when the first data line is a header naming
-   * a source and a target column, else a dense matrix.
+   * a source and a target column (and neither labelRow nor labelColumn is set), else a dense matrix.
    */
   format?: GraphFileFormat;
 }
@@ -66,6 +66,8 @@ function guessTextFormat(
   delimiter: DenseMatrixTextOptions["delimiter"] & {},
   options: GraphFileOptions,
 ): GraphFileFormat {
+  // Saying where the labels are only makes sense for a matrix.
+  if (options.labelRow !== undefined || options.labelColumn !== undefined) return "dense-matrix";
   const first = textRows(text, delimiter, file).next();
   return !first.done && looksLikeEdgeListHeader(first.value.cells, options) ? "edge-list" : "dense-matrix";
 }

@@ -9,9 +9,12 @@ export interface TextRow {
   cells: string[];
 }
 
-/** Blank lines and lines whose first non-blank character is # carry no data. */
-function isSkipped(lineText: string): boolean {
-  const trimmed = lineText.trim();
+/**
+ * Blank lines and lines whose first non-blank character is # carry no data. In a TSV file a tab is a
+ * delimiter, not blank: a line of tabs is a row of empty cells (a node without edges).
+ */
+function isSkipped(lineText: string, delimiter: Delimiter): boolean {
+  const trimmed = delimiter === "\t" ? lineText.replace(/^ +| +$/g, "") : lineText.trim();
   return trimmed === "" || trimmed.startsWith("#");
 }
 
@@ -25,7 +28,7 @@ export function detectDelimiter(text: string): Delimiter {
     let end = text.indexOf("\n", pos);
     if (end < 0) end = text.length;
     const lineText = text.slice(pos, end);
-    if (!isSkipped(lineText)) {
+    if (!isSkipped(lineText, "whitespace")) {
       if (lineText.includes("\t")) return "\t";
       if (lineText.includes(",")) return ",";
       if (lineText.includes(";")) return ";";
@@ -50,7 +53,7 @@ export function* textRows(text: string, delimiter: Delimiter, file: string): Gen
     if (end < 0) end = text.length;
     let lineText = text.slice(pos, end);
     if (lineText.endsWith("\r")) lineText = lineText.slice(0, -1);
-    if (isSkipped(lineText)) {
+    if (isSkipped(lineText, delimiter)) {
       pos = end + 1;
       line++;
       continue;

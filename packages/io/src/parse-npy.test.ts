@@ -186,6 +186,19 @@ describe("npyToGraphs", () => {
     );
   });
 
+  it("warns when 64-bit integers lose precision as float64", () => {
+    // 2^60 + 1 needs 61 significant bits; a float64 holds 53 (IEEE 754 binary64).
+    const data = new Uint8Array(32);
+    new DataView(data.buffer).setBigInt64(8, 2n ** 60n + 1n, true);
+    new DataView(data.buffer).setBigInt64(16, 2n ** 60n + 1n, true);
+    const bytes = npyBytes("{'descr': '<i8', 'fortran_order': False, 'shape': (2, 2), }", data);
+    const { graphs, warnings } = npyToGraphs(parseNpy(bytes, "a.npy"), "a.npy");
+    expect(Array.from(graphs[0].weights)).toEqual([2 ** 60, 2 ** 60]);
+    expect(warnings).toEqual([
+      "a.npy: 2 64-bit integer weights exceed 2^53 and were rounded to the nearest float64",
+    ]);
+  });
+
   it("warns about bytes after the data", () => {
     const bytes = encodeNpy([0, 1, 1, 0], [2, 2]);
     const padded = new Uint8Array(bytes.length + 3);

@@ -53,6 +53,12 @@ describe("readGraphFile: choosing the reader", () => {
     expect(readNpyFile(path).shape).toEqual([2, 2, 2]);
   });
 
+  it("takes labels as the node list of an edge list", () => {
+    const path = file("nodes.csv", "source,target\nc,a\n");
+    expect(readGraphFile(path, { labels: ["a", "b", "c"] }).graphs[0].labels).toEqual(["a", "b", "c"]);
+    expect(failure(path, { labels: ["a", "b"] }).reason).toBe('unknown node "c": not in the node list');
+  });
+
   it("follows an explicit format over the extension", () => {
     const path = file("graph.dat", "a b 1\nb c 2\n");
     const result = readGraphFile(path, { format: "edge-list", header: false });

@@ -48,9 +48,10 @@ export function readGraphFile(path: string, options: GraphFileOptions = {}): Gra
   const delimiter = options.delimiter ?? (extension === ".tsv" ? "\t" : detectDelimiter(text));
   const textFormat = format === "text" ? guessTextFormat(text, path, delimiter, options) : format;
   const withDelimiter = { ...options, delimiter };
+  // For an edge list, `labels` is the node list: the one way to say which names exist and in what order.
   const { graph, warnings } =
     textFormat === "edge-list"
-      ? parseEdgeListText(text, path, withDelimiter)
+      ? parseEdgeListText(text, path, { ...withDelimiter, nodes: options.nodes ?? options.labels })
       : parseDenseMatrixText(text, path, withDelimiter);
   return { format: textFormat, graphs: [graph], warnings };
 }

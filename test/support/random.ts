@@ -2,7 +2,8 @@
  * A small seeded pseudo-random generator for reproducible test graphs.
  *
  * xoshiro128** (D. Blackman and S. Vigna, "Scrambled linear pseudorandom number generators", ACM TOMS
- * 47(4), 2021), its 128-bit state filled from the seed by splitmix32 as its authors recommend. Tests need
+ * 47(4), 2021). Its 128-bit state is filled from the seed by a SplitMix-style mixer (golden-ratio
+ * increment, then MurmurHash3's 32-bit finaliser), so nearby seeds give unrelated streams. Tests need
  * repeatable, well-mixed bits, not cryptographic strength.
  */
 export type Random = () => number;
@@ -10,17 +11,17 @@ export type Random = () => number;
 /** A generator of floats in [0, 1) fully determined by `seed`. */
 export function seededRandom(seed: number): Random {
   let mix = seed >>> 0;
-  const splitmix32 = (): number => {
+  const mixSeed = (): number => {
     mix = (mix + 0x9e3779b9) >>> 0;
     let z = mix;
     z = Math.imul(z ^ (z >>> 16), 0x85ebca6b);
     z = Math.imul(z ^ (z >>> 13), 0xc2b2ae35);
     return (z ^ (z >>> 16)) >>> 0;
   };
-  let a = splitmix32();
-  let b = splitmix32();
-  let c = splitmix32();
-  let d = splitmix32();
+  let a = mixSeed();
+  let b = mixSeed();
+  let c = mixSeed();
+  let d = mixSeed();
   return () => {
     const result = Math.imul(rotl(Math.imul(b, 5), 7), 9) >>> 0;
     const t = b << 9;

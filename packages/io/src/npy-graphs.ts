@@ -7,6 +7,7 @@ import { DEFAULT_MAX_CELLS, type GraphReadOptions, zeroIsEdge } from "./read-opt
 /** Graphs read from one file: one for a matrix, k for a stack. */
 export interface GraphsReadResult {
   graphs: WeightedGraph[];
+  /** Notes for the user, without the file name; a stack's notes start "graph g of the stack: " (0-based g). */
   warnings: string[];
 }
 
@@ -50,7 +51,7 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
   const view = new DataView(array.bytes.buffer, array.bytes.byteOffset, array.bytes.byteLength);
   const warnings: string[] = [];
   if (array.trailingBytes > 0) {
-    warnings.push(`${file}: ignored ${array.trailingBytes} bytes after the array data`);
+    warnings.push(`ignored ${array.trailingBytes} bytes after the array data`);
   }
   let rounded = 0;
   const graphs: WeightedGraph[] = [];
@@ -81,7 +82,7 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
         values[i * n + j] = w;
       }
     }
-    const where = stacked ? `${file}[${g}]` : file;
+    const where = stacked ? `graph ${g} of the stack: ` : "";
     try {
       graphs.push(
         fromDenseMatrix(n, values, {
@@ -89,7 +90,7 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
           symmetrize: options.symmetrize,
           negative: options.negative,
           labels: options.labels,
-          onWarning: (message) => warnings.push(`${where}: ${message}`),
+          onWarning: (message) => warnings.push(`${where}${message}`),
         }),
       );
     } catch (error) {
@@ -112,9 +113,7 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
     }
   }
   if (rounded > 0) {
-    warnings.push(
-      `${file}: ${rounded} 64-bit integer weights exceed 2^53 and were rounded to the nearest float64`,
-    );
+    warnings.push(`${rounded} 64-bit integer weights exceed 2^53 and were rounded to the nearest float64`);
   }
   return { graphs, warnings };
 }

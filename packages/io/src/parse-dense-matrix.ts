@@ -16,6 +16,7 @@ export interface DenseMatrixTextOptions extends GraphReadOptions {
 /** One graph read from a file, with the notes about what was fixed on the way. */
 export interface GraphReadResult {
   graph: WeightedGraph;
+  /** Notes for the user, without the file name (the caller knows which file it read). */
   warnings: string[];
 }
 
@@ -132,7 +133,7 @@ export function parseDenseMatrixText(
       symmetrize: options.symmetrize,
       negative: options.negative,
       labels,
-      onWarning: (message) => warnings.push(`${file}: ${message}`),
+      onWarning: (message) => warnings.push(message),
     });
     return { graph, warnings };
   } catch (error) {

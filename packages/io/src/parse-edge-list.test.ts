@@ -50,7 +50,7 @@ describe("parseEdgeListText", () => {
     const { edges, warnings } = read("from,to,corr\na,b,0.3\n");
     expect(edges).toEqual(["a-b:1"]);
     expect(warnings).toEqual([
-      'e.csv: no weight column recognised among "corr"; every edge gets weight 1 (name one with weightColumn)',
+      'no weight column recognised among "corr"; every edge gets weight 1 (name one with weightColumn)',
     ]);
     expect(read("from,to,weight\na,b,0.3\n", { weightColumn: null }).edges).toEqual(["a-b:1"]);
   });
@@ -70,7 +70,7 @@ describe("parseEdgeListText", () => {
     const text = "source,target,weight\na,b,0\nb,c,2\n";
     const similarity = read(text);
     expect(similarity.edges).toEqual(["b-c:2"]);
-    expect(similarity.warnings[0]).toMatch(/^e\.csv: left out 1 edge of weight 0/);
+    expect(similarity.warnings[0]).toMatch(/^left out 1 edge of weight 0/);
     expect(read(text, { semantics: "distance" }).edges).toEqual(["a-b:0", "b-c:2"]);
   });
 
@@ -83,7 +83,7 @@ describe("parseEdgeListText", () => {
   it("drops self-loops with a warning from the core", () => {
     expect(read("source,target\na,a\na,b\n")).toMatchObject({
       edges: ["a-b:1"],
-      warnings: ["e.csv: dropped 1 self-loop"],
+      warnings: ["dropped 1 self-loop"],
     });
   });
 });

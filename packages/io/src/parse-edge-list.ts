@@ -40,7 +40,7 @@ export function parseEdgeListText(
   let widthLine: number;
   if (options.header ?? true) {
     const found = findEdgeColumns(next.value.cells, options, file, next.value.line);
-    if (found.warning) warnings.push(`${file}: ${found.warning}`);
+    if (found.warning) warnings.push(found.warning);
     columns = found.columns;
     width = next.value.cells.length;
     widthLine = next.value.line;
@@ -140,7 +140,7 @@ export function parseEdgeListText(
   }
   if (zeros > 0) {
     warnings.push(
-      `${file}: left out ${zeros} edge${zeros === 1 ? "" : "s"} of weight 0 (0 means "no edge" for similarity-like weights; set zeroIsEdge to keep them)`,
+      `left out ${zeros} edge${zeros === 1 ? "" : "s"} of weight 0 (0 means "no edge" for similarity-like weights; set zeroIsEdge to keep them)`,
     );
   }
 
@@ -154,7 +154,7 @@ export function parseEdgeListText(
       directed,
       labels: names,
       negative: options.negative,
-      onWarning: (message) => warnings.push(`${file}: ${message}`),
+      onWarning: (message) => warnings.push(message),
     });
     return { graph, warnings };
   } catch (error) {

@@ -195,7 +195,7 @@ describe("npyToGraphs", () => {
     const { graphs, warnings } = npyToGraphs(parseNpy(bytes, "a.npy"), "a.npy");
     expect(Array.from(graphs[0].weights)).toEqual([2 ** 60, 2 ** 60]);
     expect(warnings).toEqual([
-      "a.npy: 2 64-bit integer weights exceed 2^53 and were rounded to the nearest float64",
+      "2 64-bit integer weights exceed 2^53 and were rounded to the nearest float64",
     ]);
   });
 
@@ -204,7 +204,7 @@ describe("npyToGraphs", () => {
     const padded = new Uint8Array(bytes.length + 3);
     padded.set(bytes);
     expect(npyToGraphs(parseNpy(padded, "a.npy"), "a.npy").warnings).toEqual([
-      "a.npy: ignored 3 bytes after the array data",
+      "ignored 3 bytes after the array data",
     ]);
   });
 });

@@ -12,7 +12,9 @@ import {
   type WeightSemantics,
 } from "@cliquescape/core";
 import { describe, expect, it } from "vitest";
-import { significant } from "../support/graph-ops.js";
+import { factorial } from "../support/combinatorics.js";
+import { degeneracy, significant } from "../support/graph-ops.js";
+import { symmetricDigraph } from "../support/known-graphs.js";
 import { missingPythonModules, runPythonScript } from "../support/python.js";
 
 interface Reference {
@@ -31,20 +33,23 @@ const missing = missingPythonModules(["networkx"]);
 const suite = missing ? describe.skip : describe;
 const skipNote = missing ? ` (skipped: ${missing})` : "";
 
-function fetchReference(spec: GraphSpec, thresholds: Float64Array, semantics: WeightSemantics) {
-  const reference = runPythonScript<Reference>("clique_counts.py", {
-    ...spec,
-    thresholds: Array.from(thresholds),
-    semantics,
-  });
-  const graph: WeightedGraph = fromEdgeList({
+function graphOfReference(reference: Reference): WeightedGraph {
+  return fromEdgeList({
     n: reference.n,
     directed: reference.directed,
     sources: reference.edges.map((e) => e[0]),
     targets: reference.edges.map((e) => e[1]),
     weights: reference.edges.map((e) => e[2]),
   });
-  return { reference, graph };
+}
+
+function fetchReference(spec: GraphSpec, thresholds: Float64Array, semantics: WeightSemantics) {
+  const reference = runPythonScript<Reference>("clique_counts.py", {
+    ...spec,
+    thresholds: Array.from(thresholds),
+    semantics,
+  });
+  return { reference, graph: graphOfReference(reference) };
 }
 
 /** Compares our counts with networkx's, with all edges and at each threshold (sweep and one-off). */
@@ -78,15 +83,24 @@ suite(`counts agree with networkx${skipNote}`, () => {
   });
 
   it.each([
-    { n: 30, p: 0.3, seed: 11 },
-    { n: 24, p: 0.6, seed: 12 },
+    { n: 30, p: 0.3, seed: 11, minDegeneracy: 0 },
+    { n: 24, p: 0.6, seed: 12, minDegeneracy: 0 },
+    // Degeneracy above 32: forward neighbour lists no longer fit one 32-bit word.
+    { n: 150, p: 0.35, seed: 31, minDegeneracy: 33 },
   ])("networkx.gnp_random_graph($n, $p, seed=$seed), undirected, distance thresholds with ties", (g) => {
+    const { n, p, seed } = g;
     const reference = checkAgainstNetworkx(
-      { graph: "gnp", ...g, directed: false },
+      { graph: "gnp", n, p, seed, directed: false },
       [0.1, 0.25, 0.5, 0.63, 0.8, 1],
       "distance",
     );
     expect(reference.all.length).toBeGreaterThanOrEqual(4);
+    const graph = graphOfReference(reference);
+    expect(degeneracy(graph)).toBeGreaterThanOrEqual(g.minDegeneracy);
+    // The symmetric digraph (out-degrees = degrees, here up to ~70) has (k+1)! directed k-simplices per
+    // networkx k-clique (common practice).
+    const directed = significant(countSimplices(symmetricDigraph(graph)).counts);
+    expect(directed).toEqual(reference.all.map((c, k) => c * factorial(k + 1)));
   });
 
   it.each([

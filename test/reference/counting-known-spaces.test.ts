@@ -55,6 +55,26 @@ describe.each(SPACES)("$name", ({ surface, counts, euler }) => {
     expect(new Set(graphEdges.sources.map((u, e) => `${u}-${graphEdges.targets[e]}`))).toEqual(faceEdges);
   });
 
+  it("every triangle of the graph is a face and it has no K4 (by trying every triple and quadruple)", () => {
+    const adjacent = (u: number, v: number) => {
+      for (let s = graph.offsets[u]; s < graph.offsets[u + 1]; s++) if (graph.targets[s] === v) return true;
+      return false;
+    };
+    const triangles: number[][] = [];
+    let k4 = 0;
+    for (let a = 0; a < graph.n; a++) {
+      for (let b = a + 1; b < graph.n; b++) {
+        for (let c = b + 1; c < graph.n; c++) {
+          if (!(adjacent(a, b) && adjacent(a, c) && adjacent(b, c))) continue;
+          triangles.push([a, b, c]);
+          for (let d = c + 1; d < graph.n; d++) if (adjacent(a, d) && adjacent(b, d) && adjacent(c, d)) k4++;
+        }
+      }
+    }
+    expect(triangles).toEqual(sortedTriples(faces));
+    expect(k4).toBe(0);
+  });
+
   it.skipIf(missing)(
     `it is a flag complex: networkx finds exactly the faces as triangles and no K4${missing ? ` (skipped: ${missing})` : ""}`,
     () => {

@@ -1,4 +1,5 @@
 import { Command } from "commander";
+import { barcodeCommand } from "./commands/barcode.js";
 import { inspectCommand } from "./commands/inspect.js";
 import { sweepCommand } from "./commands/sweep.js";
 import { VERSION } from "./version.js";
@@ -12,7 +13,8 @@ export function createProgram(): Command {
     .version(VERSION)
     .showHelpAfterError("(run with --help for usage)")
     .addCommand(inspectCommand())
-    .addCommand(sweepCommand());
+    .addCommand(sweepCommand())
+    .addCommand(barcodeCommand());
   program.addHelpText(
     "after",
     `

@@ -1,5 +1,6 @@
 export type { WeightedGraph } from "./graph/weighted-graph.js";
 export { density, edgeCount, nodeLabel, possibleEdgeCount } from "./graph/weighted-graph.js";
+export { thresholdSubgraph } from "./graph/threshold-subgraph.js";
 export { GraphInputError } from "./graph/graph-input-error.js";
 export type { GraphInputLocation, GraphInputProblem } from "./graph/graph-input-error.js";
 export type { NegativePolicy, SymmetrizePolicy, WarningSink } from "./graph/policies.js";
@@ -29,3 +30,6 @@ export { sweepSimplexCounts } from "./count/sweep-simplex-counts.js";
 export { SimplexBudgetError } from "./count/simplex-budget-error.js";
 export { DEFAULT_SIMPLEX_BUDGET } from "./count/defaults.js";
 export type { CountOptions, NodeParticipation, SimplexCounts, SweepCounts } from "./count/types.js";
+
+export * from "./homology/index.js";
+export * from "./features/index.js";

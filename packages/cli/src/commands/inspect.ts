@@ -1,5 +1,13 @@
-import { countSimplices, density, possibleEdgeCount } from "@cliquescape/core";
+import {
+  allEdgesGrid,
+  bettiFromBarcode,
+  countSimplices,
+  density,
+  possibleEdgeCount,
+  thresholdSubgraph,
+} from "@cliquescape/core";
 import { Command } from "commander";
+import { barcodeWithinBudget } from "../barcode-within-budget.js";
 import { loadGraph } from "../load-graph.js";
 import { addComplexOptions, complexOptionsOf } from "../options/complex-options.js";
 import { addGraphOptions, graphOptionsOf } from "../options/graph-options.js";
@@ -24,6 +32,9 @@ export interface InspectReport {
   euler: number;
   /** True when --top-dim hid simplices of higher dimension (then euler is a partial sum). */
   truncated: boolean;
+  /** betti[k] = k-th Betti number over Z/prime, k = 0 .. top-dim − 1; null when not computed. */
+  betti: number[] | null;
+  prime: number;
 }
 
 export function inspectCommand(): Command {
@@ -60,6 +71,10 @@ Examples:
       budget: limits.budget,
     });
     const counts = Array.from(result.counts);
+    // Homology of the complex at the threshold only: the subgraph keeps the work to what is asked.
+    const kept = threshold === undefined ? graph : thresholdSubgraph(graph, threshold, graphOptions.weights);
+    const barcode = barcodeWithinBudget(kept, graphOptions.weights, limits);
+    const bettiThreshold = threshold ?? allEdgesGrid(graph, graphOptions.weights).thresholds[0];
     const edges = counts[1] ?? 0;
     const possible = possibleEdgeCount(graph.n, graph.directed);
     const report: InspectReport = {
@@ -73,6 +88,8 @@ Examples:
       counts,
       euler: result.euler,
       truncated: result.truncated,
+      betti: barcode && bettiFromBarcode(barcode, bettiThreshold),
+      prime: limits.prime,
     };
     process.stdout.write(renderInspect(report, raw.format as OutputFormat));
   });
@@ -82,6 +99,7 @@ Examples:
 export function renderInspect(report: InspectReport, format: OutputFormat): string {
   if (format === "json") return `${JSON.stringify(report, null, 2)}\n`;
   const dims = report.counts.map((_, k) => k);
+  const bettiDims = (report.betti ?? []).map((_, k) => k);
   if (format === "csv") {
     return csvDocument(
       [
@@ -93,6 +111,7 @@ export function renderInspect(report: InspectReport, format: OutputFormat): stri
         ...dims.map((k) => `simplices_${k}`),
         "euler",
         "truncated",
+        ...bettiDims.map((k) => `betti_${k}`),
       ],
       [
         [
@@ -104,6 +123,7 @@ export function renderInspect(report: InspectReport, format: OutputFormat): stri
           ...report.counts,
           report.euler,
           String(report.truncated),
+          ...(report.betti ?? []),
         ],
       ],
     );
@@ -119,9 +139,14 @@ export function renderInspect(report: InspectReport, format: OutputFormat): stri
     ["edges", `${formatCount(report.edges)}  (density ${report.density.toFixed(4)})`],
     ["euler", `${report.euler}${report.truncated ? "  (partial: --top-dim hid higher simplices)" : ""}`],
   ]);
+  const betti = report.betti;
   const table = textTable(
-    ["dim", kind === "clique complex" ? "simplices" : "directed simplices"],
-    dims.map((k) => [String(k), formatCount(report.counts[k])]),
+    ["dim", kind === "clique complex" ? "simplices" : "directed simplices", `betti (Z/${report.prime})`],
+    dims.map((k) => [
+      String(k),
+      formatCount(report.counts[k]),
+      betti && k < betti.length ? String(betti[k]) : "–",
+    ]),
   );
   return `${summary}\n\n${table}\n`;
 }

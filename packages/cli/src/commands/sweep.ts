@@ -1,5 +1,6 @@
-import { possibleEdgeCount, sweepSimplexCounts } from "@cliquescape/core";
+import { bettiCurves, possibleEdgeCount, sweepSimplexCounts } from "@cliquescape/core";
 import { Command } from "commander";
+import { barcodeWithinBudget } from "../barcode-within-budget.js";
 import { loadGraph } from "../load-graph.js";
 import { addComplexOptions, complexOptionsOf } from "../options/complex-options.js";
 import { addGraphOptions, graphOptionsOf } from "../options/graph-options.js";
@@ -23,6 +24,9 @@ export interface SweepReport {
   /** Edge density at each threshold. */
   density: number[];
   truncated: boolean;
+  /** betti[t][k] = k-th Betti number over Z/prime at thresholds[t], from the barcode; null when not computed. */
+  betti: number[][] | null;
+  prime: number;
 }
 
 const DEFAULT_STEPS = 20;
@@ -55,6 +59,7 @@ Examples:
     const result = sweepSimplexCounts(graph, grid, { maxDim: limits.topDim, budget: limits.budget });
     const possible = possibleEdgeCount(graph.n, graph.directed);
     const counts = result.counts.map((row) => Array.from(row));
+    const barcode = barcodeWithinBudget(graph, graphOptions.weights, limits);
     const report: SweepReport = {
       file,
       directed: graph.directed,
@@ -65,6 +70,8 @@ Examples:
       euler: Array.from(result.euler),
       density: counts.map((row) => (possible === 0 ? 0 : (row[1] ?? 0) / possible)),
       truncated: result.truncated,
+      betti: barcode && bettiCurves(barcode, grid).map((row) => Array.from(row)),
+      prime: limits.prime,
     };
     process.stdout.write(renderSweep(report, raw.format as OutputFormat));
   });
@@ -76,6 +83,8 @@ export function renderSweep(report: SweepReport, format: OutputFormat): string {
   const top = Math.max(0, ...report.counts.map((row) => row.length - 1));
   const dims = Array.from({ length: top + 1 }, (_, k) => k);
   const cell = (row: number[], k: number) => row[k] ?? 0;
+  const betti = report.betti;
+  const bettiDims = betti ? Array.from({ length: betti[0]?.length ?? 0 }, (_, k) => k) : [];
   if (format === "csv") {
     return csvDocument(
       ["threshold", "density", ...dims.map((k) => `simplices_${k}`), "euler"],
@@ -89,14 +98,19 @@ export function renderSweep(report: SweepReport, format: OutputFormat): string {
   }
   const relation = report.weights === "similarity" ? "w ≥" : "w ≤";
   const table = textTable(
-    [relation, "density", ...dims.map((k) => `dim ${k}`), "euler"],
+    [relation, "density", ...dims.map((k) => `dim ${k}`), "euler", ...bettiDims.map((k) => `β${k}`)],
     report.thresholds.map((t, i) => [
       formatWeight(t),
       report.density[i].toFixed(4),
       ...dims.map((k) => formatCount(cell(report.counts[i], k))),
       String(report.euler[i]),
+      ...bettiDims.map((k) => String(betti![i][k])),
     ]),
   );
-  const note = report.truncated ? "\n(euler is partial: --top-dim hid higher simplices)" : "";
+  const notes = [
+    `dim k: k-simplices${betti ? `; βk: Betti numbers over Z/${report.prime}` : ""}`,
+    ...(report.truncated ? ["euler is partial: --top-dim hid higher simplices"] : []),
+  ];
+  const note = `\n${notes.join("\n")}`;
   return `${table}${note}\n`;
 }

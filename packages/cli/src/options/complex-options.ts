@@ -1,26 +1,55 @@
 import { type Command, Option } from "commander";
-import { nonNegativeInteger } from "./graph-options.js";
+import { nonNegativeInteger, UsageError } from "./graph-options.js";
 
-/** Limits on the complex: how high to count and how much work to allow. */
+/** Homology goes up to this dimension unless --top-dim says otherwise (H0, H1, H2). */
+export const DEFAULT_HOMOLOGY_DIM = 2;
+
+/** Limits on the complex: how high to go, in which coefficients, and how much work and memory to allow. */
 export interface ComplexOptions {
   topDim?: number;
   budget?: number;
+  prime: number;
+  memoryBytes?: number;
 }
 
 export function addComplexOptions(command: Command): Command {
   return command
     .addOption(
-      new Option("--top-dim <k>", "highest simplex dimension to count (default: no cap)").argParser(
+      new Option(
+        "--top-dim <k>",
+        `highest simplex dimension; Betti numbers go to k-1 (default: counts uncapped, Betti to ${DEFAULT_HOMOLOGY_DIM})`,
+      ).argParser(nonNegativeInteger),
+    )
+    .addOption(new Option("--prime <p>", "homology coefficients in Z/p").argParser(prime).default(2))
+    .addOption(
+      new Option("--budget <n>", "stop after counting this many simplices (default: the core's)").argParser(
         nonNegativeInteger,
       ),
     )
     .addOption(
-      new Option("--budget <n>", "stop after counting this many simplices (default: the core's)").argParser(
+      new Option("--memory <MiB>", "memory the homology computation may hold (default 2048)").argParser(
         nonNegativeInteger,
       ),
     );
 }
 
 export function complexOptionsOf(raw: Record<string, unknown>): ComplexOptions {
-  return { topDim: raw.topDim as number | undefined, budget: raw.budget as number | undefined };
+  return {
+    topDim: raw.topDim as number | undefined,
+    budget: raw.budget as number | undefined,
+    prime: raw.prime as number,
+    memoryBytes: raw.memory === undefined ? undefined : (raw.memory as number) * 2 ** 20,
+  };
+}
+
+/** Highest homology dimension computed: one below the top simplex dimension (-1: none). */
+export function homologyDimOf(options: ComplexOptions): number {
+  return options.topDim === undefined ? DEFAULT_HOMOLOGY_DIM : options.topDim - 1;
+}
+
+function prime(text: string): number {
+  const p = nonNegativeInteger(text);
+  for (let d = 2; d * d <= p; d++) if (p % d === 0) throw new UsageError(`--prime ${p} is not a prime`);
+  if (p < 2) throw new UsageError(`--prime ${p} is not a prime`);
+  return p;
 }

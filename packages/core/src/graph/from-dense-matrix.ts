@@ -19,7 +19,11 @@ export interface DenseMatrixOptions {
  * Undirected: a_ij and a_ji must agree unless a symmetrise policy is chosen; a missing side counts as
  * "no edge", so `max` keeps the present weight, `min` drops the pair, `mean` averages the present values.
  */
-export function fromDenseMatrix(n: number, values: ArrayLike<number>, options: DenseMatrixOptions): WeightedGraph {
+export function fromDenseMatrix(
+  n: number,
+  values: ArrayLike<number>,
+  options: DenseMatrixOptions,
+): WeightedGraph {
   if (values.length !== n * n) {
     throw new GraphInputError("bad-shape", `expected ${n}×${n} = ${n * n} values, got ${values.length}`);
   }

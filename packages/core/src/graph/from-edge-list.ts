@@ -1,5 +1,5 @@
-import { GraphInputError } from "./graph-input-error.js";
 import { checkWeight } from "./check-weight.js";
+import { GraphInputError } from "./graph-input-error.js";
 import type { NegativePolicy, WarningSink } from "./policies.js";
 import type { WeightedGraph } from "./weighted-graph.js";
 

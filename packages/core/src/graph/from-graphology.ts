@@ -29,7 +29,9 @@ export function fromGraphology(
   const fallback = options.defaultWeight ?? 1;
   const labels = graph.nodes();
   const index = new Map<string, number>();
-  labels.forEach((key, i) => index.set(key, i));
+  labels.forEach((key, i) => {
+    index.set(key, i);
+  });
   const sources: number[] = [];
   const targets: number[] = [];
   const weights: number[] = [];

@@ -99,6 +99,15 @@ describe("parseDenseMatrixText: labels", () => {
     expect(graph.labels).toEqual(["x, left", 'say "hi"']);
   });
 
+  it("an empty corner cell means a label column, even of numbers", () => {
+    const text = ",1,2\n1,0,1\n2,1,0\n";
+    expect(parseDenseMatrixText(text, "m.csv", { labelRow: true }).graph.labels).toEqual(["1", "2"]);
+    // So row names that are numbers are compared with the column names instead of read as weights.
+    expect(failure(",a,b\n1,0,1\n2,1,0\n").reason).toBe(
+      'row label "1" differs from column label "a" at line 1, column 2; rows and columns must list the nodes in the same order',
+    );
+  });
+
   it("forces numeric labels with labelRow and labelColumn", () => {
     const text = ",10,20\n10,0,1\n20,1,0\n";
     expect(parseDenseMatrixText(text, "m.csv", { labelRow: true, labelColumn: true }).graph.labels).toEqual([

@@ -9,7 +9,10 @@ export interface DenseMatrixTextOptions extends GraphReadOptions {
   delimiter?: Delimiter;
   /** First data line holds node names. Default: detected (every cell after the first is non-numeric). */
   labelRow?: boolean;
-  /** First cell of each row holds a node name. Default: detected (first cell of the first row is non-numeric). */
+  /**
+   * First cell of each row holds a node name. Default: detected (the label row starts with an empty corner
+   * cell, or the first cell of the first matrix row is non-numeric).
+   */
   labelColumn?: boolean;
 }
 
@@ -45,8 +48,12 @@ export function parseDenseMatrixText(
     if (next.done) throw new InputFileError(file, "empty-file", "file has a label row but no matrix rows");
   }
   const first = next.value;
-  // An empty first cell is the diagonal of an unlabelled matrix, not a missing label.
-  const labelColumn = options.labelColumn ?? (first.cells[0] !== "" && !looksNumeric(first.cells[0]));
+  // An empty corner cell atop a label row stands above a label column, whatever the labels look like.
+  // Otherwise an empty first cell is the diagonal of an unlabelled matrix, not a missing label.
+  const labelColumn =
+    options.labelColumn ??
+    ((header !== undefined && header.cells[0] === "" && header.cells.length === first.cells.length) ||
+      (first.cells[0] !== "" && !looksNumeric(first.cells[0])));
   const skip = labelColumn ? 1 : 0;
   const width = first.cells.length;
   const n = width - skip;

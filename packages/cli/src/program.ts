@@ -19,8 +19,8 @@ export function createProgram(): Command {
     "after",
     `
 Examples:
-  cliquescape inspect demo-data/graphs/ring-01.csv --threshold 0.5
-  cliquescape sweep demo-data/graphs/ring-01.csv --top-dim 3 --format csv`,
+  cliquescape inspect demo-data/graphs/ring01u.csv --threshold 0.5
+  cliquescape sweep demo-data/graphs/ring01u.csv --top-dim 3 --format csv`,
   );
   return program;
 }

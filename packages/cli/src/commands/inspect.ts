@@ -53,7 +53,7 @@ export function inspectCommand(): Command {
     "after",
     `
 Examples:
-  cliquescape inspect demo-data/graphs/ring-01.csv
+  cliquescape inspect demo-data/graphs/ring01u.csv
   cliquescape inspect subject07.csv --threshold 0.4 --top-dim 3
   cliquescape inspect net.npy --directed --density 0.1 --format json`,
   );

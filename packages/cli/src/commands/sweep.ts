@@ -47,7 +47,7 @@ export function sweepCommand(): Command {
     "after",
     `
 Examples:
-  cliquescape sweep demo-data/graphs/ring-01.csv --top-dim 3
+  cliquescape sweep demo-data/graphs/ring01u.csv --top-dim 3
   cliquescape sweep subject07.csv --density 0.05,0.1,0.15,0.2 --format csv > s07-sweep.csv
   cliquescape sweep distances.tsv --weights distance --range 0:2.5 --steps 50 --format json`,
   );

@@ -37,8 +37,15 @@ export class InputFileError extends Error {
   readonly reason: string;
   readonly position: InputFilePosition;
 
-  constructor(file: string, problem: InputFileProblem, reason: string, position: InputFilePosition = {}) {
-    super(`${file}${formatPosition(position)}: ${reason}`);
+  /** `cause` keeps the underlying error (a core GraphInputError, a file-system error) for debugging. */
+  constructor(
+    file: string,
+    problem: InputFileProblem,
+    reason: string,
+    position: InputFilePosition = {},
+    options?: { cause?: unknown },
+  ) {
+    super(`${file}${formatPosition(position)}: ${reason}`, options);
     this.name = "InputFileError";
     this.file = file;
     this.problem = problem;

@@ -106,10 +106,11 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
           `matrix is not symmetric: ${describe(values[row * n + col])} here but ${describe(values[col * n + row])} ` +
             `at element (${indexOf(col, row).join(", ")}); read it as directed or choose a symmetrize policy (max, min, mean)`,
           position,
+          { cause: error },
         );
       }
       const problem = error.problem === "negative-weight" ? "negative-weight" : "not-finite";
-      throw new InputFileError(file, problem, error.message, position);
+      throw new InputFileError(file, problem, error.message, position, { cause: error });
     }
   }
   if (rounded > 0) {

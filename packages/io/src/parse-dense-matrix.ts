@@ -146,7 +146,8 @@ export function parseDenseMatrixText(
   } catch (error) {
     if (!(error instanceof GraphInputError)) throw error;
     const { row, col } = error.location;
-    if (row === undefined || col === undefined) throw new InputFileError(file, "not-square", error.message);
+    if (row === undefined || col === undefined)
+      throw new InputFileError(file, "not-square", error.message, {}, { cause: error });
     if (error.problem === "asymmetric") {
       const here = values[row * n + col];
       const there = values[col * n + row];
@@ -156,10 +157,11 @@ export function parseDenseMatrixText(
         `matrix is not symmetric: ${describeWeight(here)} here but ${describeWeight(there)} at ` +
           `${describePosition(cellAt(col, row))}; read it as directed or choose a symmetrize policy (max, min, mean)`,
         cellAt(row, col),
+        { cause: error },
       );
     }
     const problem = error.problem === "negative-weight" ? "negative-weight" : "not-finite";
-    throw new InputFileError(file, problem, error.message, cellAt(row, col));
+    throw new InputFileError(file, problem, error.message, cellAt(row, col), { cause: error });
   }
 }
 

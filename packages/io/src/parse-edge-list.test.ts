@@ -80,6 +80,17 @@ describe("parseEdgeListText", () => {
     expect(edges).toEqual(["a-b:1", "b-a:2"]);
   });
 
+  it("reads quoted node names holding the delimiter (RFC 4180 §2.6)", () => {
+    expect(read('source,target,weight\n"Smith, J.","Doe, A.",2\n').labels).toEqual(["Smith, J.", "Doe, A."]);
+  });
+
+  it("skips NaN-weighted rows when asked, keeping their nodes", () => {
+    expect(read("source,target,weight\na,b,nan\nb,c,1\n", { nanIsNoEdge: true })).toMatchObject({
+      labels: ["a", "b", "c"],
+      edges: ["b-c:1"],
+    });
+  });
+
   it("drops self-loops with a warning from the core", () => {
     expect(read("source,target\na,a\na,b\n")).toMatchObject({
       edges: ["a-b:1"],
@@ -135,7 +146,10 @@ describe("parseEdgeListText: errors", () => {
     );
   });
 
-  it("negative weight without a policy", () => {
+  it("negative weight without a policy, keeping the core's error as the cause", () => {
+    expect(failure("source,target,weight\na,b,1\nb,c,-2\n").cause).toMatchObject({
+      problem: "negative-weight",
+    });
     expect(failure("source,target,weight\na,b,1\nb,c,-2\n").message).toBe(
       "e.csv:3:3: negative weight -2; choose a negative-weight policy (abs, drop or keep) to accept it",
     );

@@ -169,9 +169,16 @@ export function parseEdgeListText(
         "duplicate-edge",
         `edge ${JSON.stringify(names[sources[e]])} ${arrow} ${JSON.stringify(names[targets[e]])} is listed twice: first on line ${first}, again on line ${lines[e]}`,
         at,
+        { cause: error },
       );
     }
     const column = columns.weight === undefined ? undefined : columns.weight + 1;
-    throw new InputFileError(file, "negative-weight", error.message, { line: lines[e], column });
+    throw new InputFileError(
+      file,
+      "negative-weight",
+      error.message,
+      { line: lines[e], column },
+      { cause: error },
+    );
   }
 }

@@ -11,7 +11,13 @@ export function readFileBytes(path: string, maxBytes: number): Uint8Array {
     size = stat.size;
   } catch (error) {
     if (error instanceof InputFileError) throw error;
-    throw new InputFileError(path, "unreadable", `cannot read file: ${(error as Error).message}`);
+    throw new InputFileError(
+      path,
+      "unreadable",
+      `cannot read file: ${(error as Error).message}`,
+      {},
+      { cause: error },
+    );
   }
   if (size > maxBytes) {
     throw new InputFileError(
@@ -23,7 +29,13 @@ export function readFileBytes(path: string, maxBytes: number): Uint8Array {
   try {
     return readFileSync(path);
   } catch (error) {
-    throw new InputFileError(path, "unreadable", `cannot read file: ${(error as Error).message}`);
+    throw new InputFileError(
+      path,
+      "unreadable",
+      `cannot read file: ${(error as Error).message}`,
+      {},
+      { cause: error },
+    );
   }
 }
 

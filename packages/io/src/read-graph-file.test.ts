@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
@@ -87,6 +87,12 @@ describe("readGraphFile: file-level errors", () => {
     const error = failure(join(dir, "nope.csv"));
     expect(error.problem).toBe("unreadable");
     expect(error.reason).toMatch(/^cannot read file: ENOENT/);
+  });
+
+  it("a directory", () => {
+    const sub = join(dir, "sub.csv");
+    mkdirSync(sub);
+    expect(failure(sub).message).toBe(`${sub}: not a regular file`);
   });
 
   it("empty files of each kind", () => {

@@ -1,0 +1,29 @@
+export { axisLabels } from "./axis-labels.js";
+export { type BarSummary, persistenceEntropy, summarizeBars } from "./bar-summary.js";
+export { type CurveSummary, summarizeCurve } from "./curve-summary.js";
+export { axisGrid, checkFeatureAxis, type FeatureAxis } from "./feature-axis.js";
+export {
+  checkFeatureConfig,
+  DEFAULT_FEATURE_CONFIG,
+  type FeatureConfig,
+  type FeatureFamilies,
+} from "./feature-config.js";
+export {
+  axisSuffixes,
+  BAR_STATISTICS,
+  CURVE_STATISTICS,
+  curveNames,
+  topologicalFeatureNames,
+} from "./feature-names.js";
+export {
+  edgeFeatureNames,
+  type NodeEdgeFeatureOptions,
+  type NodeEdgeFeatures,
+  nodeEdgeFeatures,
+  nodeFeatureNames,
+} from "./node-edge-features.js";
+export {
+  type TopologicalFeatureOptions,
+  type TopologicalFeatures,
+  topologicalFeatures,
+} from "./topological-features.js";

@@ -1,20 +1,26 @@
 /**
  * Runs Debian's python3 with general-purpose libraries (networkx, numpy) as an outside reference.
- * Tests that need a module skip, with the reason in their name, only when that module is missing.
+ * Tests that need a module skip, with the reason in their name, only when that module is missing — except
+ * under CI, which installs them: there a missing module is a failure, so a reference check never goes quiet.
  */
 import { spawnSync } from "node:child_process";
+import { existsSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 
-const PYTHON = process.env.PYTHON ?? "python3";
+// Debian's interpreter sees Debian's python3-* packages; a `python3` earlier on PATH (pyenv, venv) may not.
+export const PYTHON = process.env.PYTHON ?? (existsSync("/usr/bin/python3") ? "/usr/bin/python3" : "python3");
 
 /** null when every module imports, otherwise a message saying what is missing and how to get it. */
 export function missingPythonModules(modules: string[]): string | null {
   const probe = spawnSync(PYTHON, ["-c", modules.map((m) => `import ${m}`).join("; ")], { encoding: "utf8" });
-  if (probe.error) return `${PYTHON} not found (${probe.error.message})`;
-  if (probe.status !== 0) {
-    return `python module missing: ${modules.join(", ")} (apt-get install -y ${modules.map((m) => `python3-${m}`).join(" ")})`;
-  }
-  return null;
+  const missing = probe.error
+    ? `${PYTHON} not found (${probe.error.message})`
+    : probe.status !== 0
+      ? `python module missing: ${modules.join(", ")} (apt-get install -y ${modules.map((m) => `python3-${m}`).join(" ")})`
+      : null;
+  if (missing && process.env.CI)
+    throw new Error(`${missing}; .ci/run installs it, so this is a CI setup fault`);
+  return missing;
 }
 
 /** Runs test/support/python/<script> with `input` as JSON on stdin; returns its JSON stdout. */

@@ -8,8 +8,10 @@ export {
 } from "./edge-list-columns.js";
 export type { NpyWriteDtype } from "./encode-npy.js";
 export { encodeNpy } from "./encode-npy.js";
+export { graphFeatureNames, graphFeatures } from "./graph-features.js";
 export type { InputFilePosition, InputFileProblem } from "./input-file-error.js";
 export { describePosition, formatPosition, InputFileError } from "./input-file-error.js";
+export { networkStatisticNames, networkStatistics } from "./network-statistics.js";
 export type { NpyDtype } from "./npy-dtype.js";
 export { parseDescr, SUPPORTED_DTYPES } from "./npy-dtype.js";
 export type { GraphsReadResult } from "./npy-graphs.js";
@@ -34,4 +36,5 @@ export {
 } from "./read-options.js";
 export type { Delimiter, TextRow } from "./text-rows.js";
 export { detectDelimiter, textRows } from "./text-rows.js";
+export { type ToGraphologyOptions, toGraphology } from "./to-graphology.js";
 export { writeNpyFile } from "./write-npy-file.js";

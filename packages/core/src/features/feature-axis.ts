@@ -39,12 +39,16 @@ export function checkFeatureAxis(axis: FeatureAxis, semantics: WeightSemantics):
 /**
  * The weight thresholds at which one graph is read, one per axis value and in axis order. A weight axis
  * is used as it is. A density axis gets this graph's thresholds from proportional thresholding
- * (densityGrid), one density at a time so that two densities keeping the same edges still give two
- * entries: the grid may repeat a threshold, and the columns stay aligned with the axis.
+ * (densityGrid). densityGrid drops repeated thresholds; when two densities keep the same edges, each
+ * density is looked up on its own instead, so the grid repeats that threshold and the columns stay aligned
+ * with the axis.
  */
 export function axisGrid(graph: WeightedGraph, axis: FeatureAxis, semantics: WeightSemantics): ThresholdGrid {
   checkFeatureAxis(axis, semantics);
   if (axis.kind === "weight") return { semantics, thresholds: Float64Array.from(axis.values) };
+  // Ascending densities give thresholds in filtration order, so without repeats the grid is in axis order.
+  const together = densityGrid(graph, axis.values, semantics);
+  if (together.thresholds.length === axis.values.length) return together;
   const thresholds = Float64Array.from(axis.values, (d) => densityGrid(graph, [d], semantics).thresholds[0]);
   return { semantics, thresholds };
 }

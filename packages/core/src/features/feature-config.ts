@@ -16,12 +16,22 @@ export interface FeatureFamilies {
   readonly network: boolean;
 }
 
+/**
+ * Which filtration the barcode (and so the Betti curves and bar summaries) is taken of: "axis" stops at the
+ * axis's last threshold, the range the curves cover; "full" goes on until every edge is in. Betti curves on
+ * the axis are the same either way. With "axis", a class still alive at the axis end counts as essential.
+ * "full" can cost far more: a dense graph's complete complex has every tetrahedron of its nodes.
+ */
+export type BarcodeRange = "axis" | "full";
+
 export interface FeatureConfig {
   readonly families: FeatureFamilies;
   /** Simplices are counted up to this dimension; Betti numbers and bars cover dimensions 0..topDim−1. */
   readonly topDim: number;
   /** Coefficients Z/p of the homology. */
   readonly prime: number;
+  /** Filtration range of the barcode; default "axis". */
+  readonly barcodeRange?: BarcodeRange;
 }
 
 /** A first run: every family on, triangles of triangles (3-simplices) counted, H0..H2 over Z/2. */
@@ -36,6 +46,7 @@ export const DEFAULT_FEATURE_CONFIG: FeatureConfig = Object.freeze({
   }),
   topDim: 3,
   prime: 2,
+  barcodeRange: "axis",
 });
 
 /** Throws a RangeError naming the first setting that cannot be used. */
@@ -44,6 +55,9 @@ export function checkFeatureConfig(config: FeatureConfig): void {
   if (!Number.isInteger(topDim) || topDim < 1) {
     throw new RangeError(`topDim must be an integer ≥ 1 (edges at least), got ${topDim}`);
   }
+  const range = config.barcodeRange ?? "axis";
+  if (range !== "axis" && range !== "full")
+    throw new RangeError(`barcodeRange must be "axis" or "full", got "${range}"`);
   if (!isPrime(prime) || prime > MAX_PRIME) {
     throw new RangeError(`prime must be a prime between 2 and ${MAX_PRIME}, got ${prime}`);
   }

@@ -3,6 +3,7 @@ export { type BarSummary, persistenceEntropy, summarizeBars } from "./bar-summar
 export { type CurveSummary, summarizeCurve } from "./curve-summary.js";
 export { axisGrid, checkFeatureAxis, type FeatureAxis } from "./feature-axis.js";
 export {
+  type BarcodeRange,
   checkFeatureConfig,
   DEFAULT_FEATURE_CONFIG,
   type FeatureConfig,

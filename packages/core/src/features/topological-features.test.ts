@@ -162,6 +162,24 @@ describe("topologicalFeatures", () => {
     ]);
   });
 
+  it("takes the barcode up to the axis end by default: same Betti curves, later classes counted as essential", () => {
+    // The square's loop is born at 4 and filled at 5. An axis ending at 4 never sees it die.
+    const axis: FeatureAxis = { kind: "weight", values: [1, 2, 3, 4] };
+    const axisRange = row(square, DEFAULT_FEATURE_CONFIG, axis, "distance");
+    const fullRange = row(square, { ...DEFAULT_FEATURE_CONFIG, barcodeRange: "full" }, axis, "distance");
+    for (const w of axis.values) {
+      for (let k = 0; k < 3; k++)
+        expect(axisRange.get(`betti_d${k}_w${w}`)).toBe(fullRange.get(`betti_d${k}_w${w}`));
+    }
+    expect([axisRange.get("bars_d1_count"), axisRange.get("bars_d1_essential")]).toEqual([0, 1]);
+    expect([fullRange.get("bars_d1_count"), fullRange.get("bars_d1_essential")]).toEqual([1, 0]);
+    expect(fullRange.get("bars_d1_total_persistence")).toBe(1);
+    expect(axisRange.result.barcode?.bars.find((b) => b.dim === 1)).toMatchObject({ birth: 4, death: null });
+    expect(() =>
+      row(square, { ...DEFAULT_FEATURE_CONFIG, barcodeRange: "some" as "full" }, axis, "distance"),
+    ).toThrow(/barcodeRange/);
+  });
+
   it("gives the same curves for similarity weights read along a descending axis", () => {
     // Weights 6 − w enter in the same order under similarity semantics.
     const mirrored = fromEdgeList({
@@ -203,6 +221,7 @@ describe("topologicalFeatures", () => {
       const { get, result } = row(graph, config, axis, semantics);
       const grid = axisGrid(graph, axis, semantics);
       const sweep = sweepSimplexCounts(graph, grid, { maxDim: 3 });
+      // Betti curves of the full filtration's barcode: the features' barcode stops at the axis end.
       const betti = bettiCurves(computeBarcode(graph, { semantics, maxDim: 2 }), grid);
       axis.values.forEach((w, t) => {
         for (let k = 1; k <= 3; k++) expect(get(`simplices_d${k}_w${w}`)).toBe(sweep.counts[t][k] ?? 0);

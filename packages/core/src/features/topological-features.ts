@@ -2,6 +2,7 @@ import { sweepSimplexCounts } from "../count/sweep-simplex-counts.js";
 import type { SweepCounts } from "../count/types.js";
 import type { ThresholdGrid } from "../filtration/threshold-grid.js";
 import { toFiltrationValue, type WeightSemantics } from "../filtration/weight-semantics.js";
+import { thresholdSubgraph } from "../graph/threshold-subgraph.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
 import type { Barcode } from "../homology/barcode.js";
 import { bettiCurves } from "../homology/betti-curves.js";
@@ -28,7 +29,10 @@ export interface TopologicalFeatures {
   readonly values: Float64Array;
   /** The weight thresholds this graph was read at, one per axis value (density axes differ per graph). */
   readonly grid: ThresholdGrid;
-  /** The barcode behind Betti curves and bar summaries (dimensions 0..topDim−1), or null when not needed. */
+  /**
+   * The barcode behind Betti curves and bar summaries (dimensions 0..topDim−1), or null when not needed. With
+   * barcodeRange "axis" it is the barcode of the graph kept at the axis's last threshold.
+   */
   readonly barcode: Barcode | null;
   /**
    * True when the graph has simplices above topDim at the last threshold: counts up to topDim are still
@@ -56,14 +60,21 @@ export function topologicalFeatures(
   const sweep: SweepCounts | null = needsSweep(config)
     ? sweepSimplexCounts(graph, grid, { maxDim: topDim, budget: options.countBudget })
     : null;
-  const barcode = needsBarcode(config)
-    ? computeBarcode(graph, {
+  // The barcode of the filtration up to the axis end (thresholds are in filtration order) unless asked for
+  // the whole of it: dense graphs hold most of their simplices beyond the thresholds people read.
+  let barcode: Barcode | null = null;
+  if (needsBarcode(config)) {
+    const upToAxisEnd = (config.barcodeRange ?? "axis") === "axis";
+    barcode = computeBarcode(
+      upToAxisEnd ? thresholdSubgraph(graph, grid.thresholds[T - 1], semantics) : graph,
+      {
         semantics,
         maxDim: topDim - 1,
         prime: config.prime,
         budget: options.homologyBudget,
-      })
-    : null;
+      },
+    );
+  }
 
   // Curves as one row-major table [curve][t], in the order of curveNames(config).
   const curveCount = 2 * topDim + 1;

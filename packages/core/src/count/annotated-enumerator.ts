@@ -199,9 +199,9 @@ function grow(level: number, at: number, simplexBin: number): void {
   for (let w = 0; w < W; w++) {
     let bits = stack[at + w] | 0;
     while (bits !== 0) {
-      const low = bits & -bits;
-      bits ^= low;
-      const i = (w << 5) + 31 - Math.clz32(low);
+      const lowBit = 31 - Math.clz32(bits);
+      bits ^= 1 << lowBit;
+      const i = (w << 5) + lowBit;
       let b = simplexBin;
       if (withBins) {
         const ci = carried[cRow + i];
@@ -232,11 +232,11 @@ function grow(level: number, at: number, simplexBin: number): void {
       for (let k = k0; k < W; k++) {
         let y = stack[next + k] | 0;
         while (y !== 0) {
-          const ly = y & -y;
-          y ^= ly;
+          const lyBit = 31 - Math.clz32(y);
+          y ^= 1 << lyBit;
           size++;
           if (withBins) {
-            const j = (k << 5) + 31 - Math.clz32(ly);
+            const j = (k << 5) + lyBit;
             const e = lbin[i * D + j];
             const cj = carried[cRow + j];
             carried[nRow + j] = Math.max(e, cj);

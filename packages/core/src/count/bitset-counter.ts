@@ -12,16 +12,16 @@ import { SimplexBudgetError } from "./simplex-budget-error.js";
  * State lives in module variables so the recursive hot functions take only numbers.
  */
 
-let loc = new Uint32Array(0); // local adjacency, d rows of W words
-let stack = new Uint32Array(0); // candidate sets, one block of W words per depth
-const packed = new Uint32Array(32); // one-word universe of a compacted candidate set
+let loc = new Int32Array(0); // local adjacency, d rows of W words
+let stack = new Int32Array(0); // candidate sets, one block of W words per depth
+const packed = new Int32Array(32); // rows of a compacted candidate set of ≤ 32 members
 let packedIndex = new Int32Array(0); // local index → position in the compacted set
 let cnt = new Float64Array(0);
 let W = 1;
 let undirected = true;
 let capDim = 0; // highest dimension counted
 let truncated = false;
-let produced = 0; // simplices counted so far, for the budget
+const produced = new Float64Array(1); // simplices counted so far, for the budget (a typed cell: no boxing)
 let budget = 0;
 let progress = 0;
 
@@ -35,21 +35,21 @@ export function countWithBitsets(g: EnumerationGraph, maxDim: number, simplexBud
   const dmax = Math.max(maxList, 1);
   const wmax = (dmax + 31) >>> 5;
   checkLocalSize(dmax, wmax);
-  loc = new Uint32Array(dmax * wmax);
+  loc = new Int32Array(dmax * wmax);
   capDim = Math.min(maxDim, dmax + 1);
-  stack = new Uint32Array((Math.min(dmax, capDim) + 3) * wmax);
+  stack = new Int32Array((Math.min(dmax, capDim) + 3) * wmax);
   packedIndex = new Int32Array(dmax);
   cnt = new Float64Array(capDim + 2);
   undirected = !g.directed;
   truncated = false;
   budget = simplexBudget;
-  produced = n;
+  produced[0] = n;
   cnt[0] = n;
   progress = 0;
   if (capDim >= 1) cnt[1] = offsets[n];
   else truncated = offsets[n] > 0;
-  produced += capDim >= 1 ? offsets[n] : 0;
-  if (produced > budget) fail();
+  produced[0] += capDim >= 1 ? offsets[n] : 0;
+  if (produced[0] > budget) fail();
 
   const mark = new Int32Array(n).fill(-1);
   for (let v = 0; v < n; v++) {
@@ -83,43 +83,114 @@ function runLocal(d: number): void {
     if (!truncated) truncated = anyEdgeInside(0);
     return;
   }
-  if (W === 1) expand1(loc, stack[0] | 0, 1);
+  if (W === 1) expand1(loc, 0, 1, stack[0], 1);
+  else if (W === 2) expand2(2, stack[0], stack[1], 1);
   else expandWide(0, 1);
 }
 
-/** Extends by every member of a one-word candidate set `cand` (simplices of dimension depth+1). */
-function expand1(rows: Uint32Array, cand: number, depth: number): void {
+/**
+ * Extends by every member of a one-word candidate set `cand` (simplices of dimension depth+1 and up).
+ * Row of member b: rows[base + b * stride], so a set lying in one word of a wider universe runs here
+ * without being copied.
+ */
+function expand1(rows: Int32Array, base: number, stride: number, cand: number, depth: number): void {
   let total = 0;
+  let pairs = 0;
+  let triples = 0;
   let bits = cand;
   const deeper = depth + 2 <= capDim;
   while (bits !== 0) {
-    const low = bits & -bits;
-    bits ^= low;
-    const x = cand & rows[31 - Math.clz32(low)];
+    const lowBit = 31 - Math.clz32(bits);
+    bits ^= 1 << lowBit;
+    const x = cand & rows[base + lowBit * stride];
     if (x === 0) continue;
     const c = popcount32(x);
     total += c;
     if (c === 1) continue;
     if (!deeper) {
-      if (!truncated) truncated = anyEdgeIn1(rows, x);
+      if (!truncated) truncated = anyEdgeIn1(rows, base, stride, x);
+    } else if (c === 3 && depth + 3 <= capDim) {
+      // three candidates: both remaining levels settled inline (saves a call on the commonest small case)
+      const a = 31 - Math.clz32(x);
+      const r = x ^ (1 << a);
+      const b2 = 31 - Math.clz32(r);
+      const c3 = 31 - Math.clz32(r ^ (1 << b2));
+      const ya = x & rows[base + a * stride];
+      const yb = x & rows[base + b2 * stride];
+      const yc = x & rows[base + c3 * stride];
+      pairs += popcount32(ya) + popcount32(yb) + popcount32(yc);
+      triples +=
+        lastPair(rows, base, stride, ya) +
+        lastPair(rows, base, stride, yb) +
+        lastPair(rows, base, stride, yc);
     } else if (c >= 3) {
       cnt[depth + 1] += total;
-      produced += total;
+      produced[0] += total;
       total = 0;
-      expand1(rows, x, depth + 1);
+      expand1(rows, base, stride, x, depth + 1);
     } else {
-      const lj = x & -x;
-      const lk = x ^ lj;
-      const j = 31 - Math.clz32(lj);
-      const k = 31 - Math.clz32(lk);
-      const e = ((rows[j] >>> k) & 1) + ((rows[k] >>> j) & 1);
-      cnt[depth + 2] += e;
-      produced += e;
+      const j = 31 - Math.clz32(x);
+      const k = 31 - Math.clz32(x ^ (1 << j));
+      pairs += ((rows[base + j * stride] >>> k) & 1) + ((rows[base + k * stride] >>> j) & 1);
+    }
+  }
+  if (pairs !== 0) {
+    cnt[depth + 2] += pairs;
+    produced[0] += pairs;
+    if (triples !== 0) {
+      cnt[depth + 3] += triples;
+      produced[0] += triples;
     }
   }
   cnt[depth + 1] += total;
-  produced += total;
-  if (produced > budget) fail();
+  produced[0] += total;
+  if (produced[0] > budget) fail();
+}
+
+/** For a set y of exactly two members j, k: how many of the arcs j→k, k→j exist (else 0). */
+function lastPair(rows: Int32Array, base: number, stride: number, y: number): number {
+  if (y === 0 || (y & (y - 1)) === 0) return 0;
+  const j = 31 - Math.clz32(y);
+  const k = 31 - Math.clz32(y ^ (1 << j));
+  return ((rows[base + j * stride] >>> k) & 1) + ((rows[base + k * stride] >>> j) & 1);
+}
+
+/** Two-word universe (local universes of 33..64 vertices): the candidate set is held in two numbers. */
+function expand2(at: number, c0: number, c1: number, depth: number): void {
+  const deeper = depth + 2 <= capDim;
+  let total = 0;
+  for (let w = 0; w < 2; w++) {
+    let bits = w === 0 ? c0 : c1;
+    while (bits !== 0) {
+      const lowBit = 31 - Math.clz32(bits);
+      bits ^= 1 << lowBit;
+      const row = ((w << 5) + lowBit) << 1;
+      const x0 = c0 & loc[row];
+      const x1 = c1 & loc[row + 1];
+      const c = popcount32(x0) + popcount32(x1);
+      total += c;
+      if (c < 2) continue;
+      if (!deeper) {
+        stack[at] = x0;
+        stack[at + 1] = x1;
+        if (!truncated) truncated = anyEdgeInside(at);
+        continue;
+      }
+      cnt[depth + 1] += total;
+      produced[0] += total;
+      total = 0;
+      if (x1 === 0) expand1(loc, 0, 2, x0, depth + 1);
+      else if (x0 === 0) expand1(loc, 65, 2, x1, depth + 1);
+      else if (c <= 32) {
+        stack[at] = x0;
+        stack[at + 1] = x1;
+        expandPacked(at, c, depth + 1);
+      } else expand2(at, x0, x1, depth + 1);
+    }
+  }
+  cnt[depth + 1] += total;
+  produced[0] += total;
+  if (produced[0] > budget) fail();
 }
 
 /** Multi-word version: candidate set in stack[at .. at+W). */
@@ -128,38 +199,43 @@ function expandWide(at: number, depth: number): void {
   const deeper = depth + 2 <= capDim;
   let total = 0;
   for (let w = 0; w < W; w++) {
-    let bits = stack[at + w] | 0;
+    let bits = stack[at + w];
     while (bits !== 0) {
-      const low = bits & -bits;
-      bits ^= low;
-      const row = ((w << 5) + 31 - Math.clz32(low)) * W;
+      const lowBit = 31 - Math.clz32(bits);
+      bits ^= 1 << lowBit;
+      const row = ((w << 5) + lowBit) * W;
       let c = 0;
+      let words = 0;
+      let only = 0;
       const k0 = undirected ? w : 0;
       for (let k = 0; k < k0; k++) stack[next + k] = 0;
       for (let k = k0; k < W; k++) {
         const x = stack[at + k] & loc[row + k];
         stack[next + k] = x;
-        if (x !== 0) c += popcount32(x);
+        if (x !== 0) {
+          c += popcount32(x);
+          words++;
+          only = k;
+        }
       }
       if (c === 0) continue;
       total += c;
       if (c === 1) continue;
       if (!deeper) {
         if (!truncated) truncated = anyEdgeInside(next);
-      } else if (c >= 3) {
-        cnt[depth + 1] += total;
-        produced += total;
-        total = 0;
-        if (c <= 32) expandPacked(next, c, depth + 1);
-        else expandWide(next, depth + 1);
-      } else {
-        settlePair(next, depth);
+        continue;
       }
+      cnt[depth + 1] += total;
+      produced[0] += total;
+      total = 0;
+      if (words === 1) expand1(loc, (only << 5) * W + only, W, stack[next + only], depth + 1);
+      else if (c <= 32) expandPacked(next, c, depth + 1);
+      else expandWide(next, depth + 1);
     }
   }
   cnt[depth + 1] += total;
-  produced += total;
-  if (produced > budget) fail();
+  produced[0] += total;
+  if (produced[0] > budget) fail();
 }
 
 /** Exactly two candidates j, k in a multi-word set: the (depth+2)-simplex exists iff j~k. */
@@ -167,70 +243,70 @@ function settlePair(at: number, depth: number): void {
   let j = -1;
   let k = -1;
   for (let q = 0; q < W; q++) {
-    let y = stack[at + q] | 0;
+    let y = stack[at + q];
     while (y !== 0) {
-      const low = y & -y;
-      y ^= low;
-      const b = (q << 5) + 31 - Math.clz32(low);
+      const lowBit = 31 - Math.clz32(y);
+      y ^= 1 << lowBit;
+      const b = (q << 5) + lowBit;
       if (j < 0) j = b;
       else k = b;
     }
   }
   const e = ((loc[j * W + (k >>> 5)] >>> (k & 31)) & 1) + ((loc[k * W + (j >>> 5)] >>> (j & 31)) & 1);
   cnt[depth + 2] += e;
-  produced += e;
+  produced[0] += e;
 }
 
 /** Renumbers a candidate set of c ≤ 32 members into one word and runs its subtree there. */
 function expandPacked(at: number, c: number, depth: number): void {
   let q = 0;
   for (let k = 0; k < W; k++) {
-    let y = stack[at + k] | 0;
+    let y = stack[at + k];
     while (y !== 0) {
-      const low = y & -y;
-      y ^= low;
-      packedIndex[(k << 5) + 31 - Math.clz32(low)] = q++;
+      const lowBit = 31 - Math.clz32(y);
+      y ^= 1 << lowBit;
+      packedIndex[(k << 5) + lowBit] = q++;
     }
   }
   q = 0;
   for (let k = 0; k < W; k++) {
-    let y = stack[at + k] | 0;
+    let y = stack[at + k];
     while (y !== 0) {
-      const low = y & -y;
-      y ^= low;
-      const row = ((k << 5) + 31 - Math.clz32(low)) * W;
+      const lowBit = 31 - Math.clz32(y);
+      y ^= 1 << lowBit;
+      const row = ((k << 5) + lowBit) * W;
       let packedRow = 0;
       for (let m = undirected ? k : 0; m < W; m++) {
         let z = stack[at + m] & loc[row + m];
         while (z !== 0) {
-          const lz = z & -z;
-          z ^= lz;
-          packedRow |= 1 << packedIndex[(m << 5) + 31 - Math.clz32(lz)];
+          const lzBit = 31 - Math.clz32(z);
+          z ^= 1 << lzBit;
+          packedRow |= 1 << packedIndex[(m << 5) + lzBit];
         }
       }
       packed[q++] = packedRow;
     }
   }
-  expand1(packed, c === 32 ? -1 : (1 << c) - 1, depth);
+  expand1(packed, 0, 1, c === 32 ? -1 : (1 << c) - 1, depth);
 }
 
-function anyEdgeIn1(rows: Uint32Array, set: number): boolean {
+function anyEdgeIn1(rows: Int32Array, base: number, stride: number, set: number): boolean {
   let bits = set;
   while (bits !== 0) {
-    const low = bits & -bits;
-    bits ^= low;
-    if ((set & rows[31 - Math.clz32(low)]) !== 0) return true;
+    const lowBit = 31 - Math.clz32(bits);
+    bits ^= 1 << lowBit;
+    if ((set & rows[base + lowBit * stride]) !== 0) return true;
   }
   return false;
 }
 
 function anyEdgeInside(at: number): boolean {
   for (let w = 0; w < W; w++) {
-    let bits = stack[at + w] | 0;
+    let bits = stack[at + w];
     while (bits !== 0) {
-      const low = bits & -bits;
-      bits ^= low;
-      const row = ((w << 5) + 31 - Math.clz32(low)) * W;
+      const lowBit = 31 - Math.clz32(bits);
+      bits ^= 1 << lowBit;
+      const row = ((w << 5) + lowBit) * W;
       for (let k = 0; k < W; k++) if ((stack[at + k] & loc[row + k]) !== 0) return true;
     }
   }

@@ -1,7 +1,8 @@
-/** Number of set bits of a 32-bit word (branch-free SWAR; V8 inlines it in the hot loops). */
+/** Set bits of every 16-bit value: a 64 KiB table, so a 32-bit popcount is two loads and an add. */
+const BITS16 = new Uint8Array(65536);
+for (let i = 1; i < 65536; i++) BITS16[i] = (i & 1) + BITS16[i >>> 1];
+
+/** Number of set bits of a 32-bit word. */
 export function popcount32(x: number): number {
-  x -= (x >>> 1) & 0x55555555;
-  x = (x & 0x33333333) + ((x >>> 2) & 0x33333333);
-  x = (x + (x >>> 4)) & 0x0f0f0f0f;
-  return Math.imul(x, 0x01010101) >>> 24;
+  return BITS16[x & 0xffff] + BITS16[x >>> 16];
 }

@@ -1,5 +1,6 @@
 import { Command } from "commander";
 import { barcodeCommand } from "./commands/barcode.js";
+import { extractCommand } from "./commands/extract.js";
 import { inspectCommand } from "./commands/inspect.js";
 import { sweepCommand } from "./commands/sweep.js";
 import { VERSION } from "./version.js";
@@ -14,7 +15,8 @@ export function createProgram(): Command {
     .showHelpAfterError("(run with --help for usage)")
     .addCommand(inspectCommand())
     .addCommand(sweepCommand())
-    .addCommand(barcodeCommand());
+    .addCommand(barcodeCommand())
+    .addCommand(extractCommand());
   program.addHelpText(
     "after",
     `

@@ -1,0 +1,185 @@
+import { availableParallelism } from "node:os";
+import { Command, Option } from "commander";
+import { exitCodeFor } from "../exit-codes.js";
+import { optionsToSpec } from "../extract/options-to-spec.js";
+import { InterruptedError, runExtract } from "../extract/run-extract.js";
+import { EDGE_TRANSFORMS } from "../extract/run-spec.js";
+import { finiteNumber, nonNegativeInteger, numberList, UsageError } from "../options/graph-options.js";
+
+export function extractCommand(): Command {
+  const command = new Command("extract")
+    .summary("a whole dataset in, topological features for statistics and GNNs out")
+    .description(
+      "Reads every graph of a dataset (a manifest CSV with id, file, label, split columns, or a folder of\n" +
+        "graph files), prepares them all the same way, reads their topology on one grid of thresholds shared\n" +
+        "by the whole dataset, and writes a run folder: feature tables (CSV, NPZ), per-graph barcodes and GNN\n" +
+        "bundles, errors.csv and spec.json. Graphs run in parallel on worker threads. Re-running the same\n" +
+        "command skips finished graphs; Ctrl-C keeps every finished graph. Settings come from --spec (a JSON\n" +
+        "file, e.g. a previous run's spec.json) with the options below laid over it; see docs/extract.md.",
+    )
+    .argument("<dataset>", "manifest CSV (id,file[,label,split,directed,…]) or folder of graph files")
+    .requiredOption("--out <dir>", "run folder to write (created; an existing one is resumed)")
+    .addOption(new Option("--spec <file>", "run spec JSON: a partial one, or a previous run's spec.json"))
+    .addOption(
+      new Option("--workers <n>", "worker threads (default: all cores)")
+        .argParser(positiveInteger)
+        .default(availableParallelism(), "all cores"),
+    )
+    // Preparation. No defaults here: unset options leave the spec file's setting (or the spec default).
+    .addOption(
+      new Option("--directed", "read every graph as directed (default: the manifest's directed column)"),
+    )
+    .addOption(new Option("--undirected", "read every graph as undirected"))
+    .addOption(
+      new Option("--weights <meaning>", "what weights mean after --transform (default similarity)").choices([
+        "similarity",
+        "distance",
+      ]),
+    )
+    .addOption(
+      new Option(
+        "--symmetrize <how>",
+        "merge a_ij and a_ji of asymmetric matrices read as undirected",
+      ).choices(["error", "max", "min", "mean"]),
+    )
+    .addOption(
+      new Option(
+        "--negatives <how>",
+        "negative weights: refuse, absolute value, drop the edge, or keep",
+      ).choices(["error", "abs", "drop", "keep"]),
+    )
+    .addOption(
+      new Option(
+        "--zero-edges <rule>",
+        "is a 0 read from a file an edge (auto: no for similarities)",
+      ).choices(["auto", "edge", "no-edge"]),
+    )
+    .addOption(
+      new Option("--transform <f>", "edge-value transform before the semantics: 1−w, −log w, 1/w").choices([
+        ...EDGE_TRANSFORMS,
+      ]),
+    )
+    // Complex.
+    .addOption(
+      new Option("--top-dim <k>", "count simplices to dimension k; homology to k−1 (default 3)").argParser(
+        positiveInteger,
+      ),
+    )
+    .addOption(new Option("--prime <p>", "homology coefficients Z/p (default 2)").argParser(positiveInteger))
+    .addOption(
+      new Option("--budget <n>", "simplices one graph may enumerate (default: the core's)").argParser(
+        positiveInteger,
+      ),
+    )
+    .addOption(
+      new Option("--memory <MiB>", "memory the homology of one graph may hold (default 1024)").argParser(
+        positiveInteger,
+      ),
+    )
+    // Grid.
+    .addOption(
+      new Option("--threshold <list>", "grid of these weights (comma-separated)").argParser(numberList),
+    )
+    .addOption(
+      new Option("--density <list>", "grid of these edge densities, 0..1 (comma-separated)").argParser(
+        numberList,
+      ),
+    )
+    .addOption(
+      new Option("--steps <n>", "quantile grid: number of thresholds (default 20)").argParser(
+        positiveInteger,
+      ),
+    )
+    .addOption(
+      new Option(
+        "--quantiles <from:to>",
+        "quantile grid: dataset weight quantiles it spans (default 0.05:0.95)",
+      ).argParser(quantilePair),
+    )
+    // Node and edge features.
+    .addOption(
+      new Option("--node-threshold <w>", "node/edge features at this weight").argParser(finiteNumber),
+    )
+    .addOption(
+      new Option("--node-density <d>", "node/edge features at this edge density (default 0.1)").argParser(
+        finiteNumber,
+      ),
+    )
+    .addOption(new Option("--node-all-edges", "node/edge features with every edge"))
+    // Families and outputs.
+    .addOption(
+      new Option(
+        "--families <list>",
+        "feature families to include (comma-separated; default all but network)",
+      ).argParser((text) => text.split(",").map((s) => s.trim())),
+    )
+    .addOption(new Option("--no-bundles", "do not write GNN bundles"))
+    .addOption(new Option("--no-barcodes", "do not write barcodes"));
+  command.addHelpText(
+    "after",
+    `
+Examples:
+  cliquescape extract demo-data/manifest.csv --out out/demo
+  cliquescape extract scans/ --out runs/a --weights distance --transform one-minus --top-dim 2
+  cliquescape extract new-subjects.csv --out runs/b --spec runs/a/spec.json
+Exit codes: 0 all graphs done; 1 some graph left out (see errors.csv); 2 bad command line or spec, or the
+run folder holds other settings; 130 interrupted (finished graphs kept).`,
+  );
+  command.action((dataset: string, raw: Record<string, unknown>, self: Command) => {
+    const given = (name: string) => self.getOptionValueSource(name) === "cli";
+    // The job is asynchronous (worker threads); its outcome sets the exit code when it settles.
+    void extractAction(dataset, raw, given);
+  });
+  return command;
+}
+
+async function extractAction(
+  dataset: string,
+  raw: Record<string, unknown>,
+  given: (name: string) => boolean,
+): Promise<void> {
+  const controller = new AbortController();
+  let interrupts = 0;
+  const onInterrupt = () => {
+    interrupts++;
+    if (interrupts > 1) process.exit(130); // a second Ctrl-C: the user insists; every finished file is whole
+    process.stderr.write("\ncliquescape: interrupted: finishing the tables from the graphs done so far\n");
+    controller.abort();
+  };
+  process.on("SIGINT", onInterrupt);
+  try {
+    const { spec, source } = optionsToSpec(raw, given);
+    const result = await runExtract({
+      dataset,
+      out: raw.out as string,
+      workers: raw.workers as number,
+      spec,
+      specSource: source,
+      signal: controller.signal,
+    });
+    process.exitCode = result.exitCode;
+  } catch (error) {
+    if (error instanceof InterruptedError) {
+      process.stderr.write(`cliquescape: ${error.message}\n`);
+      process.exitCode = 130;
+      return;
+    }
+    const message = error instanceof Error ? error.message : String(error);
+    process.stderr.write(`cliquescape: ${message}\n`);
+    process.exitCode = exitCodeFor(error);
+  } finally {
+    process.off("SIGINT", onInterrupt);
+  }
+}
+
+function positiveInteger(text: string): number {
+  const value = nonNegativeInteger(text);
+  if (value < 1) throw new UsageError(`expected a whole number ≥ 1, got "${text}"`);
+  return value;
+}
+
+function quantilePair(text: string): [number, number] {
+  const parts = text.split(":");
+  if (parts.length !== 2) throw new UsageError(`expected FROM:TO quantiles, got "${text}"`);
+  return [finiteNumber(parts[0]), finiteNumber(parts[1])];
+}

@@ -1,0 +1,95 @@
+import { csvDocument } from "../render/csv.js";
+import type { DatasetEntry, DatasetProblem } from "./dataset-source.js";
+import type { GraphFailure } from "./graph-failure.js";
+import { type GraphRecord, recordValues } from "./graph-record.js";
+import { encodeNpz } from "./npz-writer.js";
+
+/** A row of errors.csv: a graph left out, or a manifest row that named no usable graph. */
+export interface ErrorRow {
+  id: string;
+  file: string;
+  line: number | null;
+  column: number | null;
+  reason: string;
+}
+
+export interface RunTables {
+  featuresCsv: string;
+  featuresNpz: Uint8Array;
+  errorsCsv: string;
+  /** Graphs in the tables. */
+  rows: number;
+  errors: ErrorRow[];
+}
+
+/**
+ * The run's tables, built only from per-graph records and in dataset order, so their bytes depend on the
+ * data and the spec alone (not on worker count or scheduling). Entries without a record yet (an
+ * interrupted run) are simply absent; failed ones go to errors.csv after the dataset's own problems.
+ */
+export function assembleTables(
+  entries: readonly DatasetEntry[],
+  records: ReadonlyMap<string, GraphRecord>,
+  featureNames: readonly string[],
+  labelNames: readonly string[],
+  problems: readonly ErrorRow[],
+): RunTables {
+  const done: GraphRecord[] = [];
+  const errors: ErrorRow[] = [...problems];
+  for (const entry of entries) {
+    const record = records.get(entry.id);
+    if (!record) continue;
+    if (record.ok) done.push(record);
+    else errors.push(errorRow(record.id, record.failure!));
+  }
+  const F = featureNames.length;
+  const X = new Float64Array(done.length * F);
+  done.forEach((record, i) => {
+    const values = recordValues(record);
+    if (values.length !== F)
+      throw new Error(`record of ${record.id} has ${values.length} values, expected ${F}`);
+    X.set(values, i * F);
+  });
+  const codes = done.map((record) => labelCode(record.label, labelNames));
+  const featuresCsv = csvDocument(
+    ["id", "label", "split", ...featureNames],
+    done.map((record, i) => [
+      record.id,
+      record.label ?? "",
+      record.split ?? "",
+      ...Array.from(X.subarray(i * F, (i + 1) * F)),
+    ]),
+  );
+  const featuresNpz = encodeNpz([
+    { name: "X", dtype: "float64", shape: [done.length, F], values: X },
+    { name: "y", dtype: "int64", shape: [done.length], values: codes },
+    { name: "ids", dtype: "unicode", shape: [done.length], values: done.map((r) => r.id) },
+    { name: "feature_names", dtype: "unicode", shape: [F], values: featureNames },
+    { name: "label_names", dtype: "unicode", shape: [labelNames.length], values: labelNames },
+    { name: "splits", dtype: "unicode", shape: [done.length], values: done.map((r) => r.split ?? "") },
+  ]);
+  const errorsCsv = csvDocument(
+    ["id", "file", "line", "column", "reason"],
+    errors.map((e) => [e.id, e.file, e.line ?? "", e.column ?? "", e.reason]),
+  );
+  return { featuresCsv, featuresNpz, errorsCsv, rows: done.length, errors };
+}
+
+/** Position of the label in the spec's label list; −1 for a graph without a label. */
+export function labelCode(label: string | null, labelNames: readonly string[]): number {
+  return label === null ? -1 : labelNames.indexOf(label);
+}
+
+export function errorRow(id: string, failure: GraphFailure): ErrorRow {
+  return { id, file: failure.file, line: failure.line, column: failure.column, reason: failure.reason };
+}
+
+export function problemRow(problem: DatasetProblem, file: string): ErrorRow {
+  return {
+    id: problem.id ?? "",
+    file,
+    line: problem.line ?? null,
+    column: problem.column ?? null,
+    reason: problem.reason,
+  };
+}

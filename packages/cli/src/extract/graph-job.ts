@@ -1,0 +1,143 @@
+import {
+  allEdgesGrid,
+  type Barcode,
+  densityGrid,
+  edgeCount,
+  type FeatureConfig,
+  nodeEdgeFeatures,
+  topologicalFeatures,
+  type WeightedGraph,
+} from "@cliquescape/core";
+import { type BarcodeReport, renderBarcode } from "../commands/barcode.js";
+import type { DatasetEntry } from "./dataset-source.js";
+import { type GraphFailure, graphFailureOf } from "./graph-failure.js";
+import { encodeNpz, type NpzArray } from "./npz-writer.js";
+import { readPreparedGraph } from "./read-prepared-graph.js";
+import type { ResolvedRunSpec } from "./run-spec.js";
+
+/** What one graph gives: its feature row and, as asked, its barcode and GNN bundle, ready to be written. */
+export interface GraphProduct {
+  ok: true;
+  values: Float64Array;
+  /** The weight thresholds this graph was read at (differ per graph on a density axis). */
+  thresholds: number[];
+  barcodeJson: string | null;
+  bundle: Uint8Array | null;
+  nodes: number;
+  edges: number;
+  directed: boolean;
+  truncated: boolean | null;
+  warnings: string[];
+}
+
+export type GraphOutcome = GraphProduct | { ok: false; failure: GraphFailure; warnings: string[] };
+
+/** The feature configuration of the core's feature functions, from the spec. */
+export function featureConfigOf(spec: ResolvedRunSpec): FeatureConfig {
+  return { families: spec.families, topDim: spec.complex.topDim, prime: spec.complex.prime };
+}
+
+/**
+ * Reads, prepares and computes one graph. Never throws for a problem of the graph itself: the problem comes
+ * back as a failure with file and position, so the rest of the dataset goes on.
+ */
+export function computeGraph(
+  entry: DatasetEntry,
+  relativeFile: string,
+  labelCode: number,
+  spec: ResolvedRunSpec,
+): GraphOutcome {
+  let warnings: string[] = [];
+  try {
+    const read = readPreparedGraph(entry, spec.preparation);
+    warnings = read.warnings;
+    const { graph } = read;
+    const semantics = spec.preparation.weights;
+    const features = topologicalFeatures(graph, {
+      config: featureConfigOf(spec),
+      axis: spec.resolvedGrid,
+      semantics,
+      countBudget: spec.complex.simplexBudget ?? undefined,
+      homologyBudget: { maxBytes: spec.complex.homologyMemoryMiB * 2 ** 20 },
+    });
+    const barcodeJson =
+      spec.outputs.barcodes && features.barcode
+        ? barcodeDocument(entry.id, relativeFile, graph, features.barcode, spec)
+        : null;
+    const bundle = spec.outputs.bundles ? gnnBundle(graph, labelCode, spec) : null;
+    return {
+      ok: true,
+      values: features.values,
+      thresholds: Array.from(features.grid.thresholds),
+      barcodeJson,
+      bundle,
+      nodes: graph.n,
+      edges: edgeCount(graph),
+      directed: graph.directed,
+      truncated: features.truncated,
+      warnings,
+    };
+  } catch (error) {
+    return { ok: false, failure: graphFailureOf(error, relativeFile), warnings };
+  }
+}
+
+/** The barcode in the same JSON layout as `cliquescape barcode --format json`, plus the graph's id. */
+function barcodeDocument(
+  id: string,
+  file: string,
+  graph: WeightedGraph,
+  barcode: Barcode,
+  spec: ResolvedRunSpec,
+): string {
+  const report: BarcodeReport & { id: string } = {
+    id,
+    file,
+    directed: graph.directed,
+    weights: spec.preparation.weights,
+    prime: barcode.prime,
+    start: barcode.start,
+    end: allEdgesGrid(graph, spec.preparation.weights).thresholds[0],
+    bars: barcode.bars.map((bar) => ({ dim: bar.dim, birth: bar.birth, death: bar.death })),
+  };
+  return renderBarcode(report, "json");
+}
+
+/** The weight at which node and edge features are read, or undefined for every edge. */
+export function nodeFeatureThreshold(graph: WeightedGraph, spec: ResolvedRunSpec): number | undefined {
+  const choice = spec.nodeFeatures.threshold;
+  if (choice.kind === "all") return undefined;
+  if (choice.kind === "weight") return choice.value;
+  return densityGrid(graph, [choice.value], spec.preparation.weights).thresholds[0];
+}
+
+/**
+ * The GNN bundle of one graph: arrays named and shaped as graph-learning libraries take them (x, edge_index
+ * 2×E, edge_attr, y), with the column names, node labels and the threshold they were read at.
+ */
+function gnnBundle(graph: WeightedGraph, labelCode: number, spec: ResolvedRunSpec): Uint8Array {
+  const semantics = spec.preparation.weights;
+  const threshold = nodeFeatureThreshold(graph, spec);
+  const f = nodeEdgeFeatures(graph, {
+    threshold,
+    semantics,
+    topDim: spec.complex.topDim,
+    budget: spec.complex.simplexBudget ?? undefined,
+  });
+  const F = f.nodeFeatureNames.length;
+  const G = f.edgeFeatureNames.length;
+  const E = f.edgeIndex.length / 2;
+  const labels = Array.from({ length: graph.n }, (_, v) => (graph.labels ? graph.labels[v] : String(v)));
+  const arrays: NpzArray[] = [
+    { name: "x", dtype: "float32", shape: [graph.n, F], values: f.x },
+    { name: "edge_index", dtype: "int64", shape: [2, E], values: f.edgeIndex },
+    { name: "edge_attr", dtype: "float32", shape: [E, G], values: f.edgeAttr },
+    { name: "y", dtype: "int64", shape: [1], values: [labelCode] },
+    { name: "node_feature_names", dtype: "unicode", shape: [F], values: f.nodeFeatureNames },
+    { name: "edge_feature_names", dtype: "unicode", shape: [G], values: f.edgeFeatureNames },
+    { name: "node_labels", dtype: "unicode", shape: [graph.n], values: labels },
+    // NaN when every edge is kept.
+    { name: "threshold", dtype: "float64", shape: [1], values: [threshold ?? Number.NaN] },
+  ];
+  return encodeNpz(arrays);
+}

@@ -1,0 +1,91 @@
+import { createHash } from "node:crypto";
+import { existsSync, mkdirSync, readdirSync, renameSync, rmSync, writeFileSync } from "node:fs";
+import { basename, dirname, join } from "node:path";
+
+/**
+ * The run folder. Tables at the top, one file per graph below:
+ *
+ *   spec.json            every setting, the resolved grid, label codes, tool version, input hashes
+ *   features.csv         one row per finished graph, dataset order
+ *   features.npz         X, y, ids, feature_names, label_names, splits
+ *   errors.csv           one row per graph (or manifest row) left out, with file, line, column, reason
+ *   barcodes/<id>.json   persistence barcode of each graph
+ *   bundles/<id>.npz     GNN bundle of each graph
+ *   graphs/<id>.json     the per-graph record the tables are assembled from (and resuming reads)
+ */
+export interface RunFolder {
+  root: string;
+  spec: string;
+  featuresCsv: string;
+  featuresNpz: string;
+  errorsCsv: string;
+  barcodes: string;
+  bundles: string;
+  records: string;
+}
+
+export function runFolder(root: string): RunFolder {
+  return {
+    root,
+    spec: join(root, "spec.json"),
+    featuresCsv: join(root, "features.csv"),
+    featuresNpz: join(root, "features.npz"),
+    errorsCsv: join(root, "errors.csv"),
+    barcodes: join(root, "barcodes"),
+    bundles: join(root, "bundles"),
+    records: join(root, "graphs"),
+  };
+}
+
+export function createRunFolder(folder: RunFolder): void {
+  for (const dir of [folder.root, folder.barcodes, folder.bundles, folder.records])
+    mkdirSync(dir, { recursive: true });
+}
+
+/** Paths of one graph's files. */
+export function graphPaths(
+  folder: RunFolder,
+  id: string,
+): { record: string; barcode: string; bundle: string } {
+  const stem = fileStem(id);
+  return {
+    record: join(folder.records, `${stem}.json`),
+    barcode: join(folder.barcodes, `${stem}.json`),
+    bundle: join(folder.bundles, `${stem}.npz`),
+  };
+}
+
+/**
+ * A file name for an id: the id itself when it is made of letters, digits, '.', '_' and '-' (and does not
+ * start with '.'); otherwise those characters kept, the rest replaced by '_', and a short hash of the id
+ * appended, so two ids never share a file.
+ */
+export function fileStem(id: string): string {
+  if (/^[A-Za-z0-9_-][A-Za-z0-9._-]{0,150}$/.test(id)) return id;
+  const hash = createHash("sha256").update(id).digest("hex").slice(0, 10);
+  return `${id
+    .replace(/[^A-Za-z0-9._-]/g, "_")
+    .replace(/^\./, "_")
+    .slice(0, 100)}~${hash}`;
+}
+
+const TEMP_MARK = ".partial-";
+
+/**
+ * Writes through a temporary file in the same folder and renames it into place, so a reader (or a run
+ * interrupted mid-write) sees the old file or the new one, never a part.
+ */
+export function writeFileAtomic(path: string, data: string | Uint8Array): void {
+  const temp = join(dirname(path), `${TEMP_MARK}${process.pid}-${basename(path)}`);
+  writeFileSync(temp, data);
+  renameSync(temp, path);
+}
+
+/** Removes temporary files a killed process may have left (they are never a finished output). */
+export function removeLeftoverTemps(folder: RunFolder): void {
+  for (const dir of [folder.root, folder.barcodes, folder.bundles, folder.records]) {
+    if (!existsSync(dir)) continue;
+    for (const name of readdirSync(dir))
+      if (name.startsWith(TEMP_MARK)) rmSync(join(dir, name), { force: true });
+  }
+}

@@ -1,0 +1,142 @@
+import { z } from "zod";
+
+/**
+ * The run spec: every setting of an extract run, the values it resolved (the grid, the label codes), the
+ * tool version and the hash of every input. A user may write part of it by hand (`--spec FILE`: missing
+ * settings take their defaults); a finished run writes it whole as spec.json, and passing that back with
+ * --spec reproduces the same columns exactly.
+ */
+
+const positiveInt = z.number().int().min(1);
+
+export const EDGE_TRANSFORMS = ["none", "one-minus", "neg-log", "reciprocal"] as const;
+
+export const PreparationSchema = z
+  .strictObject({
+    /** auto: the manifest's `directed` column (undirected where it has none). */
+    directed: z.enum(["auto", "directed", "undirected"]).default("auto"),
+    /** What the weights mean after the transform: similarity (large = strong) or distance (small = close). */
+    weights: z.enum(["similarity", "distance"]).default("similarity"),
+    symmetrize: z.enum(["error", "max", "min", "mean"]).default("error"),
+    negatives: z.enum(["error", "abs", "drop", "keep"]).default("error"),
+    /** Whether a 0 read from a file is an edge; auto: no for similarity weights, yes for distances. */
+    zeroEdges: z.enum(["auto", "edge", "no-edge"]).default("auto"),
+    /** Applied to every edge value as read, before the weight semantics: 1−w, −log w, 1/w. */
+    transform: z.enum(EDGE_TRANSFORMS).default("none"),
+  })
+  .prefault({});
+
+export const ComplexSchema = z
+  .strictObject({
+    /** Simplices are counted up to this dimension; homology covers dimensions 0 .. topDim − 1. */
+    topDim: positiveInt.max(12).default(3),
+    prime: z.number().int().min(2).refine(isPrime, { message: "must be a prime number" }).default(2),
+    /** Simplices one graph may enumerate before it is recorded as failed; null: the core's default. */
+    simplexBudget: positiveInt.nullable().default(null),
+    /** Memory the homology of one graph may hold, in MiB (per worker). */
+    homologyMemoryMiB: positiveInt.default(1024),
+  })
+  .prefault({});
+
+export const GridRequestSchema = z
+  .discriminatedUnion("kind", [
+    z.strictObject({ kind: z.literal("weights"), values: z.array(z.number()).min(1) }),
+    z.strictObject({
+      kind: z.literal("quantiles"),
+      /** Number of thresholds, evenly spaced in weight between the two dataset-wide quantiles. */
+      steps: positiveInt.max(1000).default(20),
+      from: z.number().min(0).max(1).default(0.05),
+      to: z.number().min(0).max(1).default(0.95),
+    }),
+    z.strictObject({ kind: z.literal("densities"), values: z.array(z.number().min(0).max(1)).min(1) }),
+  ])
+  .prefault({ kind: "quantiles" });
+
+/** The axis the grid resolved to: the exact values every feature column is read at. */
+export const ResolvedGridSchema = z.strictObject({
+  kind: z.enum(["weight", "density"]),
+  values: z.array(z.number()).min(1),
+  /** For a quantile grid: the weights at the two quantiles, over all edges of the dataset's first pass. */
+  quantileWeights: z.tuple([z.number(), z.number()]).optional(),
+  /** For a quantile grid: edges the first pass looked at (a sample when the dataset is very large). */
+  edgesSampled: z.number().int().optional(),
+});
+
+export const NodeThresholdSchema = z
+  .discriminatedUnion("kind", [
+    z.strictObject({ kind: z.literal("all") }),
+    z.strictObject({ kind: z.literal("weight"), value: z.number() }),
+    z.strictObject({ kind: z.literal("density"), value: z.number().min(0).max(1) }),
+  ])
+  .prefault({ kind: "density", value: 0.1 });
+
+export const FamiliesSchema = z
+  .strictObject({
+    simplexCounts: z.boolean().default(true),
+    euler: z.boolean().default(true),
+    betti: z.boolean().default(true),
+    curveSummaries: z.boolean().default(true),
+    barcodeSummaries: z.boolean().default(true),
+    network: z.boolean().default(false),
+  })
+  .prefault({});
+
+export const OutputsSchema = z
+  .strictObject({
+    /** One GNN bundle (.npz) per graph. */
+    bundles: z.boolean().default(true),
+    /** One barcode (.json) per graph. */
+    barcodes: z.boolean().default(true),
+  })
+  .prefault({});
+
+export const InputRecordSchema = z.strictObject({
+  id: z.string(),
+  file: z.string(),
+  sha256: z.string(),
+});
+
+export const RunSpecSchema = z.strictObject({
+  $schema: z.string().optional(),
+  format: z.literal("cliquescape-run-spec/1").default("cliquescape-run-spec/1"),
+  toolVersion: z.string().optional(),
+  preparation: PreparationSchema,
+  complex: ComplexSchema,
+  grid: GridRequestSchema,
+  resolvedGrid: ResolvedGridSchema.optional(),
+  nodeFeatures: z.strictObject({ threshold: NodeThresholdSchema }).prefault({}),
+  families: FamiliesSchema,
+  outputs: OutputsSchema,
+  /** Label names in code order (y = index); resolved from the dataset when absent. */
+  labelNames: z.array(z.string()).optional(),
+  /** Provenance only: the dataset and the files of this run. Never compared between runs. */
+  dataset: z.string().optional(),
+  inputs: z.array(InputRecordSchema).optional(),
+});
+
+/** A spec with every default filled in; resolved fields may still be missing. */
+export type RunSpec = z.output<typeof RunSpecSchema>;
+/** What a user may write: any part of a spec. */
+export type RunSpecInput = z.input<typeof RunSpecSchema>;
+export type GridRequest = RunSpec["grid"];
+export type ResolvedGrid = z.output<typeof ResolvedGridSchema>;
+export type NodeThreshold = RunSpec["nodeFeatures"]["threshold"];
+export type EdgeTransform = (typeof EDGE_TRANSFORMS)[number];
+
+/** A spec after the first pass: the grid and the label codes are fixed. */
+export type ResolvedRunSpec = RunSpec & {
+  resolvedGrid: ResolvedGrid;
+  labelNames: string[];
+  toolVersion: string;
+};
+
+/** The JSON Schema of the spec file, for editors and for docs/extract.md. */
+export function runSpecJsonSchema(): unknown {
+  return z.toJSONSchema(RunSpecSchema, { io: "input" });
+}
+
+function isPrime(p: number): boolean {
+  if (p < 2) return false;
+  for (let d = 2; d * d <= p; d++) if (p % d === 0) return false;
+  return true;
+}

@@ -1,0 +1,79 @@
+import { isAbsolute, relative, resolve } from "node:path";
+import { formatWeight } from "../render/format-number.js";
+import { textTable } from "../render/text-table.js";
+import type { ErrorRow } from "./assemble-tables.js";
+import type { GraphRecord } from "./graph-record.js";
+import { labelMeans } from "./label-means.js";
+import type { RunFolder } from "./run-folder.js";
+import type { ResolvedRunSpec } from "./run-spec.js";
+
+export interface SummaryInput {
+  folder: RunFolder;
+  spec: ResolvedRunSpec;
+  featureNames: readonly string[];
+  records: readonly GraphRecord[];
+  totalGraphs: number;
+  skipped: number;
+  errors: readonly ErrorRow[];
+  interrupted: boolean;
+}
+
+const ERRORS_SHOWN = 10;
+
+/** The closing report: what was done, where the outputs are, per-label means of a few headline features. */
+export function renderSummary(input: SummaryInput): string {
+  const { folder, spec, records, errors } = input;
+  const ok = records.filter((r) => r.ok).length;
+  const at = (path: string) => {
+    const near = relative(process.cwd(), path);
+    return near.startsWith("..") || isAbsolute(near) ? resolve(path) : near || ".";
+  };
+  const lines: string[] = [];
+  const status = input.interrupted ? "interrupted" : "done";
+  lines.push(
+    `${status}: ${ok} of ${input.totalGraphs} graphs in the tables` +
+      `${input.skipped > 0 ? ` (${input.skipped} already done before this run)` : ""}, ${errors.length} left out`,
+  );
+  const axis = spec.resolvedGrid;
+  const range = `${formatWeight(axis.values[0])} .. ${formatWeight(axis.values[axis.values.length - 1])}`;
+  lines.push(
+    `grid: ${axis.values.length} ${axis.kind === "weight" ? `${spec.preparation.weights} thresholds` : "edge densities"} ${range}; ` +
+      `${input.featureNames.length} features per graph`,
+  );
+  lines.push("");
+  lines.push("outputs:");
+  lines.push(`  ${at(folder.featuresCsv)}   feature table (one row per graph)`);
+  lines.push(`  ${at(folder.featuresNpz)}   X, y, ids, feature_names, label_names for numpy`);
+  lines.push(`  ${at(folder.spec)}   settings, grid, input hashes (reuse with --spec)`);
+  if (spec.outputs.bundles)
+    lines.push(`  ${at(folder.bundles)}/   GNN bundles (x, edge_index, edge_attr, y)`);
+  if (spec.outputs.barcodes) lines.push(`  ${at(folder.barcodes)}/   persistence barcodes (JSON)`);
+  lines.push(`  ${at(folder.errorsCsv)}   graphs left out and why (${errors.length})`);
+  const means = labelMeans(records, input.featureNames, spec.labelNames);
+  if (means.features.length > 0 && means.rows.length > 0) {
+    lines.push("");
+    lines.push("mean per label:");
+    lines.push(
+      textTable(
+        ["label", "graphs", ...means.features],
+        means.rows.map((row) => [row.label, String(row.graphs), ...row.means.map((m) => formatMean(m))]),
+      ),
+    );
+  }
+  if (errors.length > 0) {
+    lines.push("");
+    lines.push(`left out (${errors.length}; all in ${at(folder.errorsCsv)}):`);
+    for (const e of errors.slice(0, ERRORS_SHOWN)) {
+      const position = e.line === null ? "" : `:${e.line}${e.column === null ? "" : `:${e.column}`}`;
+      lines.push(`  ${e.id || "(no id)"}: ${e.file}${position}: ${e.reason}`);
+    }
+    if (errors.length > ERRORS_SHOWN) lines.push(`  … and ${errors.length - ERRORS_SHOWN} more`);
+  }
+  if (input.interrupted) lines.push("\nrun the same command again to finish: finished graphs are kept");
+  return `${lines.join("\n")}\n`;
+}
+
+function formatMean(x: number): string {
+  if (!Number.isFinite(x)) return String(x);
+  return Math.abs(x) >= 1000 ? x.toFixed(0) : Number(x.toPrecision(4)).toString();
+}

@@ -1,0 +1,51 @@
+import { createHash } from "node:crypto";
+import type { RunSpec } from "./run-spec.js";
+
+/** Parts of a spec that decide what a per-graph result holds; results made under different ones never mix. */
+const COMPARED_KEYS = [
+  "format",
+  "toolVersion",
+  "preparation",
+  "complex",
+  "grid",
+  "resolvedGrid",
+  "nodeFeatures",
+  "families",
+  "outputs",
+  "labelNames",
+] as const;
+
+/**
+ * The settings in which two specs differ, as "path: before → now" lines (empty when they agree).
+ * Provenance (dataset, inputs) is not compared: new files are handled graph by graph through their hashes.
+ */
+export function specDifferences(before: Partial<RunSpec>, now: Partial<RunSpec>): string[] {
+  const lines: string[] = [];
+  for (const key of COMPARED_KEYS) collect(key, before[key], now[key], lines);
+  return lines;
+}
+
+function collect(path: string, a: unknown, b: unknown, out: string[]): void {
+  if (isPlainObject(a) && isPlainObject(b)) {
+    const keys = [...new Set([...Object.keys(a), ...Object.keys(b)])].sort();
+    for (const key of keys) collect(`${path}.${key}`, a[key], b[key], out);
+    return;
+  }
+  if (JSON.stringify(a) !== JSON.stringify(b)) out.push(`${path}: ${show(a)} → ${show(b)}`);
+}
+
+function show(value: unknown): string {
+  if (value === undefined) return "(unset)";
+  const text = JSON.stringify(value);
+  return text.length > 80 ? `${text.slice(0, 77)}...` : text;
+}
+
+function isPlainObject(value: unknown): value is Record<string, unknown> {
+  return value !== null && typeof value === "object" && !Array.isArray(value);
+}
+
+/** A short hash of the compared settings: per-graph records carry it, so a stray record never mixes in. */
+export function settingsFingerprint(spec: Partial<RunSpec>): string {
+  const picked = COMPARED_KEYS.map((key) => [key, spec[key] ?? null]);
+  return createHash("sha256").update(JSON.stringify(picked)).digest("hex").slice(0, 16);
+}

@@ -1,0 +1,22 @@
+import type { DatasetEntry } from "./dataset-source.js";
+import type { GraphFailure } from "./graph-failure.js";
+import type { GraphOutcome } from "./graph-job.js";
+import type { ResolvedRunSpec, RunSpec } from "./run-spec.js";
+
+/** Sent once to each worker before any task: the settings every graph is computed with. */
+export interface WorkerSetup {
+  kind: "setup";
+  preparation: RunSpec["preparation"];
+  /** Null during the first pass, before the grid is fixed. */
+  spec: ResolvedRunSpec | null;
+}
+
+/** What the main thread asks of a worker: one graph at a time. */
+export type WorkerTask =
+  | { kind: "sample"; index: number; entry: DatasetEntry; limit: number }
+  | { kind: "extract"; index: number; entry: DatasetEntry; relativeFile: string; labelCode: number };
+
+/** A worker's answer to one task, tagged with the task's index. */
+export type WorkerReply =
+  | { kind: "sample"; index: number; values: Float64Array | null; failure: GraphFailure | null }
+  | { kind: "extract"; index: number; outcome: GraphOutcome };

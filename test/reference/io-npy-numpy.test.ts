@@ -3,25 +3,15 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fromDenseMatrix } from "@cliquescape/core";
+import { encodeNpy, npyValues, parseNpy, readGraphFile } from "@cliquescape/io";
 import { afterAll, describe, expect, it } from "vitest";
-import { encodeNpy } from "./encode-npy.js";
-import { npyValues, parseNpy } from "./parse-npy.js";
-import { readGraphFile } from "./read-graph-file.js";
+import { missingPythonModules, PYTHON } from "../support/python.js";
 
 // Source of truth: numpy's own .npy writer (Debian's python3-numpy), checked against the NumPy format
-// specification (NEP 1). CI installs python3-numpy; without it these tests are skipped, loudly.
-function numpyAvailable(): boolean {
-  try {
-    execFileSync("python3", ["-c", "import numpy"], { stdio: "ignore" });
-    return true;
-  } catch {
-    console.warn(
-      "SKIPPED: .npy checks against numpy need python3 with numpy (apt-get install python3-numpy)",
-    );
-    return false;
-  }
-}
-const hasNumpy = numpyAvailable();
+// specification (NEP 1). CI installs python3-numpy; elsewhere, without it, these tests are skipped, loudly.
+const missingNumpy = missingPythonModules(["numpy"]);
+const hasNumpy = missingNumpy === null;
+if (!hasNumpy) console.warn(`SKIPPED: .npy checks against numpy: ${missingNumpy}`);
 const dir = mkdtempSync(join(tmpdir(), "cliquescape-npy-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
@@ -73,7 +63,7 @@ interface Case {
 
 describe.skipIf(!hasNumpy)(".npy files written by numpy", () => {
   const cases: Record<string, Case> = hasNumpy
-    ? JSON.parse(execFileSync("python3", ["-c", WRITER, dir], { encoding: "utf8" }))
+    ? JSON.parse(execFileSync(PYTHON, ["-c", WRITER, dir], { encoding: "utf8" }))
     : {};
 
   it("reads every dtype, byte order, memory order and version to exactly numpy's values", () => {
@@ -114,7 +104,7 @@ np.save(f"{d}/ref_f4.npy", a.astype(np.float32))
 np.save(f"{d}/ref_i8.npy", (np.arange(12).reshape(3, 4) - 6) * 10**15)
 np.save(f"{d}/ref_1d.npy", np.arange(3, dtype=np.float64))
 `;
-    execFileSync("python3", ["-c", script, dir]);
+    execFileSync(PYTHON, ["-c", script, dir]);
     const a = Array.from({ length: 12 }, (_, k) => k / 8 - 0.5);
     const ints = Array.from({ length: 12 }, (_, k) => (k - 6) * 10 ** 15);
     expect(encodeNpy(a, [3, 4], "float64")).toEqual(new Uint8Array(readFileSync(join(dir, "ref_f8.npy"))));
@@ -135,7 +125,7 @@ b = np.load(f"{d}/ours_i8.npy")
 print(json.dumps({"a": a.ravel().tolist(), "shape": list(a.shape), "dtype": str(a.dtype),
                   "b": b.tolist(), "bdtype": str(b.dtype)}))
 `;
-    const seen = JSON.parse(execFileSync("python3", ["-c", script, dir], { encoding: "utf8" }));
+    const seen = JSON.parse(execFileSync(PYTHON, ["-c", script, dir], { encoding: "utf8" }));
     expect(seen).toEqual({
       a: values,
       shape: [2, 3],

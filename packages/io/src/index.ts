@@ -8,6 +8,17 @@ export {
 } from "./edge-list-columns.js";
 export type { NpyWriteDtype } from "./encode-npy.js";
 export { encodeNpy } from "./encode-npy.js";
+export type { StackAxis } from "./formats/matrix-stack.js";
+export type { MatVariable } from "./formats/parse-mat.js";
+export { parseMat } from "./formats/parse-mat.js";
+export type { MatMatrix, MatReadOptions } from "./formats/read-mat.js";
+export { pickMatMatrix, readMatFile, readMatVariables } from "./formats/read-mat.js";
+export type { NpzMember, NpzReadOptions } from "./formats/read-npz.js";
+export { pickNpzArray, readNpzFile, readNpzMembers } from "./formats/read-npz.js";
+export type { XmlGraphFormat, XmlGraphReadOptions } from "./formats/read-xml-graph.js";
+export { readXmlGraphFile } from "./formats/read-xml-graph.js";
+export type { ZipMemberInfo } from "./formats/zip-members.js";
+export { extractZipMembers, listZipMembers } from "./formats/zip-members.js";
 export { graphFeatureNames, graphFeatures } from "./graph-features.js";
 export type { InputFilePosition, InputFileProblem } from "./input-file-error.js";
 export { describePosition, formatPosition, InputFileError } from "./input-file-error.js";
@@ -37,4 +48,10 @@ export {
 export type { Delimiter, TextRow } from "./text-rows.js";
 export { detectDelimiter, textRows } from "./text-rows.js";
 export { type ToGraphologyOptions, toGraphology } from "./to-graphology.js";
+export type { CsvCell } from "./write/encode-csv.js";
+export { encodeCell, encodeCsv } from "./write/encode-csv.js";
+export { encodeNpyBigInt64, encodeNpyStrings } from "./write/encode-npy-extra.js";
+export type { NpzArray, NpzEncodeOptions } from "./write/encode-npz.js";
+export { encodeNpz } from "./write/encode-npz.js";
+export { writeFileAtomic } from "./write/write-file-atomic.js";
 export { writeNpyFile } from "./write-npy-file.js";

@@ -1,5 +1,8 @@
 import { extname } from "node:path";
 import { looksLikeEdgeListHeader } from "./edge-list-columns.js";
+import { type MatReadOptions, readMatFile } from "./formats/read-mat.js";
+import { type NpzReadOptions, readNpzFile } from "./formats/read-npz.js";
+import { readXmlGraphFile, type XmlGraphReadOptions } from "./formats/read-xml-graph.js";
 import { InputFileError } from "./input-file-error.js";
 import { type GraphsReadResult, npyToGraphs } from "./npy-graphs.js";
 import { type DenseMatrixTextOptions, parseDenseMatrixText } from "./parse-dense-matrix.js";
@@ -10,12 +13,15 @@ import { DEFAULT_MAX_NPY_BYTES, DEFAULT_MAX_TEXT_BYTES } from "./read-options.js
 import { detectDelimiter, textRows } from "./text-rows.js";
 
 /** The kinds of file `readGraphFile` reads. */
-export type GraphFileFormat = "dense-matrix" | "edge-list" | "npy";
+export type GraphFileFormat = "dense-matrix" | "edge-list" | "npy" | "npz" | "mat" | "graphml" | "gexf";
 
 /** Options for `readGraphFile`: those of every reader, plus the format when the extension does not settle it. */
 export interface GraphFileOptions
   extends DenseMatrixTextOptions,
-    Omit<EdgeListTextOptions, "labels" | "maxCells"> {
+    Omit<EdgeListTextOptions, "labels" | "maxCells">,
+    Pick<NpzReadOptions, "array">,
+    Pick<MatReadOptions, "variable">,
+    Pick<XmlGraphReadOptions, "weightAttribute"> {
   /**
    * Default: .npy is NumPy; .csv, .tsv and .txt are an edge list when the first data line is a header naming
    * a source and a target column (and neither labelRow nor labelColumn is set), else a dense matrix.
@@ -28,22 +34,40 @@ export interface GraphFileResult extends GraphsReadResult {
 }
 
 const TEXT_EXTENSIONS = new Set([".csv", ".tsv", ".txt"]);
+// Container and graph formats told by their extension alone.
+const BINARY_FORMATS: Partial<Record<string, GraphFileFormat>> = {
+  ".npy": "npy",
+  ".npz": "npz",
+  ".mat": "mat",
+  ".graphml": "graphml",
+  ".gexf": "gexf",
+};
 
 /** Reads a file of one graph (matrix or edge list) or several (a 3-D .npy stack), choosing the reader. */
 export function readGraphFile(path: string, options: GraphFileOptions = {}): GraphFileResult {
   const extension = extname(path).toLowerCase();
   const format =
-    options.format ?? (extension === ".npy" ? "npy" : TEXT_EXTENSIONS.has(extension) ? "text" : undefined);
+    options.format ?? BINARY_FORMATS[extension] ?? (TEXT_EXTENSIONS.has(extension) ? "text" : undefined);
   if (format === undefined) {
     throw new InputFileError(
       path,
       "unknown-format",
-      `cannot tell the format from the extension ${JSON.stringify(extension)}; use .csv, .tsv, .txt or .npy, or set the format option`,
+      `cannot tell the format from the extension ${JSON.stringify(extension)}; use .csv, .tsv, .txt, .npy, .npz, .mat, .graphml or .gexf, or set the format option`,
     );
   }
   if (format === "npy") {
     return { format, ...npyToGraphs(readNpyFile(path, options.maxBytes), path, options) };
   }
+  if (format === "npz") {
+    const { graphs, warnings } = readNpzFile(path, options);
+    return { format, graphs, warnings };
+  }
+  if (format === "mat") {
+    const { graphs, warnings } = readMatFile(path, options);
+    return { format, graphs, warnings };
+  }
+  if (format === "graphml" || format === "gexf")
+    return { format, ...readXmlGraphFile(path, format, options) };
   const text = decodeText(readFileBytes(path, options.maxBytes ?? DEFAULT_MAX_TEXT_BYTES), path);
   const delimiter = options.delimiter ?? (extension === ".tsv" ? "\t" : detectDelimiter(text));
   const textFormat = format === "text" ? guessTextFormat(text, path, delimiter, options) : format;

@@ -1,0 +1,227 @@
+// Damaged, empty and hostile .npz and .mat files give clear errors naming the file. The .mat files here are
+// built byte by byte from the MATLAB 7 MAT-File Format document (MathWorks): 128-byte header with the
+// "IM"/"MI" endian indicator, miMATRIX elements (array flags, dimensions, name, real part), miCOMPRESSED
+// zlib wrappers; the zip layout follows PKWARE APPNOTE.
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { zlibSync } from "fflate";
+import { afterAll, describe, expect, it } from "vitest";
+import { InputFileError } from "../input-file-error.js";
+import { readGraphFile } from "../read-graph-file.js";
+import { encodeNpz } from "../write/encode-npz.js";
+import { readNpzFile } from "./read-npz.js";
+
+const dir = mkdtempSync(join(tmpdir(), "cliquescape-bad-"));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const put = (name: string, bytes: Uint8Array) => {
+  const path = join(dir, name);
+  writeFileSync(path, bytes);
+  return path;
+};
+
+/** A Level 5 MAT-file with one double matrix, column-major, in either byte order, optionally compressed. */
+function matFile(
+  name: string,
+  rows: number,
+  cols: number,
+  values: number[],
+  littleEndian: boolean,
+  compress: boolean,
+) {
+  const element = matrixElement(name, rows, cols, values, littleEndian);
+  const header = new Uint8Array(128).fill(0x20);
+  const text = "MATLAB 5.0 MAT-file, built by a test";
+  for (let k = 0; k < text.length; k++) header[k] = text.charCodeAt(k);
+  const view = new DataView(header.buffer);
+  view.setUint16(124, 0x0100, littleEndian);
+  header.set(littleEndian ? [0x49, 0x4d] : [0x4d, 0x49], 126); // "IM" as written by the machine's order
+  if (!compress) return concat(header, element);
+  const packed = zlibSync(element);
+  const tag = new Uint8Array(8);
+  new DataView(tag.buffer).setUint32(0, 15, littleEndian);
+  new DataView(tag.buffer).setUint32(4, packed.length, littleEndian);
+  return concat(header, tag, packed);
+}
+
+function matrixElement(name: string, rows: number, cols: number, values: number[], le: boolean): Uint8Array {
+  const sub = (type: number, data: Uint8Array) => {
+    const tag = new Uint8Array(8 + Math.ceil(data.length / 8) * 8);
+    const view = new DataView(tag.buffer);
+    view.setUint32(0, type, le);
+    view.setUint32(4, data.length, le);
+    tag.set(data, 8);
+    return tag;
+  };
+  const flags = new Uint8Array(8);
+  new DataView(flags.buffer).setUint32(0, 6, le); // mxDOUBLE_CLASS, no flags
+  const dims = new Uint8Array(8);
+  new DataView(dims.buffer).setInt32(0, rows, le);
+  new DataView(dims.buffer).setInt32(4, cols, le);
+  const data = new Uint8Array(values.length * 8);
+  for (const [k, v] of values.entries()) new DataView(data.buffer).setFloat64(k * 8, v, le);
+  const body = concat(sub(6, flags), sub(5, dims), sub(1, new TextEncoder().encode(name)), sub(9, data));
+  const tag = new Uint8Array(8);
+  new DataView(tag.buffer).setUint32(0, 14, le);
+  new DataView(tag.buffer).setUint32(4, body.length, le);
+  return concat(tag, body);
+}
+
+function concat(...parts: Uint8Array[]): Uint8Array {
+  const out = new Uint8Array(parts.reduce((a, p) => a + p.length, 0));
+  let at = 0;
+  for (const p of parts) {
+    out.set(p, at);
+    at += p.length;
+  }
+  return out;
+}
+
+function errorOf(read: () => unknown): InputFileError {
+  try {
+    read();
+  } catch (error) {
+    if (error instanceof InputFileError) return error;
+    throw error;
+  }
+  throw new Error("no error was thrown");
+}
+
+// A directed 3-node matrix in column-major order: M(1,2) = 0.5, M(2,3) = 0.25, M(3,1) = 2.
+const COLUMN_MAJOR = [0, 0, 2, 0.5, 0, 0, 0, 0.25, 0];
+
+describe(".mat built from the format document", () => {
+  it.each([
+    ["little-endian", true, false],
+    ["big-endian", false, false],
+    ["compressed little-endian", true, true],
+    ["compressed big-endian", false, true],
+  ])("%s: column-major data gives the right arcs", (_, le, compress) => {
+    const path = put(`m-${le}-${compress}.mat`, matFile("M", 3, 3, COLUMN_MAJOR, le, compress));
+    const graph = readGraphFile(path, { directed: true }).graphs[0];
+    const arcs: [number, number, number][] = [];
+    for (let u = 0; u < 3; u++) {
+      for (let e = graph.offsets[u]; e < graph.offsets[u + 1]; e++)
+        arcs.push([u, graph.targets[e], graph.weights[e]]);
+    }
+    expect(arcs).toEqual([
+      [0, 1, 0.5],
+      [1, 2, 0.25],
+      [2, 0, 2],
+    ]);
+  });
+});
+
+describe("bad .mat files", () => {
+  const good = matFile("M", 3, 3, COLUMN_MAJOR, true, false);
+  const packed = matFile("M", 3, 3, COLUMN_MAJOR, true, true);
+
+  it("0 bytes", () => {
+    const e = errorOf(() => readGraphFile(put("empty.mat", new Uint8Array(0))));
+    expect(e.problem).toBe("empty-file");
+    expect(e.message).toMatch(/empty\.mat: file is empty \(0 bytes\)$/);
+  });
+
+  it.each([60, 127])("cut inside the header (%i bytes)", (length) => {
+    const e = errorOf(() => readGraphFile(put(`cut${length}.mat`, good.subarray(0, length))));
+    expect(e.problem).toBe("truncated");
+    expect(e.message).toContain(`file is truncated: ${length} bytes, inside the 128-byte header`);
+  });
+
+  it.each([132, 150, good.length - 4])("cut inside the data (%i bytes)", (length) => {
+    const e = errorOf(() => readGraphFile(put(`data${length}.mat`, good.subarray(0, length))));
+    expect(e.problem).toBe("truncated");
+    expect(e.message).toMatch(
+      /file is truncated: (a data element tag is cut short|a miMATRIX element declares \d+ bytes but only \d+ follow)/,
+    );
+  });
+
+  it("cut inside a compressed element", () => {
+    const e = errorOf(() => readGraphFile(put("packed-cut.mat", packed.subarray(0, packed.length - 10))));
+    expect(e.problem).toBe("truncated");
+    expect(e.message).toMatch(
+      /packed-cut\.mat: byte 128: file is truncated: a miCOMPRESSED element declares/,
+    );
+  });
+
+  it("damaged compressed bytes", () => {
+    const damaged = packed.slice();
+    damaged.fill(0xff, 140, 150);
+    const e = errorOf(() => readGraphFile(put("damaged.mat", damaged)));
+    expect(e.message).toMatch(/damaged\.mat: byte 128: .*(cannot be unpacked|truncated)/);
+  });
+
+  it("a compressed variable larger than maxBytes is refused before it is unpacked whole", () => {
+    const big = matFile("B", 300, 300, new Array(90000).fill(1), true, true);
+    expect(big.length).toBeLessThan(20000);
+    const e = errorOf(() => readGraphFile(put("big.mat", big), { maxBytes: 100000 }));
+    expect(e.problem).toBe("too-large");
+    expect(e.message).toContain("a compressed variable unpacks to more than the limit of 97.7 KiB");
+  });
+
+  it("HDF5-based (-v7.3) and non-MAT files", () => {
+    const v73 = new Uint8Array(512).fill(0x20);
+    const text = "MATLAB 7.3 MAT-file, Platform: GLNXA64, Created on: today HDF5 schema 1.00 .";
+    for (let k = 0; k < text.length; k++) v73[k] = text.charCodeAt(k);
+    expect(() => readGraphFile(put("v73.mat", v73))).toThrow(
+      /MATLAB 7\.3 MAT-file \(HDF5\) is not read; save it with save\(\.\.\., '-v7'\)/,
+    );
+    expect(() => readGraphFile(put("text.mat", new TextEncoder().encode("1 2\n3 4\n")))).toThrow(
+      /text\.mat: byte 0: not a Level 5 MAT-file: the header does not start with "MATLAB"/,
+    );
+  });
+});
+
+describe("bad .npz files", () => {
+  const matrix = { name: "w", values: new Float64Array([0, 1, 1, 0]), shape: [2, 2] };
+  const stored = encodeNpz([matrix]);
+  const deflated = encodeNpz([{ ...matrix, values: new Float64Array(400).fill(0.5), shape: [20, 20] }], {
+    compress: true,
+  });
+
+  it("0 bytes", () => {
+    const e = errorOf(() => readGraphFile(put("empty.npz", new Uint8Array(0))));
+    expect(e.problem).toBe("empty-file");
+    expect(e.message).toMatch(/empty\.npz: file is empty \(0 bytes\)$/);
+  });
+
+  it.each([10, 100, stored.length - 30])("cut short (%i bytes)", (length) => {
+    const e = errorOf(() => readGraphFile(put(`cut${length}.npz`, stored.subarray(0, length))));
+    expect(e.problem).toBe("truncated");
+    expect(e.message).toContain(
+      `file is truncated: ${length} bytes and no zip end-of-central-directory record`,
+    );
+  });
+
+  it("not a zip", () => {
+    expect(() => readGraphFile(put("text.npz", new TextEncoder().encode("hello")))).toThrow(
+      /text\.npz: byte 0: not a zip archive/,
+    );
+  });
+
+  it("damaged deflated member", () => {
+    const damaged = deflated.slice();
+    damaged.fill(0, 60, 90);
+    const e = errorOf(() => readGraphFile(put("damaged.npz", damaged)));
+    expect(e.message).toMatch(/damaged\.npz: (damaged zip archive: .+|array "w": .+)$/);
+  });
+
+  it("members whose declared size passes maxBytes are refused before inflating", () => {
+    const e = errorOf(() => readNpzFile(put("deflated.npz", deflated), { maxBytes: 1536 }));
+    expect(deflated.length).toBeLessThan(1536);
+    expect(e.problem).toBe("too-large");
+    expect(e.message).toContain("zip members unpack to more than the limit of 1.5 KiB");
+  });
+
+  it("a truncated member inside an intact zip names the array", () => {
+    const shortMember = encodeNpz([{ name: "w", values: new Float64Array([1, 2]), shape: [2] }]);
+    // Rewrite the shape in the member's header to promise more data than it has.
+    const text = new TextDecoder("latin1").decode(shortMember);
+    const at = text.indexOf("(2,)");
+    const forged = shortMember.slice();
+    forged.set(new TextEncoder().encode("(9,)"), at);
+    // The zip's CRC no longer matches the member; fflate does not check it, so the .npy check speaks.
+    const e = errorOf(() => readNpzFile(put("forged.npz", forged), { array: "w" }));
+    expect(e.message).toMatch(/forged\.npz: (array "w": file is truncated|damaged zip archive)/);
+  });
+});

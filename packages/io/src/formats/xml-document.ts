@@ -1,0 +1,35 @@
+import { DOMParser } from "@xmldom/xmldom";
+import { InputFileError } from "../input-file-error.js";
+
+class XmlProblem extends Error {}
+
+/**
+ * Checks that `text` is well-formed XML and returns its root element's name and how many elements of each
+ * `counted` tag it holds. A malformed document is an error at the parser's line and column, where
+ * graphology's parsers would read a partial document without a word.
+ */
+export function checkXml(
+  text: string,
+  file: string,
+  counted: readonly string[],
+): { root: string; counts: Record<string, number> } {
+  let document: ReturnType<DOMParser["parseFromString"]>;
+  try {
+    document = new DOMParser({
+      onError: (level, message) => {
+        if (level !== "warning") throw new XmlProblem(message);
+      },
+    }).parseFromString(text, "application/xml");
+  } catch (error) {
+    const cause = (error as { cause?: unknown }).cause;
+    const reason = cause instanceof XmlProblem ? cause.message : (error as Error).message;
+    const locator = (error as { locator?: { lineNumber?: number; columnNumber?: number } }).locator;
+    const line = locator?.lineNumber;
+    const position = line !== undefined && line > 0 ? { line, column: locator?.columnNumber } : {};
+    throw new InputFileError(file, "unreadable", `not well-formed XML: ${reason}`, position);
+  }
+  const root = document.documentElement?.localName ?? "";
+  const counts: Record<string, number> = {};
+  for (const tag of counted) counts[tag] = document.getElementsByTagName(tag).length;
+  return { root, counts };
+}

@@ -1,0 +1,28 @@
+import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { afterAll, describe, expect, it } from "vitest";
+import { writeFileAtomic } from "./write-file-atomic.js";
+
+const dir = mkdtempSync(join(tmpdir(), "cliquescape-atomic-"));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+describe("writeFileAtomic", () => {
+  it("creates missing folders, writes text and bytes, replaces content, leaves no temporary file", () => {
+    const path = join(dir, "a", "b", "out.csv");
+    writeFileAtomic(path, "first\n");
+    expect(readFileSync(path, "utf8")).toBe("first\n");
+    writeFileAtomic(path, new Uint8Array([1, 2, 3]));
+    expect([...readFileSync(path)]).toEqual([1, 2, 3]);
+    expect(readdirSync(join(dir, "a", "b"))).toEqual(["out.csv"]);
+  });
+
+  it("on failure keeps the old file and removes the temporary one", () => {
+    const target = join(dir, "taken");
+    mkdirSync(join(target, "inside"), { recursive: true });
+    // Renaming a file over a non-empty folder fails: the write must fail cleanly.
+    expect(() => writeFileAtomic(target, "data")).toThrow();
+    expect(existsSync(join(target, "inside"))).toBe(true);
+    expect(readdirSync(dir).filter((name) => name.endsWith(".tmp"))).toEqual([]);
+  });
+});

@@ -41,6 +41,8 @@ const ARRAYS: NpzArray[] = [
   },
   { name: "counts", values: [0, 3, 17, 2 ** 53 - 1] },
   { name: "doubles", values: [0.5, -1.25], dtype: "float64" },
+  // An explicit dtype wins over the typed array's own type.
+  { name: "narrowed", values: new Float64Array([0.1, 2]), dtype: "float32" },
   { name: "ids", values: ["sub-01", "sub-02", "ünïcödé", "🧠 brain", 'a,b "q"', "x"] },
   { name: "feature_names", values: ["betti_1_max", "euler_area"] },
   { name: "no_names", values: [], dtype: "unicode" },
@@ -88,8 +90,9 @@ describe.skipIf(missing !== null)(`numpy loads our .npz${missing ? ` (skipped: $
     });
     expect(loaded.counts).toEqual({ dtype: "<i8", shape: [4], values: ["0", "3", "17", "9007199254740991"] });
     expect(loaded.doubles).toEqual({ dtype: "<f8", shape: [2], values: [0.5, -1.25] });
+    expect(loaded.narrowed).toEqual({ dtype: "<f4", shape: [2], values: [Math.fround(0.1), 2] });
     // Width = the longest string in code points ("🧠 brain" is 7, "ünïcödé" 7, 'a,b "q"' 7).
-    expect(loaded.ids).toEqual({ dtype: "<U7", shape: [6], values: ARRAYS[6].values });
+    expect(loaded.ids).toEqual({ dtype: "<U7", shape: [6], values: ARRAYS[7].values });
     expect(loaded.feature_names).toEqual({
       dtype: "<U11",
       shape: [2],

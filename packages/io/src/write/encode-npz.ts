@@ -3,16 +3,23 @@ import { encodeNpy, type NpyWriteDtype } from "../encode-npy.js";
 import { encodeNpyBigInt64, encodeNpyStrings } from "./encode-npy-extra.js";
 
 /**
- * One array of an .npz file. The element type follows the values: Float64Array → float64,
- * Float32Array → float32, Int32Array and BigInt64Array → int64, string[] → fixed-width unicode ("<U…"),
- * number[] → `dtype` (default int64, which refuses non-integers). `shape` defaults to one axis.
+ * One array of an .npz file. `dtype` says the element type to write; without it the values decide:
+ * Float64Array → float64, Float32Array → float32, Int32Array and BigInt64Array → int64, string[] →
+ * fixed-width unicode ("<U…"), number[] → int64 (non-integers are refused). `shape` defaults to one axis.
  */
 export interface NpzArray {
   /** The key numpy shows: the member is stored as `<name>.npy`. */
   name: string;
-  values: Float64Array | Float32Array | Int32Array | BigInt64Array | readonly number[] | readonly string[];
+  values:
+    | Float64Array
+    | Float32Array
+    | Int32Array
+    | BigInt64Array
+    | ArrayLike<number>
+    | readonly number[]
+    | readonly string[];
   shape?: readonly number[];
-  /** For number[]: the element type to write; "unicode" marks an empty string[] as strings. */
+  /** The element type to write; "unicode" for strings (needed only to mark an empty string[]). */
   dtype?: NpyWriteDtype | "unicode";
 }
 
@@ -51,21 +58,30 @@ function encodeArray(array: NpzArray): Uint8Array {
   const where = (error: unknown) =>
     new RangeError(`array ${JSON.stringify(array.name)}: ${(error as Error).message}`);
   try {
-    if (values instanceof BigInt64Array) return encodeNpyBigInt64(values, shape);
-    if (values instanceof Float64Array) return encodeNpy(values, shape, "float64");
-    if (values instanceof Float32Array) return encodeNpy(values, shape, "float32");
-    if (values instanceof Int32Array) return encodeNpy(values, shape, "int64");
     if (array.dtype === "unicode" || typeof values[0] === "string") {
-      if (!values.every((v) => typeof v === "string")) throw new RangeError("mixes strings and numbers");
-      return encodeNpyStrings(values as readonly string[], shape);
+      const strings = Array.from(values as ArrayLike<unknown>);
+      if (!strings.every((v) => typeof v === "string")) throw new RangeError("mixes strings and numbers");
+      return encodeNpyStrings(strings as string[], shape);
     }
-    if (!values.every((v) => typeof v === "number")) throw new RangeError("mixes strings and numbers");
-    return encodeNpy(
-      values as readonly number[],
-      shape,
-      (array.dtype as NpyWriteDtype | undefined) ?? "int64",
-    );
+    if (values instanceof BigInt64Array) {
+      if (array.dtype !== undefined && array.dtype !== "int64") {
+        throw new RangeError(`BigInt64Array values cannot be written as ${array.dtype}`);
+      }
+      return encodeNpyBigInt64(values, shape);
+    }
+    const numbers = values as ArrayLike<number>;
+    const dtype = array.dtype ?? inferredDtype(numbers);
+    for (let k = 0; k < numbers.length; k++) {
+      if (typeof numbers[k] !== "number") throw new RangeError("mixes strings and numbers");
+    }
+    return encodeNpy(numbers, shape, dtype);
   } catch (error) {
     throw where(error);
   }
+}
+
+function inferredDtype(values: ArrayLike<number>): NpyWriteDtype {
+  if (values instanceof Float64Array) return "float64";
+  if (values instanceof Float32Array) return "float32";
+  return "int64";
 }

@@ -1,0 +1,120 @@
+// One benchmark measurement in its own process, so its peak memory (maxRSS) is its own.
+//   node measure.mjs generate NAME DIR        write DIR/NAME.txt (+ NAME.weights.json sidecar)
+//   node measure.mjs count FILE REPEAT         time countSimplices on all edges
+//   node measure.mjs sweep FILE THRESHOLDS     time sweepSimplexCounts on an even grid vs a plain count
+// Prints one JSON line on stdout.
+import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
+import {
+  countSimplices,
+  evenGrid,
+  explicitGrid,
+  fromEdgeList,
+  sweepSimplexCounts,
+} from "../../packages/core/dist/index.js";
+import { readEdgeListFile, writeEdgeListFile } from "./edge-list-file.mjs";
+import { generateGraph } from "./models.mjs";
+import { seededRandom } from "./random.mjs";
+
+const [mode, a, b] = process.argv.slice(2);
+
+function seconds(t0) {
+  return (performance.now() - t0) / 1000;
+}
+
+function median(xs) {
+  const s = [...xs].sort((x, y) => x - y);
+  return s[Math.floor(s.length / 2)];
+}
+
+/** Reads a graph file; weights from our sidecar when we generated it, else seeded uniform(0,1) distances. */
+function loadGraph(file) {
+  const e = readEdgeListFile(file);
+  const side = file.replace(/\.txt$/, ".weights.bin");
+  let weights;
+  let semantics = "distance";
+  if (existsSync(side)) {
+    const buf = readFileSync(side);
+    weights = new Float64Array(buf.buffer, buf.byteOffset, buf.length / 8);
+    semantics = JSON.parse(readFileSync(file.replace(/\.txt$/, ".json"), "utf8")).semantics;
+  } else {
+    const rnd = seededRandom(e.sources.length);
+    weights = new Float64Array(e.sources.length);
+    for (let i = 0; i < weights.length; i++) weights[i] = rnd();
+  }
+  const t0 = performance.now();
+  const graph = fromEdgeList({ ...e, weights });
+  return { graph, semantics, weights, csrSeconds: seconds(t0) };
+}
+
+function peakMiB() {
+  return process.resourceUsage().maxRSS / 1024;
+}
+
+if (mode === "generate") {
+  const g = generateGraph(a);
+  const file = join(b, `${a}.txt`);
+  writeEdgeListFile(file, g);
+  writeFileSync(
+    file.replace(/\.txt$/, ".weights.bin"),
+    Buffer.from(g.weights.buffer, 0, g.weights.byteLength),
+  );
+  writeFileSync(file.replace(/\.txt$/, ".json"), JSON.stringify({ semantics: g.semantics, note: g.note }));
+  console.log(JSON.stringify({ file, n: g.n, edges: g.sources.length, note: g.note }));
+} else if (mode === "count") {
+  const { graph, csrSeconds } = loadGraph(a);
+  const times = [];
+  let r;
+  for (let i = 0; i < Number(b ?? 1); i++) {
+    const t0 = performance.now();
+    r = countSimplices(graph);
+    times.push(seconds(t0));
+  }
+  console.log(
+    JSON.stringify({
+      n: graph.n,
+      edges: graph.directed ? graph.targets.length : graph.targets.length / 2,
+      counts: Array.from(r.counts),
+      seconds: median(times),
+      csrSeconds,
+      peakMiB: peakMiB(),
+    }),
+  );
+} else if (mode === "sweep") {
+  const { graph, semantics, weights } = loadGraph(a);
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const w of weights) {
+    if (w < lo) lo = w;
+    if (w > hi) hi = w;
+  }
+  const T = Number(b ?? 50);
+  const grid = semantics === "distance" ? evenGrid(lo, hi, T, semantics) : evenGrid(hi, lo, T, semantics);
+  let t0 = performance.now();
+  const sweep = sweepSimplexCounts(graph, grid);
+  const sweepSeconds = seconds(t0);
+  t0 = performance.now();
+  const one = sweepSimplexCounts(graph, explicitGrid([semantics === "distance" ? hi : lo], semantics));
+  const oneSeconds = seconds(t0);
+  t0 = performance.now();
+  const plain = countSimplices(graph);
+  const countSeconds = seconds(t0);
+  const last = Array.from(sweep.counts[sweep.counts.length - 1]);
+  while (last.length > plain.counts.length && last[last.length - 1] === 0) last.pop();
+  console.log(
+    JSON.stringify({
+      thresholds: T,
+      sweepSeconds,
+      oneSeconds,
+      countSeconds,
+      agrees:
+        JSON.stringify(last) === JSON.stringify(Array.from(plain.counts)) &&
+        JSON.stringify(Array.from(one.counts[0]).slice(0, plain.counts.length)) ===
+          JSON.stringify(Array.from(plain.counts)),
+      peakMiB: peakMiB(),
+    }),
+  );
+} else {
+  console.error("usage: measure.mjs generate NAME DIR | count FILE [REPEAT] | sweep FILE [THRESHOLDS]");
+  process.exit(2);
+}

@@ -76,6 +76,12 @@ export function extractCommand(): Command {
         positiveInteger,
       ),
     )
+    .addOption(
+      new Option(
+        "--barcode-range <r>",
+        "barcode up to the grid's end (axis, default) or of the whole filtration",
+      ).choices(["axis", "full"]),
+    )
     // Grid.
     .addOption(
       new Option("--threshold <list>", "grid of these weights (comma-separated)").argParser(numberList),

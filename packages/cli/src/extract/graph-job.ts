@@ -5,9 +5,9 @@ import {
   edgeCount,
   type FeatureConfig,
   nodeEdgeFeatures,
-  topologicalFeatures,
   type WeightedGraph,
 } from "@cliquescape/core";
+import { graphFeatures } from "@cliquescape/io";
 import { type BarcodeReport, renderBarcode } from "../commands/barcode.js";
 import type { DatasetEntry } from "./dataset-source.js";
 import { type GraphFailure, graphFailureOf } from "./graph-failure.js";
@@ -34,7 +34,12 @@ export type GraphOutcome = GraphProduct | { ok: false; failure: GraphFailure; wa
 
 /** The feature configuration of the core's feature functions, from the spec. */
 export function featureConfigOf(spec: ResolvedRunSpec): FeatureConfig {
-  return { families: spec.families, topDim: spec.complex.topDim, prime: spec.complex.prime };
+  return {
+    families: spec.families,
+    topDim: spec.complex.topDim,
+    prime: spec.complex.prime,
+    barcodeRange: spec.complex.barcodeRange,
+  };
 }
 
 /**
@@ -53,7 +58,7 @@ export function computeGraph(
     warnings = read.warnings;
     const { graph } = read;
     const semantics = spec.preparation.weights;
-    const features = topologicalFeatures(graph, {
+    const features = graphFeatures(graph, {
       config: featureConfigOf(spec),
       axis: spec.resolvedGrid,
       semantics,

@@ -32,6 +32,7 @@ export function optionsToSpec(raw: Raw, given: (name: string) => boolean): { spe
     prime: raw.prime,
     simplexBudget: raw.budget,
     homologyMemoryMiB: raw.memory,
+    barcodeRange: raw.barcodeRange,
   });
   const gridChanged = gridFromOptions(raw, spec, base);
   nodeThresholdFromOptions(raw, spec);

@@ -1,6 +1,7 @@
 import { existsSync, readFileSync } from "node:fs";
 import { relative, sep } from "node:path";
-import { checkFeatureAxis, topologicalFeatureNames } from "@cliquescape/core";
+import { checkFeatureAxis } from "@cliquescape/core";
+import { graphFeatureNames } from "@cliquescape/io";
 import { UsageError } from "../options/graph-options.js";
 import { VERSION } from "../version.js";
 import { assembleTables, type ErrorRow, labelCode, problemRow } from "./assemble-tables.js";
@@ -73,10 +74,7 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
       );
     }
   }
-  if (spec.families.network) {
-    throw new UsageError("families.network: network statistics are not available in this build yet");
-  }
-  const featureNames = topologicalFeatureNames(featureConfigOf(spec), spec.resolvedGrid);
+  const featureNames = graphFeatureNames(featureConfigOf(spec), spec.resolvedGrid);
 
   createRunFolder(folder);
   removeLeftoverTemps(folder);

@@ -35,6 +35,11 @@ export const ComplexSchema = z
     simplexBudget: positiveInt.nullable().default(null),
     /** Memory the homology of one graph may hold, in MiB (per worker). */
     homologyMemoryMiB: positiveInt.default(1024),
+    /**
+     * Barcode of the filtration up to the grid's last threshold ("axis": far faster on dense graphs; bars
+     * still alive there have no death) or of the whole filtration ("full").
+     */
+    barcodeRange: z.enum(["axis", "full"]).default("axis"),
   })
   .prefault({});
 
@@ -77,7 +82,7 @@ export const FamiliesSchema = z
     betti: z.boolean().default(true),
     curveSummaries: z.boolean().default(true),
     barcodeSummaries: z.boolean().default(true),
-    network: z.boolean().default(false),
+    network: z.boolean().default(true),
   })
   .prefault({});
 

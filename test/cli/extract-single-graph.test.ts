@@ -127,9 +127,9 @@ print(json.dumps({"lo": lo, "hi": hi, "grid": np.linspace(hi, lo, 20).tolist(), 
       expect(spec.resolvedGrid.quantileWeights[0]).toBeCloseTo(reference.lo, 12);
       expect(spec.resolvedGrid.quantileWeights[1]).toBeCloseTo(reference.hi, 12);
       expect(spec.resolvedGrid.values).toHaveLength(20);
-      spec.resolvedGrid.values.forEach((v: number, i: number) =>
-        expect(v).toBeCloseTo(reference.grid[i], 12),
-      );
+      for (const [i, v] of (spec.resolvedGrid.values as number[]).entries()) {
+        expect(v).toBeCloseTo(reference.grid[i], 12);
+      }
     },
   );
 });

@@ -1,3 +1,17 @@
+export type {
+  Dataset,
+  DatasetEntry,
+  DatasetProblem,
+  OpenDatasetOptions,
+} from "./dataset/dataset-types.js";
+export { formatDatasetProblem } from "./dataset/dataset-types.js";
+export { GRAPH_FILE_EXTENSIONS, isGraphFileName } from "./dataset/graph-file-extensions.js";
+export { hashFile } from "./dataset/hash-file.js";
+export { openDataset } from "./dataset/open-dataset.js";
+export type { NodeCoordinates } from "./dataset/read-coordinates.js";
+export { readCoordinates } from "./dataset/read-coordinates.js";
+export type { DatasetGraph } from "./dataset/read-dataset-graph.js";
+export { readDatasetGraph } from "./dataset/read-dataset-graph.js";
 export type { EdgeColumnNames, EdgeColumns } from "./edge-list-columns.js";
 export {
   findEdgeColumns,

@@ -1,0 +1,77 @@
+import { basename } from "node:path";
+import { graphCount } from "../formats/matrix-stack.js";
+import { InputFileError } from "../input-file-error.js";
+import type { Dataset, DatasetEntry, DatasetProblem } from "./dataset-types.js";
+import { fileStem } from "./graph-file-extensions.js";
+import { readLabelsFile } from "./read-labels-file.js";
+import { loadStack } from "./stack-source.js";
+
+/**
+ * One entry per graph of a stack file (3-D .npy, .npz or .mat): ids `<stem>-<k>`, k zero-padded to the
+ * width of the last index so that ids sort in slice order. Labels come from an optional labels file.
+ */
+export function openStackDataset(file: string, labelsFile?: string, variable?: string): Dataset {
+  const source = loadStack(file, variable);
+  const { shape } = source.array;
+  if (shape.length !== 2 && shape.length !== 3) {
+    throw new InputFileError(
+      file,
+      "not-square",
+      `array of shape (${shape.join(", ")}) is not a stack of matrices`,
+    );
+  }
+  const count = graphCount(source.array, source.axis);
+  const stem = fileStem(basename(file));
+  const width = String(Math.max(0, count - 1)).length;
+  const entries: DatasetEntry[] = [];
+  for (let k = 0; k < count; k++) {
+    const entry: DatasetEntry = {
+      id: `${stem}-${String(k).padStart(width, "0")}`,
+      file,
+      label: null,
+      split: null,
+      metadata: {},
+      slice: k,
+      declaredAt: { file },
+    };
+    if (source.variable !== undefined) entry.variable = source.variable;
+    entries.push(entry);
+  }
+  const problems: DatasetProblem[] = [];
+  if (labelsFile !== undefined) applyLabels(entries, labelsFile, problems);
+  return { root: file, kind: "stack", entries, problems };
+}
+
+function applyLabels(entries: DatasetEntry[], labelsFile: string, problems: DatasetProblem[]): void {
+  const labels = readLabelsFile(labelsFile);
+  if (labels.kind === "by-position") {
+    if (labels.labels.length !== entries.length) {
+      throw new InputFileError(
+        labelsFile,
+        "bad-labels",
+        `${labels.labels.length} labels for a stack of ${entries.length} graphs; give one label per line, in slice order`,
+      );
+    }
+    entries.forEach((entry, k) => {
+      entry.label = labels.labels[k];
+      entry.declaredAt = { file: labelsFile, line: labels.lines[k] };
+    });
+    return;
+  }
+  const byId = new Map(entries.map((entry) => [entry.id, entry]));
+  for (const [id, { label, line, column }] of labels.labels) {
+    const entry = byId.get(id);
+    if (!entry) {
+      problems.push({
+        id,
+        file: labelsFile,
+        line,
+        column,
+        reason: `no graph "${id}" in the stack (ids run ${entries[0]?.id} … ${entries[entries.length - 1]?.id})`,
+      });
+      continue;
+    }
+    entry.label = label;
+    entry.declaredAt = { file: labelsFile, line };
+  }
+}

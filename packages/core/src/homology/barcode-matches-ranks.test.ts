@@ -1,0 +1,93 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { fromEdgeList } from "../graph/from-edge-list.js";
+import type { WeightedGraph } from "../graph/weighted-graph.js";
+import { bettiAt } from "./betti-at.js";
+import { bettiFromBarcode } from "./betti-curves.js";
+import { computeBarcode } from "./compute-barcode.js";
+
+/**
+ * Property: Betti numbers read off the barcode equal those computed directly by ranks of boundary matrices
+ * at every threshold where anything changes, for both clique layouts and for directed graphs with
+ * reciprocal arcs, with few distinct weights so that ties are frequent.
+ */
+const arbitraryGraph = (directed: boolean) =>
+  fc
+    .record({
+      n: fc.integer({ min: 1, max: 8 }),
+      density: fc.double({ min: 0.2, max: 1, noNaN: true }),
+      levels: fc.integer({ min: 1, max: 5 }),
+      seed: fc.integer({ min: 0, max: 2 ** 30 }),
+    })
+    .map(({ n, density, levels, seed }) => randomGraph(n, density, levels, seed, directed));
+
+function randomGraph(
+  n: number,
+  density: number,
+  levels: number,
+  seed: number,
+  directed: boolean,
+): WeightedGraph {
+  let state = seed >>> 0 || 1;
+  const next = () => {
+    state ^= state << 13;
+    state ^= state >>> 17;
+    state ^= state << 5;
+    return (state >>> 0) / 4294967296;
+  };
+  const sources: number[] = [];
+  const targets: number[] = [];
+  const weights: number[] = [];
+  for (let u = 0; u < n; u++) {
+    for (let v = directed ? 0 : u + 1; v < n; v++) {
+      if (u === v || next() > density) continue;
+      sources.push(u);
+      targets.push(v);
+      weights.push(1 + Math.floor(next() * levels));
+    }
+  }
+  return fromEdgeList({ n, sources, targets, weights, directed });
+}
+
+function checkAllThresholds(
+  graph: WeightedGraph,
+  semantics: "distance" | "similarity",
+  maxDim: number,
+  prime: number,
+) {
+  const thresholds = [...new Set([...graph.weights, 0])];
+  const layouts = graph.directed ? (["auto"] as const) : (["dense", "sparse"] as const);
+  for (const cliqueLayout of layouts) {
+    const barcode = computeBarcode(graph, { semantics, maxDim, prime, cliqueLayout });
+    for (const threshold of thresholds) {
+      const direct = bettiAt(graph, { threshold, semantics, maxDim, prime });
+      expect(bettiFromBarcode(barcode, threshold)).toEqual(direct);
+    }
+  }
+}
+
+describe("barcode against direct ranks", () => {
+  it("undirected clique complexes, Z/2 and Z/3, both weight semantics", () => {
+    fc.assert(
+      fc.property(
+        arbitraryGraph(false),
+        fc.constantFrom(2, 3),
+        fc.constantFrom("distance" as const, "similarity" as const),
+        (g, p, s) => checkAllThresholds(g, s, 3, p),
+      ),
+      { numRuns: 150 },
+    );
+  });
+
+  it("directed flag complexes with reciprocal arcs, Z/2 and Z/5", () => {
+    fc.assert(
+      fc.property(
+        arbitraryGraph(true),
+        fc.constantFrom(2, 5),
+        fc.constantFrom("distance" as const, "similarity" as const),
+        (g, p, s) => checkAllThresholds(g, s, 2, p),
+      ),
+      { numRuns: 150 },
+    );
+  });
+});

@@ -1,0 +1,60 @@
+import { gridFiltrationValues, type ThresholdGrid } from "../filtration/threshold-grid.js";
+import { toFiltrationValue } from "../filtration/weight-semantics.js";
+import type { Barcode } from "./barcode.js";
+
+/**
+ * Betti numbers read off a barcode at one threshold (user units): β_k counts the bars of dimension k with
+ * birth ≤ threshold < death in filtration order (a class is alive from its birth up to, not including, its
+ * death; essential bars never die). Exact for k ≤ barcode.maxDim.
+ */
+export function bettiFromBarcode(barcode: Barcode, threshold: number): number[] {
+  const t = toFiltrationValue(threshold, barcode.semantics);
+  const betti = new Array<number>(barcode.maxDim + 1).fill(0);
+  for (const bar of barcode.bars) {
+    const birth = toFiltrationValue(bar.birth, barcode.semantics);
+    const death = bar.death === null ? Infinity : toFiltrationValue(bar.death, barcode.semantics);
+    if (birth <= t && t < death) betti[bar.dim]++;
+  }
+  return betti;
+}
+
+/**
+ * Betti curves on a grid: result[t][k] = β_k at grid threshold t, derived exactly from the barcode: the
+ * number of births ≤ t minus the number of deaths ≤ t, each found by binary search in sorted lists.
+ */
+export function bettiCurves(barcode: Barcode, grid: ThresholdGrid): Float64Array[] {
+  if (grid.semantics !== barcode.semantics) {
+    throw new RangeError(
+      `grid semantics "${grid.semantics}" differ from the barcode's "${barcode.semantics}"`,
+    );
+  }
+  const gridF = gridFiltrationValues(grid);
+  const dims = barcode.maxDim + 1;
+  const curves = Array.from(gridF, () => new Float64Array(dims));
+  for (let k = 0; k < dims; k++) {
+    const births: number[] = [];
+    const deaths: number[] = [];
+    for (const bar of barcode.bars) {
+      if (bar.dim !== k) continue;
+      births.push(toFiltrationValue(bar.birth, barcode.semantics));
+      if (bar.death !== null) deaths.push(toFiltrationValue(bar.death, barcode.semantics));
+    }
+    births.sort((a, b) => a - b);
+    deaths.sort((a, b) => a - b);
+    for (let t = 0; t < gridF.length; t++)
+      curves[t][k] = countAtMost(births, gridF[t]) - countAtMost(deaths, gridF[t]);
+  }
+  return curves;
+}
+
+/** Number of entries ≤ x in an ascending list. */
+function countAtMost(sorted: number[], x: number): number {
+  let lo = 0;
+  let hi = sorted.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (sorted[mid] <= x) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}

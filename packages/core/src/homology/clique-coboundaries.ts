@@ -1,0 +1,322 @@
+import type { WeightedGraph } from "../graph/weighted-graph.js";
+import { type BinomialTable, binomialTable, decodeSimplex } from "./binomial-table.js";
+import type { CoboundaryModel, SimplexList } from "./coboundary-model.js";
+import type { CofaceSink } from "./coface-sink.js";
+import type { ByteLedger } from "./homology-budget.js";
+import { SimplexListBuilder } from "./simplex-list-builder.js";
+
+/** How edge values are looked up: an n×n matrix (fast for dense graphs) or the sparse rows. */
+export type CliqueLayout = "dense" | "sparse";
+
+/**
+ * Implicit coboundaries of the clique complex of an undirected graph. A simplex is its ascending vertex
+ * set, keyed by the combinatorial number system, so nothing but the simplices of the column dimension is
+ * ever stored. The cofaces of σ are σ ∪ {v} for common neighbours v; their keys grow with v, so walking v
+ * upwards lists cofaces in key order, which is what makes the zero-coface search stop early.
+ */
+export class CliqueCoboundaries implements CoboundaryModel {
+  readonly vertexCount: number;
+  sign = 1;
+  private readonly n: number;
+  private readonly binom: BinomialTable;
+  private readonly row: number;
+  private readonly dense: Float64Array | null;
+  private readonly offsets: Int32Array;
+  private readonly targets: Int32Array;
+  private readonly edgeF: Float64Array;
+  private readonly lists: (SimplexListBuilder | null)[] = [];
+  private readonly ledger: ByteLedger;
+  private readonly s: Int32Array;
+  private readonly low: Float64Array;
+  private readonly high: Float64Array;
+  private readonly ptr: Int32Array;
+  private readonly pairF: Float64Array;
+
+  /** `edgeF` is the filtration value per CSR slot; `maxVertices` the largest simplex (maxDim + 2). */
+  constructor(
+    graph: WeightedGraph,
+    edgeF: Float64Array,
+    maxVertices: number,
+    layout: CliqueLayout,
+    ledger: ByteLedger,
+  ) {
+    const n = graph.n;
+    this.n = n;
+    this.vertexCount = n;
+    this.binom = binomialTable(n, maxVertices);
+    this.row = n + 1;
+    this.offsets = graph.offsets;
+    this.targets = graph.targets;
+    this.edgeF = edgeF;
+    this.ledger = ledger;
+    if (layout === "dense") {
+      ledger.reserve(n * n * 8, "building the dense edge-value matrix");
+      const m = new Float64Array(n * n).fill(Infinity);
+      for (let u = 0; u < n; u++) {
+        for (let slot = graph.offsets[u]; slot < graph.offsets[u + 1]; slot++)
+          m[u * n + graph.targets[slot]] = edgeF[slot];
+      }
+      this.dense = m;
+    } else {
+      this.dense = null;
+    }
+    this.s = new Int32Array(maxVertices + 1);
+    this.low = new Float64Array(maxVertices + 2);
+    this.high = new Float64Array(maxVertices + 2);
+    this.ptr = new Int32Array(maxVertices + 1);
+    this.pairF = new Float64Array((maxVertices + 1) * (maxVertices + 1));
+  }
+
+  /** Filtration value of edge {u, v}, Infinity when absent. */
+  edgeValue(u: number, v: number): number {
+    if (this.dense !== null) return this.dense[u * this.n + v];
+    let lo = this.offsets[u];
+    let hi = this.offsets[u + 1] - 1;
+    const t = this.targets;
+    while (lo <= hi) {
+      const mid = (lo + hi) >>> 1;
+      const x = t[mid];
+      if (x === v) return this.edgeF[mid];
+      if (x < v) lo = mid + 1;
+      else hi = mid - 1;
+    }
+    return Infinity;
+  }
+
+  listSimplices(dim: number): SimplexList {
+    const cached = this.lists[dim];
+    if (cached) return cached;
+    const out = new SimplexListBuilder(this.ledger, `listing the ${dim}-simplices`);
+    if (dim === 1) {
+      for (let u = 0; u < this.n; u++) {
+        for (let slot = this.offsets[u]; slot < this.offsets[u + 1]; slot++) {
+          const v = this.targets[slot];
+          if (v > u) out.push(this.edgeF[slot], this.binom.values[2 * this.row + v] + u);
+        }
+      }
+    } else {
+      const below = this.listSimplices(dim - 1);
+      for (let i = 0; i < below.count; i++) this.extendUpwards(dim - 1, below.key[i], below.f[i], out);
+    }
+    this.lists[dim] = out;
+    return out;
+  }
+
+  releaseSimplices(dim: number): void {
+    const list = this.lists[dim];
+    if (list) list.release();
+    this.lists[dim] = null;
+  }
+
+  vertices(dim: number, key: number, out: Int32Array): void {
+    decodeSimplex(this.binom, key, dim + 1, out);
+  }
+
+  /** Every coface σ ∪ {v} with v above the top vertex of σ: each (dim+1)-simplex arises exactly once. */
+  private extendUpwards(dim: number, key: number, f: number, out: SimplexListBuilder): void {
+    const count = dim + 1;
+    const s = this.s;
+    decodeSimplex(this.binom, key, count, s);
+    const top = s[count - 1];
+    const weight = (this.binom.values as Float64Array).subarray((count + 1) * this.row);
+    if (this.dense !== null) {
+      const m = this.dense;
+      const n = this.n;
+      for (let v = top + 1; v < n; v++) {
+        let fv = f;
+        const base = v * n;
+        for (let i = 0; i < count; i++) {
+          const x = m[base + s[i]];
+          if (x > fv) fv = x;
+        }
+        if (fv !== Infinity) out.push(fv, key + weight[v]);
+      }
+      return;
+    }
+    this.startIntersection(count);
+    for (;;) {
+      const v = this.nextCommonNeighbour(count, top + 1);
+      if (v < 0) break;
+      out.push(this.lastCofaceF(count, f), key + weight[v]);
+    }
+  }
+
+  pushCoboundary(dim: number, key: number, f: number, factor: number, p: number, sink: CofaceSink): void {
+    const count = dim + 1;
+    this.prepareCofaceKeys(key, count);
+    const s = this.s;
+    const low = this.low;
+    const high = this.high;
+    const negative = p - factor;
+    const values = this.binom.values;
+    const row = this.row;
+    if (this.dense !== null) {
+      const m = this.dense;
+      const n = this.n;
+      let j = 0;
+      for (let v = 0; v < n; v++) {
+        if (j < count && v === s[j]) {
+          j++;
+          continue;
+        }
+        let fv = f;
+        const base = v * n;
+        for (let i = 0; i < count; i++) {
+          const x = m[base + s[i]];
+          if (x > fv) fv = x;
+        }
+        if (fv === Infinity) continue;
+        sink.push(fv, low[j] + values[(j + 1) * row + v] + high[j], (j & 1) === 0 ? factor : negative);
+      }
+      return;
+    }
+    this.startIntersection(count);
+    for (;;) {
+      const v = this.nextCommonNeighbour(count, 0);
+      if (v < 0) break;
+      let j = 0;
+      while (j < count && s[j] < v) j++;
+      sink.push(
+        this.lastCofaceF(count, f),
+        low[j] + values[(j + 1) * row + v] + high[j],
+        (j & 1) === 0 ? factor : negative,
+      );
+    }
+  }
+
+  zeroCoface(dim: number, key: number, f: number): number {
+    const count = dim + 1;
+    this.prepareCofaceKeys(key, count);
+    const s = this.s;
+    const values = this.binom.values;
+    const row = this.row;
+    if (this.dense !== null) {
+      const m = this.dense;
+      const n = this.n;
+      let j = 0;
+      for (let v = 0; v < n; v++) {
+        if (j < count && v === s[j]) {
+          j++;
+          continue;
+        }
+        const base = v * n;
+        let i = 0;
+        while (i < count && m[base + s[i]] <= f) i++;
+        if (i === count) {
+          this.sign = (j & 1) === 0 ? 1 : -1;
+          return this.low[j] + values[(j + 1) * row + v] + this.high[j];
+        }
+      }
+      return -1;
+    }
+    this.startIntersection(count);
+    for (;;) {
+      const v = this.nextCommonNeighbour(count, 0);
+      if (v < 0) return -1;
+      if (this.lastCofaceF(count, f) === f) {
+        let j = 0;
+        while (j < count && s[j] < v) j++;
+        this.sign = (j & 1) === 0 ? 1 : -1;
+        return this.low[j] + values[(j + 1) * row + v] + this.high[j];
+      }
+    }
+  }
+
+  zeroFacet(dim: number, key: number, f: number): number {
+    const count = dim + 1;
+    const s = this.s;
+    decodeSimplex(this.binom, key, count, s);
+    // Dropping a smaller vertex gives a larger key, so the latest facet with value f drops the smallest
+    // vertex i whose removal leaves every remaining edge ≤ f... and some edge equal to f.
+    const pf = this.pairF;
+    const width = count;
+    for (let a = 0; a < count; a++) {
+      for (let b = a + 1; b < count; b++) {
+        const x = this.edgeValue(s[a], s[b]);
+        pf[a * width + b] = x;
+        pf[b * width + a] = x;
+      }
+    }
+    const values = this.binom.values;
+    const row = this.row;
+    for (let i = 0; i < count; i++) {
+      let facetF = Number.NEGATIVE_INFINITY;
+      for (let a = 0; a < count; a++) {
+        if (a === i) continue;
+        for (let b = a + 1; b < count; b++) {
+          if (b === i) continue;
+          const x = pf[a * width + b];
+          if (x > facetF) facetF = x;
+        }
+      }
+      if (facetF === f) {
+        let facetKey = 0;
+        for (let a = 0; a < count; a++) {
+          if (a < i) facetKey += values[(a + 1) * row + s[a]];
+          else if (a > i) facetKey += values[a * row + s[a]];
+        }
+        this.sign = (i & 1) === 0 ? 1 : -1;
+        return facetKey;
+      }
+    }
+    return -1;
+  }
+
+  /**
+   * Decodes σ into `s` and tabulates, for j vertices of σ below the new vertex, the key parts of the
+   * vertices below (low[j] = Σ_{i<j} C(s_i, i+1)) and above (high[j] = Σ_{i≥j} C(s_i, i+2)).
+   */
+  private prepareCofaceKeys(key: number, count: number): void {
+    const s = this.s;
+    decodeSimplex(this.binom, key, count, s);
+    const values = this.binom.values;
+    const row = this.row;
+    const low = this.low;
+    const high = this.high;
+    low[0] = 0;
+    for (let j = 0; j < count; j++) low[j + 1] = low[j] + values[(j + 1) * row + s[j]];
+    high[count] = 0;
+    for (let j = count - 1; j >= 0; j--) high[j] = high[j + 1] + values[(j + 2) * row + s[j]];
+  }
+
+  private startIntersection(count: number): void {
+    for (let i = 0; i < count; i++) this.ptr[i] = this.offsets[this.s[i]];
+  }
+
+  /** Next common neighbour ≥ `from` of the vertices in `s` (sorted rows merged in step), or -1. */
+  private nextCommonNeighbour(count: number, from: number): number {
+    const ptr = this.ptr;
+    const t = this.targets;
+    const s = this.s;
+    const offsets = this.offsets;
+    let candidate = from;
+    for (;;) {
+      let agreed = true;
+      for (let i = 0; i < count; i++) {
+        const end = offsets[s[i] + 1];
+        let q = ptr[i];
+        while (q < end && t[q] < candidate) q++;
+        ptr[i] = q;
+        if (q === end) return -1;
+        if (t[q] > candidate) {
+          candidate = t[q];
+          agreed = false;
+        }
+      }
+      if (agreed) {
+        for (let i = 0; i < count; i++) ptr[i]++;
+        return candidate;
+      }
+    }
+  }
+
+  /** Value of σ ∪ {v} for the neighbour just returned (each ptr[i] - 1 points at the edge {s_i, v}). */
+  private lastCofaceF(count: number, f: number): number {
+    let fv = f;
+    for (let i = 0; i < count; i++) {
+      const x = this.edgeF[this.ptr[i] - 1];
+      if (x > fv) fv = x;
+    }
+    return fv;
+  }
+}

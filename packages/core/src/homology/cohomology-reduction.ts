@@ -1,0 +1,176 @@
+import type { CoboundaryModel } from "./coboundary-model.js";
+import { CofaceBuffer } from "./coface-buffer.js";
+import { ColumnStore } from "./column-store.js";
+import type { ByteLedger } from "./homology-budget.js";
+import { KeyMap } from "./key-map.js";
+import { modP, type PrimeField } from "./prime-field.js";
+import type { PairSink } from "./union-find-pairs.js";
+import { WorkingColumn } from "./working-column.js";
+
+/** Work counters of one dimension. */
+export interface ReductionCounters {
+  simplices: number;
+  cleared: number;
+  apparent: number;
+  emergent: number;
+  reduced: number;
+  additions: number;
+}
+
+/**
+ * Persistent cohomology of one dimension (V. de Silva, D. Morozov, M. Vejdemo-Johansson, "Dualities in
+ * persistent (co)homology", Inverse Problems 27, 2011): the coboundary columns of the dim-simplices are
+ * reduced from the last simplex of the filtration to the first, a column's pivot being its earliest
+ * coface. The pairs are those of the persistent homology of the filtration (H. Edelsbrunner, D. Letscher,
+ * A. Zomorodian, "Topological persistence and simplification", Discrete Comput. Geom. 28, 2002).
+ *
+ * Work is skipped three ways:
+ * - clearing (C. Chen, M. Kerber, "Persistent homology computation with a twist", EuroCG 2011): a simplex
+ *   that killed a class one dimension lower has a column that reduces to zero, so it is never built
+ *   (`cleared` holds those from the previous reduction; apparent ones are recognised on the fly);
+ * - apparent pairs of zero persistence: σ whose earliest coface τ enters at the same value and whose latest
+ *   facet is σ is paired with τ without touching the matrix;
+ * - emergent pairs: when the earliest coface of σ enters with σ and no earlier column claimed it, σ pairs
+ *   with it at once and the rest of the coboundary is never produced.
+ *
+ * Returns the pivots found (keys of dim+1 simplices that killed a class): the next dimension clears them.
+ */
+export function reduceDimension(
+  model: CoboundaryModel,
+  dim: number,
+  cleared: KeyMap,
+  field: PrimeField,
+  ledger: ByteLedger,
+  sink: PairSink,
+  keepZeroLength: boolean,
+): { pivots: KeyMap; counters: ReductionCounters } {
+  const p = field.p;
+  const inverse = field.inverse;
+  const list = model.listSimplices(dim);
+  const counters: ReductionCounters = {
+    simplices: list.count,
+    cleared: 0,
+    apparent: 0,
+    emergent: 0,
+    reduced: 0,
+    additions: 0,
+  };
+
+  // Which columns need work.
+  ledger.reserve(list.count * 4, `choosing the ${dim}-simplex columns`);
+  const todo = new Int32Array(list.count);
+  let todoCount = 0;
+  for (let i = 0; i < list.count; i++) {
+    const key = list.key[i];
+    const f = list.f[i];
+    if (cleared.has(key)) {
+      counters.cleared++;
+      continue;
+    }
+    if (dim >= 2) {
+      const facet = model.zeroFacet(dim, key, f);
+      if (facet >= 0 && model.zeroCoface(dim - 1, facet, f) === key) {
+        counters.cleared++;
+        continue;
+      }
+    }
+    const coface = model.zeroCoface(dim, key, f);
+    if (coface >= 0 && model.zeroFacet(dim + 1, coface, f) === key) {
+      counters.apparent++;
+      if (keepZeroLength) sink.pair(dim, key, f, coface, f);
+      continue;
+    }
+    todo[todoCount++] = i;
+  }
+  // Latest simplex first: (f, key) descending.
+  const columns = todo.subarray(0, todoCount);
+  const lf = list.f;
+  const lk = list.key;
+  columns.sort((a, b) => (lf[a] !== lf[b] ? (lf[a] > lf[b] ? -1 : 1) : lk[b] - lk[a]));
+
+  const pivots = new KeyMap(ledger, `recording the pivots of dimension ${dim}`, Math.max(16, todoCount));
+  const store = new ColumnStore(ledger);
+  const work = new WorkingColumn(ledger);
+  const buffer = new CofaceBuffer(ledger);
+  /** work += factor · δ(simplex). */
+  const addCoboundary = (simplexKey: number, simplexF: number, factor: number) => {
+    buffer.clear();
+    model.pushCoboundary(dim, simplexKey, simplexF, factor, p, buffer);
+    buffer.sort();
+    work.add(buffer.f, buffer.key, buffer.coef, 0, buffer.size, 1, p);
+  };
+
+  for (let c = 0; c < todoCount; c++) {
+    const i = columns[c];
+    const key = lk[i];
+    const f = lf[i];
+
+    // Emergent pair: the earliest coface enters with σ and nobody has claimed it.
+    const first = model.zeroCoface(dim, key, f);
+    if (first >= 0) {
+      const firstCoef = modP(model.sign, p);
+      if (pivots.get(first) < 0 && !claimedByApparentPair(model, dim, first, f, key)) {
+        pivots.set(first, store.addImplicit(key, f, firstCoef));
+        counters.emergent++;
+        if (keepZeroLength) sink.pair(dim, key, f, first, f);
+        continue;
+      }
+    }
+
+    counters.reduced++;
+    work.clear();
+    addCoboundary(key, f, 1);
+    for (;;) {
+      if (work.size === 0) {
+        sink.essential(dim, key, f);
+        break;
+      }
+      const pivotKey = work.key[0];
+      const pivotF = work.f[0];
+      const pivotCoef = work.coef[0];
+      const owner = pivots.get(pivotKey);
+      if (owner >= 0) {
+        // Cancel the pivot with the column that owns it: add -(c / c_owner) times that column.
+        const factor = ((p - pivotCoef) * inverse[store.pivotCoef[owner]]) % p;
+        const from = store.start[owner];
+        if (from < 0) addCoboundary(store.simplexKey[owner], store.simplexF[owner], factor);
+        else work.add(store.f, store.key, store.coef, from, from + store.length[owner], factor, p);
+        counters.additions++;
+        continue;
+      }
+      const facet = model.zeroFacet(dim + 1, pivotKey, pivotF);
+      if (facet >= 0) {
+        const facetSign = model.sign;
+        if (model.zeroCoface(dim, facet, pivotF) === pivotKey) {
+          // The pivot belongs to an apparent pair (facet, pivot) whose column is just δ(facet).
+          addCoboundary(facet, pivotF, ((p - pivotCoef) * inverse[modP(facetSign, p)]) % p);
+          counters.additions++;
+          continue;
+        }
+      }
+      // A new pivot: keep the reduced column.
+      const id = store.openExplicit();
+      for (let e = 0; e < work.size; e++) store.append(id, work.f[e], work.key[e], work.coef[e]);
+      pivots.set(pivotKey, id);
+      if (pivotF > f || keepZeroLength) sink.pair(dim, key, f, pivotKey, pivotF);
+      break;
+    }
+  }
+  work.dispose();
+  buffer.dispose();
+  store.dispose();
+  ledger.release(list.count * 4);
+  return { pivots, counters };
+}
+
+/** Whether `coface` is the partner of an apparent pair with a facet other than `self`. */
+function claimedByApparentPair(
+  model: CoboundaryModel,
+  dim: number,
+  coface: number,
+  f: number,
+  self: number,
+): boolean {
+  const facet = model.zeroFacet(dim + 1, coface, f);
+  return facet >= 0 && facet !== self && model.zeroCoface(dim, facet, f) === coface;
+}

@@ -1,0 +1,95 @@
+import { describe, expect, it } from "vitest";
+import { fromEdgeList } from "../graph/from-edge-list.js";
+import { bettiAt } from "./betti-at.js";
+import { bettiFromBarcode } from "./betti-curves.js";
+import { computeBarcode } from "./compute-barcode.js";
+import { HomologyBudgetError } from "./homology-budget.js";
+
+function graph(n: number, edges: [number, number, number][], directed = false) {
+  return fromEdgeList({
+    n,
+    sources: edges.map((e) => e[0]),
+    targets: edges.map((e) => e[1]),
+    weights: edges.map((e) => e[2]),
+    directed,
+  });
+}
+
+describe("computeBarcode", () => {
+  // A square 0-1-2-3 whose diagonal 0-2 enters last: one loop born with the 4th side, killed by the diagonal
+  // (hand-computed; common practice).
+  const square = graph(4, [
+    [0, 1, 1],
+    [1, 2, 2],
+    [2, 3, 3],
+    [3, 0, 4],
+    [0, 2, 5],
+  ]);
+
+  it("finds the loop of a square and its death by the diagonal (distance weights)", () => {
+    const barcode = computeBarcode(square, { semantics: "distance", maxDim: 1 });
+    const h1 = barcode.bars.filter((b) => b.dim === 1);
+    expect(h1).toEqual([{ dim: 1, birth: 4, death: 5, birthSimplex: [0, 3], deathSimplex: [0, 2, 3] }]);
+    const h0 = barcode.bars.filter((b) => b.dim === 0);
+    expect(h0.map((b) => b.death)).toEqual([1, 2, 3, null]);
+    expect(h0.every((b) => b.birth === 0)).toBe(true);
+  });
+
+  it("reports similarity bars in the user's units, thresholds going down", () => {
+    const barcode = computeBarcode(square, { semantics: "similarity", maxDim: 1 });
+    // Similarity: vertices are born at 5 with the edge 0-2 (a zero-length death, dropped), then 3-0 (4)
+    // merges, 2-3 (3) closes the triangle {0,2,3} at once, 1-2 (2) merges, 0-1 (1) closes {0,1,2} at once.
+    expect(barcode.bars.filter((b) => b.dim === 1)).toEqual([]);
+    expect(barcode.bars.filter((b) => b.dim === 0).map((b) => b.death)).toEqual([4, 2, null]);
+    expect(barcode.start).toBe(5);
+  });
+
+  it("keeps zero-length bars only when asked", () => {
+    const tied = graph(3, [
+      [0, 1, 1],
+      [1, 2, 1],
+      [0, 2, 1],
+    ]);
+    // Ties go by the combinatorial order: edges by larger end, then smaller, so {1,2} enters last and is
+    // the one that creates the (instantly filled) loop.
+    const plain = computeBarcode(tied, { semantics: "distance", maxDim: 1 });
+    const kept = computeBarcode(tied, { semantics: "distance", maxDim: 1, keepZeroLength: true });
+    expect(plain.bars.filter((b) => b.dim === 1)).toEqual([]);
+    expect(kept.bars.filter((b) => b.dim === 1)).toEqual([
+      { dim: 1, birth: 1, death: 1, birthSimplex: [1, 2], deathSimplex: [0, 1, 2] },
+    ]);
+  });
+
+  it("agrees with direct ranks at every threshold on a directed graph with reciprocal arcs", () => {
+    const g = graph(
+      4,
+      [
+        [0, 1, 1],
+        [1, 0, 2],
+        [1, 2, 2],
+        [2, 0, 3],
+        [0, 2, 4],
+        [2, 3, 4],
+        [3, 1, 5],
+        [1, 3, 6],
+      ],
+      true,
+    );
+    for (const prime of [2, 3]) {
+      const barcode = computeBarcode(g, { semantics: "distance", maxDim: 2, prime });
+      for (const t of [0, 1, 2, 3, 4, 5, 6]) {
+        expect(bettiFromBarcode(barcode, t)).toEqual(
+          bettiAt(g, { threshold: t, semantics: "distance", maxDim: 2, prime }),
+        );
+      }
+    }
+  });
+
+  it("stops with a budget error on a tiny budget", () => {
+    const edges: [number, number, number][] = [];
+    for (let u = 0; u < 30; u++) for (let v = u + 1; v < 30; v++) edges.push([u, v, u * 31 + v]);
+    expect(() =>
+      computeBarcode(graph(30, edges), { semantics: "distance", maxDim: 2, budget: { maxBytes: 20_000 } }),
+    ).toThrow(HomologyBudgetError);
+  });
+});

@@ -1,0 +1,263 @@
+import type { WeightedGraph } from "../graph/weighted-graph.js";
+import type { CoboundaryModel, SimplexList } from "./coboundary-model.js";
+import type { CofaceSink } from "./coface-sink.js";
+import type { ByteLedger } from "./homology-budget.js";
+import { TupleIndex } from "./tuple-index.js";
+
+/** One dimension of the directed flag complex, sorted in filtration order: (f, then tuple lexicographically). */
+interface DimensionTable {
+  readonly count: number;
+  readonly f: Float64Array;
+  /** Vertex tuples, (dim + 1) per simplex. */
+  readonly tuples: Int32Array;
+  /** Facets of each simplex as positions in the table below, dropping vertex 0, 1, … in turn. */
+  facets: Int32Array | null;
+  /** Coboundary rows (cofaces in ascending position) with the sign of this simplex in their boundary. */
+  cofaceStart: Int32Array | null;
+  cofaces: Int32Array | null;
+  cofaceSigns: Int8Array | null;
+}
+
+/**
+ * Explicit simplex tables of the directed flag complex: a k-simplex is a tuple (v0 … vk) with an arc
+ * vi → vj for every i < j, entering at the largest value of those arcs. Simplices are stored up to the
+ * top dimension, sorted, and a simplex's key is its position in its table, so key order is filtration
+ * order. Coboundaries are stored as rows.
+ */
+export class DirectedFlagTables implements CoboundaryModel {
+  readonly vertexCount: number;
+  sign = 1;
+  private readonly tables: DimensionTable[];
+  private readonly lists: (SimplexList | null)[] = [];
+
+  constructor(graph: WeightedGraph, edgeF: Float64Array, topDim: number, ledger: ByteLedger) {
+    this.vertexCount = graph.n;
+    this.tables = enumerateDirectedSimplices(graph, edgeF, topDim, ledger);
+    for (let d = 1; d <= topDim; d++) linkFacets(this.tables[d - 1], this.tables[d], d, ledger);
+  }
+
+  /** Number of simplices of each dimension (for statistics). */
+  counts(): number[] {
+    return this.tables.map((t) => t.count);
+  }
+
+  listSimplices(dim: number): SimplexList {
+    const cached = this.lists[dim];
+    if (cached) return cached;
+    const t = this.tables[dim];
+    const key = new Float64Array(t.count);
+    for (let i = 0; i < t.count; i++) key[i] = i;
+    const list = { f: t.f, key, count: t.count };
+    this.lists[dim] = list;
+    return list;
+  }
+
+  releaseSimplices(dim: number): void {
+    this.lists[dim] = null;
+  }
+
+  vertices(dim: number, key: number, out: Int32Array): void {
+    const t = this.tables[dim];
+    for (let i = 0; i <= dim; i++) out[i] = t.tuples[key * (dim + 1) + i];
+  }
+
+  pushCoboundary(dim: number, key: number, _f: number, factor: number, p: number, sink: CofaceSink): void {
+    const t = this.tables[dim];
+    const up = this.tables[dim + 1];
+    const start = t.cofaceStart as Int32Array;
+    const cofaces = t.cofaces as Int32Array;
+    const signs = t.cofaceSigns as Int8Array;
+    const negative = p - factor;
+    for (let q = start[key]; q < start[key + 1]; q++) {
+      const c = cofaces[q];
+      sink.push(up.f[c], c, signs[q] > 0 ? factor : negative);
+    }
+  }
+
+  zeroCoface(dim: number, key: number, f: number): number {
+    const t = this.tables[dim];
+    const start = t.cofaceStart as Int32Array;
+    const q = start[key];
+    if (q === start[key + 1]) return -1;
+    const c = (t.cofaces as Int32Array)[q];
+    if (this.tables[dim + 1].f[c] !== f) return -1;
+    this.sign = (t.cofaceSigns as Int8Array)[q];
+    return c;
+  }
+
+  zeroFacet(dim: number, key: number, f: number): number {
+    const t = this.tables[dim];
+    const below = this.tables[dim - 1];
+    const facets = t.facets as Int32Array;
+    let best = -1;
+    let bestI = 0;
+    for (let i = 0; i <= dim; i++) {
+      const g = facets[key * (dim + 1) + i];
+      if (g > best) {
+        best = g;
+        bestI = i;
+      }
+    }
+    if (best < 0 || below.f[best] !== f) return -1;
+    this.sign = (bestI & 1) === 0 ? 1 : -1;
+    return best;
+  }
+}
+
+/** Depth-first enumeration of all directed flag simplices up to `topDim`, then a sort per dimension. */
+function enumerateDirectedSimplices(
+  graph: WeightedGraph,
+  edgeF: Float64Array,
+  topDim: number,
+  ledger: ByteLedger,
+): DimensionTable[] {
+  const n = graph.n;
+  const { offsets, targets } = graph;
+  const f: number[][] = [];
+  const tuples: number[][] = [];
+  // Plain arrays while enumerating (sizes unknown); the budget is charged per simplex stored.
+  for (let d = 0; d <= topDim; d++) {
+    f.push([]);
+    tuples.push([]);
+  }
+  let maxOut = 0;
+  for (let u = 0; u < n; u++) maxOut = Math.max(maxOut, offsets[u + 1] - offsets[u]);
+  // Candidate extensions per depth: vertex and running value of the simplex extended by it.
+  const candV: Int32Array[] = [];
+  const candF: Float64Array[] = [];
+  const candCount = new Int32Array(topDim + 2);
+  for (let d = 0; d <= topDim; d++) {
+    candV.push(new Int32Array(maxOut));
+    candF.push(new Float64Array(maxOut));
+  }
+  const tuple = new Int32Array(topDim + 1);
+  const bytesPerSimplex = (d: number) => 8 + 4 * (d + 1) + 8 * (d + 1) + 16;
+  let stored = 0;
+
+  const record = (d: number, value: number) => {
+    stored += bytesPerSimplex(d);
+    if (stored + ledger.held > ledger.maxBytes) ledger.reserve(stored, "listing directed simplices");
+    f[d].push(value);
+    for (let i = 0; i <= d; i++) tuples[d].push(tuple[i]);
+  };
+
+  const extend = (depth: number) => {
+    // tuple[0 .. depth] is a simplex; its extensions are candV[depth][0 .. candCount[depth]).
+    if (depth === topDim) return;
+    const cv = candV[depth];
+    const cf = candF[depth];
+    const m = candCount[depth];
+    for (let c = 0; c < m; c++) {
+      const v = cv[c];
+      tuple[depth + 1] = v;
+      record(depth + 1, cf[c]);
+      if (depth + 1 === topDim) continue;
+      // Next candidates: current candidates w that v also reaches (v → w). The value of tuple + v + w is
+      // the largest of: tuple + v (cf[c]), the arcs from the tuple to w (cf[c2]) and v → w.
+      const base = cf[c];
+      const nv = candV[depth + 1];
+      const nf = candF[depth + 1];
+      let k = 0;
+      let q = offsets[v];
+      const end = offsets[v + 1];
+      for (let c2 = 0; c2 < m; c2++) {
+        const w = cv[c2];
+        while (q < end && targets[q] < w) q++;
+        if (q === end) break;
+        if (targets[q] === w) {
+          nv[k] = w;
+          nf[k] = Math.max(base, cf[c2], edgeF[q]);
+          k++;
+        }
+      }
+      candCount[depth + 1] = k;
+      extend(depth + 1);
+    }
+  };
+
+  for (let u = 0; u < n; u++) {
+    tuple[0] = u;
+    f[0].push(Number.NEGATIVE_INFINITY);
+    tuples[0].push(u);
+    let k = 0;
+    for (let q = offsets[u]; q < offsets[u + 1]; q++) {
+      candV[0][k] = targets[q];
+      candF[0][k] = edgeF[q];
+      k++;
+    }
+    candCount[0] = k;
+    extend(0);
+  }
+  ledger.reserve(stored, "storing directed simplex tables");
+
+  const out: DimensionTable[] = [];
+  for (let d = 0; d <= topDim; d++) {
+    const count = f[d].length;
+    const order = new Int32Array(count);
+    for (let i = 0; i < count; i++) order[i] = i;
+    const fd = f[d];
+    const td = tuples[d];
+    const w = d + 1;
+    order.sort((a, b) => {
+      if (fd[a] !== fd[b]) return fd[a] < fd[b] ? -1 : 1;
+      for (let i = 0; i < w; i++) {
+        const x = td[a * w + i] - td[b * w + i];
+        if (x !== 0) return x;
+      }
+      return 0;
+    });
+    const sortedF = new Float64Array(count);
+    const sortedT = new Int32Array(count * w);
+    for (let i = 0; i < count; i++) {
+      sortedF[i] = fd[order[i]];
+      for (let j = 0; j < w; j++) sortedT[i * w + j] = td[order[i] * w + j];
+    }
+    out.push({
+      count,
+      f: sortedF,
+      tuples: sortedT,
+      facets: null,
+      cofaceStart: null,
+      cofaces: null,
+      cofaceSigns: null,
+    });
+  }
+  return out;
+}
+
+/** Fills `upper.facets` and the coboundary rows of `lower` (tuples of `lower` have dim vertices). */
+function linkFacets(lower: DimensionTable, upper: DimensionTable, dim: number, ledger: ByteLedger): void {
+  const w = dim; // vertices per facet
+  const index = new TupleIndex(lower.tuples, w, lower.count);
+  const facets = new Int32Array(upper.count * (dim + 1));
+  const probe = new Int32Array(w);
+  const degree = new Int32Array(lower.count + 1);
+  for (let q = 0; q < upper.count; q++) {
+    for (let i = 0; i <= dim; i++) {
+      let k = 0;
+      for (let j = 0; j <= dim; j++) if (j !== i) probe[k++] = upper.tuples[q * (dim + 1) + j];
+      const g = index.find(probe);
+      facets[q * (dim + 1) + i] = g;
+      degree[g + 1]++;
+    }
+  }
+  for (let g = 0; g < lower.count; g++) degree[g + 1] += degree[g];
+  const total = degree[lower.count];
+  ledger.reserve(total * 5, "linking directed cofaces");
+  const cofaces = new Int32Array(total);
+  const signs = new Int8Array(total);
+  const fill = degree.slice(0, lower.count);
+  // Cofaces visited in ascending position, so every row comes out sorted.
+  for (let q = 0; q < upper.count; q++) {
+    for (let i = 0; i <= dim; i++) {
+      const g = facets[q * (dim + 1) + i];
+      cofaces[fill[g]] = q;
+      signs[fill[g]] = (i & 1) === 0 ? 1 : -1;
+      fill[g]++;
+    }
+  }
+  upper.facets = facets;
+  lower.cofaceStart = degree;
+  lower.cofaces = cofaces;
+  lower.cofaceSigns = signs;
+}

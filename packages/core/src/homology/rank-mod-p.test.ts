@@ -1,0 +1,72 @@
+import { describe, expect, it } from "vitest";
+import { primeField } from "./prime-field.js";
+import { rankModP } from "./rank-mod-p.js";
+
+/** Columns given densely (array of columns, each an array over rows). */
+function rankOf(columns: number[][], p: number): number {
+  const start = [0];
+  const rows: number[] = [];
+  const coefs: number[] = [];
+  for (const col of columns) {
+    col.forEach((x, r) => {
+      if (x !== 0) {
+        rows.push(r);
+        coefs.push(x);
+      }
+    });
+    start.push(rows.length);
+  }
+  return rankModP(
+    Int32Array.from(start),
+    Int32Array.from(rows),
+    Int32Array.from(coefs),
+    columns[0]?.length ?? 0,
+    primeField(p),
+  );
+}
+
+describe("rankModP", () => {
+  it("depends on the characteristic like linear algebra says (hand-checked determinants, common practice)", () => {
+    // det [[1,1],[1,-1]] = -2: rank 2 over Z/3, rank 1 over Z/2.
+    expect(
+      rankOf(
+        [
+          [1, 1],
+          [1, -1],
+        ],
+        3,
+      ),
+    ).toBe(2);
+    expect(
+      rankOf(
+        [
+          [1, 1],
+          [1, -1],
+        ],
+        2,
+      ),
+    ).toBe(1);
+    // Columns e1+e2, e2+e3, e1+e3: det 2.
+    expect(
+      rankOf(
+        [
+          [1, 1, 0],
+          [0, 1, 1],
+          [1, 0, 1],
+        ],
+        2,
+      ),
+    ).toBe(2);
+    expect(
+      rankOf(
+        [
+          [1, 1, 0],
+          [0, 1, 1],
+          [1, 0, 1],
+        ],
+        5,
+      ),
+    ).toBe(3);
+    expect(rankOf([[0, 0, 0]], 2)).toBe(0);
+  });
+});

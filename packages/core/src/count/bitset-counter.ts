@@ -17,6 +17,13 @@ let stack = new Int32Array(0); // candidate sets, one block of W words per depth
 const packed = new Int32Array(32); // rows of a compacted candidate set of ≤ 32 members
 let packedIndex = new Int32Array(0); // local index → position in the compacted set
 let cnt = new Float64Array(0);
+/** BINOMIAL[c * 33 + t] = C(c, t) for 0 ≤ t ≤ c ≤ 32 (Pascal's rule; exact in doubles). */
+const BINOMIAL = new Float64Array(33 * 33);
+for (let c = 0; c <= 32; c++) {
+  BINOMIAL[c * 33] = 1;
+  for (let t = 1; t <= c; t++)
+    BINOMIAL[c * 33 + t] = BINOMIAL[(c - 1) * 33 + t - 1] + BINOMIAL[(c - 1) * 33 + t];
+}
 let W = 1;
 let undirected = true;
 let capDim = 0; // highest dimension counted
@@ -127,7 +134,8 @@ function expand1(rows: Int32Array, base: number, stride: number, cand: number, d
       cnt[depth + 1] += total;
       produced[0] += total;
       total = 0;
-      expand1(rows, base, stride, x, depth + 1);
+      if (undirected && isClique(rows, base, stride, x)) countClique(c, depth + 1);
+      else expand1(rows, base, stride, x, depth + 1);
     } else {
       const j = 31 - Math.clz32(x);
       const k = 31 - Math.clz32(x ^ (1 << j));
@@ -145,6 +153,41 @@ function expand1(rows: Int32Array, base: number, stride: number, cand: number, d
   cnt[depth + 1] += total;
   produced[0] += total;
   if (produced[0] > budget) fail();
+}
+
+/**
+ * Undirected only: whether every member of x is adjacent to every later member (rows hold later
+ * neighbours only). Stops at the first member that misses one, so failing is cheap.
+ */
+function isClique(rows: Int32Array, base: number, stride: number, x: number): boolean {
+  let bits = x;
+  while (bits !== 0) {
+    const b = 31 - Math.clz32(bits);
+    bits ^= 1 << b;
+    // members below b must all list b... equivalently each member lists every member above it
+    const above = x & ~((2 << b) - 1);
+    if ((rows[base + b * stride] & above) !== above) return false;
+  }
+  return true;
+}
+
+/**
+ * The subtree of a candidate set that is itself a clique of c members (already counted at dimension
+ * depth): any t of them extend the simplex, C(c, t) simplices of dimension depth + t − 1 for t ≥ 2.
+ */
+function countClique(c: number, depth: number): void {
+  let made = 0;
+  for (let t = 2; t <= c; t++) {
+    const dim = depth + t - 1;
+    if (dim > capDim) {
+      truncated = true;
+      break;
+    }
+    const ways = BINOMIAL[c * 33 + t];
+    cnt[dim] += ways;
+    made += ways;
+  }
+  produced[0] += made;
 }
 
 /** For a set y of exactly two members j, k: how many of the arcs j→k, k→j exist (else 0). */

@@ -66,8 +66,33 @@ export function folderContents(dir: string): Map<string, Buffer> {
   return out;
 }
 
-/** features.csv parsed: header and rows of cells (the files written here have no quoted cells). */
+/** A CSV file written by extract, parsed (RFC 4180 quoting; no line breaks inside cells). */
 export function readFeatureTable(path: string): { header: string[]; rows: string[][] } {
-  const [head, ...rest] = readFileSync(path, "utf8").trimEnd().split("\n");
-  return { header: head.split(","), rows: rest.map((line) => line.split(",")) };
+  const [head, ...rest] = readFileSync(path, "utf8").trimEnd().split("\n").map(csvCells);
+  return { header: head, rows: rest };
+}
+
+function csvCells(line: string): string[] {
+  const cells: string[] = [];
+  let at = 0;
+  while (at <= line.length) {
+    if (line[at] === '"') {
+      let cell = "";
+      at++;
+      while (at < line.length) {
+        if (line[at] === '"' && line[at + 1] === '"') {
+          cell += '"';
+          at += 2;
+        } else if (line[at] === '"') break;
+        else cell += line[at++];
+      }
+      cells.push(cell);
+      at += 2; // closing quote and comma
+    } else {
+      const end = line.indexOf(",", at);
+      cells.push(line.slice(at, end < 0 ? line.length : end));
+      at = end < 0 ? line.length + 1 : end + 1;
+    }
+  }
+  return cells;
 }

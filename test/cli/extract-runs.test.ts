@@ -117,7 +117,7 @@ describe("extract run folders", () => {
     expect(recordsAtExit).toBeLessThan(SLOW_DATASET.length); // really stopped midway
     // Nothing half-written: no temporary files, and the tables list exactly the finished graphs.
     const files = [...folderContents(out).keys()];
-    expect(files.filter((f) => f.includes(".partial-"))).toEqual([]);
+    expect(files.filter((f) => f.endsWith(".tmp"))).toEqual([]);
     const rows = readFileSync(join(out, "features.csv"), "utf8").trimEnd().split("\n").length - 1;
     expect(rows).toBe(recordsAtExit);
 

@@ -1,8 +1,7 @@
+import { type DatasetEntry, type DatasetProblem, encodeNpz } from "@cliquescape/io";
 import { csvDocument } from "../render/csv.js";
-import type { DatasetEntry, DatasetProblem } from "./dataset-source.js";
 import type { GraphFailure } from "./graph-failure.js";
 import { type GraphRecord, recordValues } from "./graph-record.js";
-import { encodeNpz } from "./npz-writer.js";
 
 /** A row of errors.csv: a graph left out, or a manifest row that named no usable graph. */
 export interface ErrorRow {

@@ -7,11 +7,15 @@ import {
   nodeEdgeFeatures,
   type WeightedGraph,
 } from "@cliquescape/core";
-import { graphFeatures } from "@cliquescape/io";
+import {
+  type DatasetEntry,
+  encodeNpz,
+  graphFeatures,
+  type NodeCoordinates,
+  type NpzArray,
+} from "@cliquescape/io";
 import { type BarcodeReport, renderBarcode } from "../commands/barcode.js";
-import type { DatasetEntry } from "./dataset-source.js";
 import { type GraphFailure, graphFailureOf } from "./graph-failure.js";
-import { encodeNpz, type NpzArray } from "./npz-writer.js";
 import { readPreparedGraph } from "./read-prepared-graph.js";
 import type { ResolvedRunSpec } from "./run-spec.js";
 
@@ -56,7 +60,7 @@ export function computeGraph(
   try {
     const read = readPreparedGraph(entry, spec.preparation);
     warnings = read.warnings;
-    const { graph } = read;
+    const { graph, coordinates } = read;
     const semantics = spec.preparation.weights;
     const features = graphFeatures(graph, {
       config: featureConfigOf(spec),
@@ -69,7 +73,7 @@ export function computeGraph(
       spec.outputs.barcodes && features.barcode
         ? barcodeDocument(entry.id, relativeFile, graph, features.barcode, spec)
         : null;
-    const bundle = spec.outputs.bundles ? gnnBundle(graph, labelCode, spec) : null;
+    const bundle = spec.outputs.bundles ? gnnBundle(graph, labelCode, spec, coordinates) : null;
     return {
       ok: true,
       values: features.values,
@@ -118,9 +122,15 @@ export function nodeFeatureThreshold(graph: WeightedGraph, spec: ResolvedRunSpec
 
 /**
  * The GNN bundle of one graph: arrays named and shaped as graph-learning libraries take them (x, edge_index
- * 2×E, edge_attr, y), with the column names, node labels and the threshold they were read at.
+ * 2×E, edge_attr, y), with the column names, node labels, the threshold they were read at and, when the
+ * dataset gives node coordinates, their positions (pos).
  */
-function gnnBundle(graph: WeightedGraph, labelCode: number, spec: ResolvedRunSpec): Uint8Array {
+function gnnBundle(
+  graph: WeightedGraph,
+  labelCode: number,
+  spec: ResolvedRunSpec,
+  coordinates: NodeCoordinates | undefined,
+): Uint8Array {
   const semantics = spec.preparation.weights;
   const threshold = nodeFeatureThreshold(graph, spec);
   const f = nodeEdgeFeatures(graph, {
@@ -144,5 +154,9 @@ function gnnBundle(graph: WeightedGraph, labelCode: number, spec: ResolvedRunSpe
     // NaN when every edge is kept.
     { name: "threshold", dtype: "float64", shape: [1], values: [threshold ?? Number.NaN] },
   ];
+  if (coordinates) {
+    const pos = Float32Array.from(coordinates.values);
+    arrays.push({ name: "pos", dtype: "float32", shape: [graph.n, coordinates.dims], values: pos });
+  }
   return encodeNpz(arrays);
 }

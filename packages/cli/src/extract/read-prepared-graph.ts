@@ -1,6 +1,10 @@
 import type { WeightedGraph } from "@cliquescape/core";
-import { type GraphReadOptions, readGraphFile } from "@cliquescape/io";
-import type { DatasetEntry } from "./dataset-source.js";
+import {
+  type DatasetEntry,
+  type GraphReadOptions,
+  type NodeCoordinates,
+  readDatasetGraph,
+} from "@cliquescape/io";
 import { transformEdges } from "./edge-transform.js";
 import type { RunSpec } from "./run-spec.js";
 
@@ -18,16 +22,14 @@ export function readOptionsFor(entry: DatasetEntry, preparation: RunSpec["prepar
   };
 }
 
-/** Reads one entry and prepares it exactly as the spec says: read, pick the slice, transform the edges. */
+/** Reads one entry and prepares it exactly as the spec says: read (a file or a stack's slice), transform. */
 export function readPreparedGraph(
   entry: DatasetEntry,
   preparation: RunSpec["preparation"],
-): { graph: WeightedGraph; warnings: string[] } {
-  const { graphs, warnings } = readGraphFile(entry.file, readOptionsFor(entry, preparation));
-  const slice = entry.slice ?? 0;
-  if (slice >= graphs.length) {
-    throw new RangeError(`${entry.file} holds ${graphs.length} graph(s); slice ${slice} is out of range`);
-  }
-  const graph = transformEdges(graphs[slice], preparation.transform, preparation.negatives);
-  return { graph, warnings };
+): { graph: WeightedGraph; warnings: string[]; coordinates?: NodeCoordinates } {
+  // The reader lets a manifest's directed column win; a forced direction must win over it instead.
+  const read = preparation.directed === "auto" ? entry : { ...entry, directed: undefined };
+  const { graph, warnings, coordinates } = readDatasetGraph(read, readOptionsFor(entry, preparation));
+  const prepared = transformEdges(graph, preparation.transform, preparation.negatives);
+  return { graph: prepared, warnings, ...(coordinates ? { coordinates } : {}) };
 }

@@ -1,25 +1,23 @@
 import { existsSync, readFileSync } from "node:fs";
-import { relative, sep } from "node:path";
+import { dirname, relative, sep } from "node:path";
 import { checkFeatureAxis } from "@cliquescape/core";
-import { graphFeatureNames } from "@cliquescape/io";
+import {
+  type Dataset,
+  type DatasetEntry,
+  graphFeatureNames,
+  hashFile,
+  openDataset,
+  writeFileAtomic,
+} from "@cliquescape/io";
 import { UsageError } from "../options/graph-options.js";
 import { VERSION } from "../version.js";
 import { assembleTables, type ErrorRow, labelCode, problemRow } from "./assemble-tables.js";
-import { type Dataset, type DatasetEntry, openDataset } from "./dataset-source.js";
 import { featureConfigOf, type GraphOutcome } from "./graph-job.js";
 import { encodeRecord, type GraphRecord, readRecord } from "./graph-record.js";
-import { hashFile } from "./hash-inputs.js";
 import { validateSpec } from "./load-spec.js";
 import { startProgress } from "./progress.js";
 import { needsFirstPass, resolveGrid } from "./resolve-grid.js";
-import {
-  createRunFolder,
-  graphPaths,
-  type RunFolder,
-  removeLeftoverTemps,
-  runFolder,
-  writeFileAtomic,
-} from "./run-folder.js";
+import { createRunFolder, graphPaths, type RunFolder, removeLeftoverTemps, runFolder } from "./run-folder.js";
 import type { ResolvedRunSpec, RunSpec } from "./run-spec.js";
 import { renderSummary } from "./run-summary.js";
 import { settingsFingerprint, specDifferences } from "./spec-differences.js";
@@ -57,10 +55,12 @@ export interface ExtractResult {
 export async function runExtract(request: ExtractRequest): Promise<ExtractResult> {
   const requested = validateSpec(request.spec, request.specSource);
   const dataset = openDataset(request.dataset);
-  const relativeFile = (file: string) => relative(dataset.root, file).split(sep).join("/");
+  // Files are named relative to the dataset's folder, so records and tables do not depend on where it sits.
+  const base = dataset.kind === "folder" ? dataset.root : dirname(dataset.root);
+  const relativeFile = (file: string) => relative(base, file).split(sep).join("/");
   const folder = runFolder(request.out);
   const previous = existsSync(folder.spec) ? validateSpec(readJson(folder.spec), folder.spec) : null;
-  const hashes = dataset.entries.map((entry) => hashFile(entry.file) ?? "unreadable");
+  const hashes = dataset.entries.map((entry) => hashOrNote(entry.file));
 
   const problems: ErrorRow[] = dataset.problems.map((p) => problemRow(p, relativeFile(p.file)));
   const spec = await fixSpec(requested, previous, dataset, request);
@@ -326,7 +326,7 @@ function specDocument(
             {
               id: "(manifest)",
               file: relativeFile(datasetArgument),
-              sha256: hashFile(datasetArgument) ?? "unreadable",
+              sha256: hashOrNote(datasetArgument),
             },
           ]
         : []),
@@ -342,4 +342,13 @@ function specDocument(
 
 function readJson(path: string): Record<string, unknown> {
   return JSON.parse(readFileSync(path, "utf8")) as Record<string, unknown>;
+}
+
+/** The file's SHA-256, or "unreadable" (its reader will then say why, as the graph's error). */
+function hashOrNote(path: string): string {
+  try {
+    return hashFile(path);
+  } catch {
+    return "unreadable";
+  }
 }

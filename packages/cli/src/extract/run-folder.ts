@@ -1,6 +1,6 @@
 import { createHash } from "node:crypto";
-import { existsSync, mkdirSync, readdirSync, renameSync, rmSync, writeFileSync } from "node:fs";
-import { basename, dirname, join } from "node:path";
+import { existsSync, mkdirSync, readdirSync, rmSync } from "node:fs";
+import { join } from "node:path";
 
 /**
  * The run folder. Tables at the top, one file per graph below:
@@ -69,23 +69,14 @@ export function fileStem(id: string): string {
     .slice(0, 100)}~${hash}`;
 }
 
-const TEMP_MARK = ".partial-";
-
-/**
- * Writes through a temporary file in the same folder and renames it into place, so a reader (or a run
- * interrupted mid-write) sees the old file or the new one, never a part.
- */
-export function writeFileAtomic(path: string, data: string | Uint8Array): void {
-  const temp = join(dirname(path), `${TEMP_MARK}${process.pid}-${basename(path)}`);
-  writeFileSync(temp, data);
-  renameSync(temp, path);
-}
+/** The temporary files of io's writeFileAtomic: `.<name>.<pid>.<n>.tmp`. */
+export const TEMPORARY_FILE = /^\..+\.\d+\.\d+\.tmp$/;
 
 /** Removes temporary files a killed process may have left (they are never a finished output). */
 export function removeLeftoverTemps(folder: RunFolder): void {
   for (const dir of [folder.root, folder.barcodes, folder.bundles, folder.records]) {
     if (!existsSync(dir)) continue;
     for (const name of readdirSync(dir))
-      if (name.startsWith(TEMP_MARK)) rmSync(join(dir, name), { force: true });
+      if (TEMPORARY_FILE.test(name)) rmSync(join(dir, name), { force: true });
   }
 }

@@ -30,9 +30,11 @@ export function renderSummary(input: SummaryInput): string {
   };
   const lines: string[] = [];
   const status = input.interrupted ? "interrupted" : "done";
+  const waiting = input.totalGraphs - records.length;
   lines.push(
-    `${status}: ${ok} of ${input.totalGraphs} graphs in the tables` +
-      `${input.skipped > 0 ? ` (${input.skipped} already done before this run)` : ""}, ${errors.length} left out`,
+    `${status}: ${ok} graphs in the tables` +
+      `${input.skipped > 0 ? ` (${input.skipped} already done before this run)` : ""}, ${errors.length} left out` +
+      `${waiting > 0 ? `, ${waiting} not reached yet` : ""}`,
   );
   const axis = spec.resolvedGrid;
   const range = `${formatWeight(axis.values[0])} .. ${formatWeight(axis.values[axis.values.length - 1])}`;

@@ -1,4 +1,4 @@
-import type { DatasetEntry } from "./dataset-source.js";
+import type { DatasetEntry } from "@cliquescape/io";
 import type { GraphFailure } from "./graph-failure.js";
 import type { GraphOutcome } from "./graph-job.js";
 import type { ResolvedRunSpec, RunSpec } from "./run-spec.js";

@@ -79,7 +79,7 @@ describe("readGraphFile: choosing the reader", () => {
 describe("readGraphFile: file-level errors", () => {
   it("unknown extension", () => {
     expect(failure(file("g.xlsx", "")).message).toBe(
-      `${join(dir, "g.xlsx")}: cannot tell the format from the extension ".xlsx"; use .csv, .tsv, .txt or .npy, or set the format option`,
+      `${join(dir, "g.xlsx")}: cannot tell the format from the extension ".xlsx"; use .csv, .tsv, .txt, .npy, .npz, .mat, .graphml or .gexf, or set the format option`,
     );
   });
 

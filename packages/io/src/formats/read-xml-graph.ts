@@ -112,7 +112,7 @@ function dropNonEdges(
         throw new InputFileError(
           path,
           "not-a-number",
-          `edge ${describeEdge(graph, edge)}: weight ${JSON.stringify(raw)} is not a number (set nanIsNoEdge to read NaN as "no edge")`,
+          `edge ${describeEdge(graph, edge)}: weight ${typeof raw === "string" ? JSON.stringify(raw) : String(raw)} is not a number (set nanIsNoEdge to read NaN as "no edge")`,
         );
       }
       drop.push(edge);

@@ -1,8 +1,6 @@
 import { DOMParser } from "@xmldom/xmldom";
 import { InputFileError } from "../input-file-error.js";
 
-class XmlProblem extends Error {}
-
 /**
  * Checks that `text` is well-formed XML and returns its root element's name and how many elements of each
  * `counted` tag it holds. A malformed document is an error at the parser's line and column, where
@@ -14,19 +12,26 @@ export function checkXml(
   counted: readonly string[],
 ): { root: string; counts: Record<string, number> } {
   let document: ReturnType<DOMParser["parseFromString"]>;
+  // The parser wraps what onError throws; keep the first problem's own words.
+  let problem: string | undefined;
   try {
     document = new DOMParser({
       onError: (level, message) => {
-        if (level !== "warning") throw new XmlProblem(message);
+        if (level === "warning") return;
+        problem ??= message;
+        throw new Error(message);
       },
     }).parseFromString(text, "application/xml");
   } catch (error) {
-    const cause = (error as { cause?: unknown }).cause;
-    const reason = cause instanceof XmlProblem ? cause.message : (error as Error).message;
     const locator = (error as { locator?: { lineNumber?: number; columnNumber?: number } }).locator;
     const line = locator?.lineNumber;
     const position = line !== undefined && line > 0 ? { line, column: locator?.columnNumber } : {};
-    throw new InputFileError(file, "unreadable", `not well-formed XML: ${reason}`, position);
+    throw new InputFileError(
+      file,
+      "unreadable",
+      `not well-formed XML: ${problem ?? (error as Error).message}`,
+      position,
+    );
   }
   const root = document.documentElement?.localName ?? "";
   const counts: Record<string, number> = {};

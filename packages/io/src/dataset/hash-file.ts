@@ -1,5 +1,6 @@
 import { createHash } from "node:crypto";
 import { closeSync, openSync, readSync } from "node:fs";
+import { InputFileError } from "../input-file-error.js";
 
 const CHUNK = 1 << 20;
 
@@ -7,13 +8,20 @@ const CHUNK = 1 << 20;
 export function hashFile(path: string): string {
   const hash = createHash("sha256");
   const buffer = Buffer.allocUnsafe(CHUNK);
-  const fd = openSync(path, "r");
+  let fd: number;
+  try {
+    fd = openSync(path, "r");
+  } catch (error) {
+    throw new InputFileError(path, "unreadable", `cannot read file: ${(error as Error).message}`);
+  }
   try {
     for (;;) {
       const read = readSync(fd, buffer, 0, CHUNK, null);
       if (read === 0) break;
       hash.update(buffer.subarray(0, read));
     }
+  } catch (error) {
+    throw new InputFileError(path, "unreadable", `cannot read file: ${(error as Error).message}`);
   } finally {
     closeSync(fd);
   }

@@ -337,5 +337,7 @@ describe("hashFile", () => {
       expect(hashFile(f)).toBe(execFileSync("sha256sum", [f], { encoding: "utf8" }).split(" ")[0]);
     }
     expect(hashFile(empty)).toBe("e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855");
+    expect(() => hashFile(join(root, "h/none.bin"))).toThrow(/h\/none\.bin: cannot read file: ENOENT/);
+    expect(() => hashFile(join(root, "h"))).toThrow(/h: cannot read file: EISDIR/);
   });
 });

@@ -169,7 +169,8 @@ function readMatrix(
   if (!isNumericClass(classNumber) || complex) return variable;
   if (dims.some((d) => d < 0)) bad(`variable "${name}" has a negative dimension (${dims.join("×")})`);
   const dataTag = sub(nameTag.next);
-  if (dataTag.next > end + 8) bad(`variable "${name}": its data runs past the end of its element`);
+  if (dataTag.dataStart + dataTag.size > end)
+    bad(`variable "${name}": its data runs past the end of its element`);
   const type = NUMERIC_DATA_TYPES[dataTag.type];
   if (!type) bad(`variable "${name}": data of element type ${dataTag.type} is not numeric`);
   const count = dims.reduce((a, b) => a * b, 1);

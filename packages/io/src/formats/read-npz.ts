@@ -4,7 +4,7 @@ import { type NpyArray, parseNpy } from "../parse-npy.js";
 import { readFileBytes } from "../read-file-bytes.js";
 import { DEFAULT_MAX_NPY_BYTES, type GraphReadOptions } from "../read-options.js";
 import { arrayGraphs } from "./matrix-stack.js";
-import { extractZipMembers } from "./zip-members.js";
+import { extractZipMembers, listZipMembers } from "./zip-members.js";
 
 export interface NpzReadOptions extends GraphReadOptions {
   /** Which array of the .npz holds the graphs. Default: the only 2-D or 3-D numeric array whose dimensions are all at least 2. */
@@ -20,14 +20,24 @@ export interface NpzMember {
 
 /**
  * Reads an .npz file (numpy.savez / savez_compressed: a zip of .npy members, stored or deflated) and
- * parses every member's header. `maxBytes` bounds the file and the unpacked members alike.
+ * parses every member's header (only the `only` member, when the archive has it). `maxBytes` bounds the
+ * file and the unpacked members alike.
  */
-export function readNpzMembers(path: string, maxBytes = DEFAULT_MAX_NPY_BYTES): NpzMember[] {
+export function readNpzMembers(path: string, maxBytes = DEFAULT_MAX_NPY_BYTES, only?: string): NpzMember[] {
   const bytes = readFileBytes(path, maxBytes);
-  const files = extractZipMembers(bytes, path, (name) => name.endsWith(".npy"), maxBytes);
-  if (files.size === 0) {
+  const members = listZipMembers(bytes, path).filter((m) => m.name.endsWith(".npy"));
+  if (members.length === 0) {
     throw new InputFileError(path, "bad-npy", "the .npz archive holds no .npy arrays");
   }
+  // A named array is the only one unpacked, if it is there; else all are, to list them in the error.
+  const target = `${only}.npy`;
+  const named = only !== undefined && members.some((m) => m.name === target);
+  const files = extractZipMembers(
+    bytes,
+    path,
+    (name) => (named ? name === target : name.endsWith(".npy")),
+    maxBytes,
+  );
   return [...files].map(([member, data]) => {
     const name = member.slice(0, -".npy".length);
     try {
@@ -88,7 +98,7 @@ export function readNpzFile(
   path: string,
   options: NpzReadOptions = {},
 ): GraphsReadResult & { array: string } {
-  const array = pickNpzArray(readNpzMembers(path, options.maxBytes), path, options.array);
+  const array = pickNpzArray(readNpzMembers(path, options.maxBytes, options.array), path, options.array);
   const result = arrayGraphs(array, 0, path, options, {
     prefix: `array "${array.name}": `,
     byteOffsetsInFile: false,

@@ -279,6 +279,15 @@ describe("a stack", () => {
     );
   });
 
+  it("a stack file that disappears after opening is an InputFileError, not a crash", () => {
+    const file = put("s/gone.npy", encodeNpy(values, [3, 3, 3]));
+    const dataset = openDataset(file);
+    rmSync(file);
+    const e = errorOf(() => readDatasetGraph(dataset.entries[1], {}));
+    expect(e.problem).toBe("unreadable");
+    expect(e.message).toMatch(/gone\.npy: cannot read file: ENOENT/);
+  });
+
   it("a stack file in a folder dataset is refused when read as one graph", () => {
     put("sf/stack.npy", encodeNpy(values, [3, 3, 3]));
     const [entry] = openDataset(join(root, "sf")).entries;

@@ -25,7 +25,12 @@ let cached: { key: string; source: StackSource } | undefined;
 
 /** Loads a stack file (cached while it is unchanged on disk). */
 export function loadStack(file: string, variable?: string, maxBytes?: number): StackSource {
-  const stat = statSync(file);
+  let stat: ReturnType<typeof statSync>;
+  try {
+    stat = statSync(file);
+  } catch (error) {
+    throw new InputFileError(file, "unreadable", `cannot read file: ${(error as Error).message}`);
+  }
   const key = JSON.stringify([file, variable ?? null, maxBytes ?? null, stat.size, stat.mtimeMs]);
   if (cached?.key === key) return cached.source;
   const source = readStack(file, variable, maxBytes);

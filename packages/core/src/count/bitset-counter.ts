@@ -14,7 +14,7 @@ import { SimplexBudgetError } from "./simplex-budget-error.js";
 
 let loc = new Int32Array(0); // local adjacency, d rows of W words
 let stack = new Int32Array(0); // candidate sets, one block of W words per depth
-const packed = new Int32Array(32); // rows of a compacted candidate set of ≤ 32 members
+const packed = new Int32Array(128); // rows (word pairs) of a compacted candidate set of ≤ 64 members
 let packedIndex = new Int32Array(0); // local index → position in the compacted set
 let cnt = new Float64Array(0);
 /** BINOMIAL[c * 33 + t] = C(c, t) for 0 ≤ t ≤ c ≤ 32 (Pascal's rule; exact in doubles). */
@@ -91,7 +91,7 @@ function runLocal(d: number): void {
     return;
   }
   if (W === 1) expand1(loc, 0, 1, stack[0], 1);
-  else if (W === 2) expand2(2, stack[0], stack[1], 1);
+  else if (W === 2) expand2(loc, stack[0], stack[1], 1);
   else expandWide(0, 1);
 }
 
@@ -198,42 +198,49 @@ function lastPair(rows: Int32Array, base: number, stride: number, y: number): nu
   return ((rows[base + j * stride] >>> k) & 1) + ((rows[base + k * stride] >>> j) & 1);
 }
 
-/** Two-word universe (local universes of 33..64 vertices): the candidate set is held in two numbers. */
-function expand2(at: number, c0: number, c1: number, depth: number): void {
+/** Two-word universe (≤ 64 members, rows are word pairs): the candidate set is held in two numbers. */
+function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void {
   const deeper = depth + 2 <= capDim;
   let total = 0;
   for (let w = 0; w < 2; w++) {
     let bits = w === 0 ? c0 : c1;
     while (bits !== 0) {
-      const lowBit = 31 - Math.clz32(bits);
-      bits ^= 1 << lowBit;
-      const row = ((w << 5) + lowBit) << 1;
-      const x0 = c0 & loc[row];
-      const x1 = c1 & loc[row + 1];
+      const b = 31 - Math.clz32(bits);
+      bits ^= 1 << b;
+      const row = ((w << 5) + b) << 1;
+      const x0 = c0 & rows[row];
+      const x1 = c1 & rows[row + 1];
       const c = popcount32(x0) + popcount32(x1);
       total += c;
       if (c < 2) continue;
       if (!deeper) {
-        stack[at] = x0;
-        stack[at + 1] = x1;
-        if (!truncated) truncated = anyEdgeInside(at);
+        if (!truncated) truncated = anyEdgeIn2(rows, x0, x1);
         continue;
       }
       cnt[depth + 1] += total;
       produced[0] += total;
       total = 0;
-      if (x1 === 0) expand1(loc, 0, 2, x0, depth + 1);
-      else if (x0 === 0) expand1(loc, 65, 2, x1, depth + 1);
-      else if (c <= 32) {
-        stack[at] = x0;
-        stack[at + 1] = x1;
-        expandPacked(at, c, depth + 1);
-      } else expand2(at, x0, x1, depth + 1);
+      if (x1 === 0) expand1(rows, 0, 2, x0, depth + 1);
+      else if (x0 === 0) expand1(rows, 65, 2, x1, depth + 1);
+      else expand2(rows, x0, x1, depth + 1);
     }
   }
   cnt[depth + 1] += total;
   produced[0] += total;
   if (produced[0] > budget) fail();
+}
+
+function anyEdgeIn2(rows: Int32Array, x0: number, x1: number): boolean {
+  for (let w = 0; w < 2; w++) {
+    let bits = w === 0 ? x0 : x1;
+    while (bits !== 0) {
+      const b = 31 - Math.clz32(bits);
+      bits ^= 1 << b;
+      const row = ((w << 5) + b) << 1;
+      if (((x0 & rows[row]) | (x1 & rows[row + 1])) !== 0) return true;
+    }
+  }
+  return false;
 }
 
 /** Multi-word version: candidate set in stack[at .. at+W). */
@@ -272,7 +279,8 @@ function expandWide(at: number, depth: number): void {
       produced[0] += total;
       total = 0;
       if (words === 1) expand1(loc, (only << 5) * W + only, W, stack[next + only], depth + 1);
-      else if (c <= 32) expandPacked(next, c, depth + 1);
+      else if (c === 2) settlePair(next, depth);
+      else if (c <= 64) expandPacked(next, c, depth + 1);
       else expandWide(next, depth + 1);
     }
   }
@@ -300,37 +308,43 @@ function settlePair(at: number, depth: number): void {
   produced[0] += e;
 }
 
-/** Renumbers a candidate set of c ≤ 32 members into one word and runs its subtree there. */
+/** Renumbers a candidate set of c ≤ 64 members into a one- or two-word universe and runs its subtree there. */
 function expandPacked(at: number, c: number, depth: number): void {
   let q = 0;
   for (let k = 0; k < W; k++) {
     let y = stack[at + k];
     while (y !== 0) {
-      const lowBit = 31 - Math.clz32(y);
-      y ^= 1 << lowBit;
-      packedIndex[(k << 5) + lowBit] = q++;
+      const b = 31 - Math.clz32(y);
+      y ^= 1 << b;
+      packedIndex[(k << 5) + b] = q++;
     }
   }
   q = 0;
   for (let k = 0; k < W; k++) {
     let y = stack[at + k];
     while (y !== 0) {
-      const lowBit = 31 - Math.clz32(y);
-      y ^= 1 << lowBit;
-      const row = ((k << 5) + lowBit) * W;
-      let packedRow = 0;
+      const b = 31 - Math.clz32(y);
+      y ^= 1 << b;
+      const row = ((k << 5) + b) * W;
+      let lo = 0;
+      let hi = 0;
       for (let m = undirected ? k : 0; m < W; m++) {
         let z = stack[at + m] & loc[row + m];
         while (z !== 0) {
-          const lzBit = 31 - Math.clz32(z);
-          z ^= 1 << lzBit;
-          packedRow |= 1 << packedIndex[(m << 5) + lzBit];
+          const zb = 31 - Math.clz32(z);
+          z ^= 1 << zb;
+          const p = packedIndex[(m << 5) + zb];
+          if (p < 32) lo |= 1 << p;
+          else hi |= 1 << p;
         }
       }
-      packed[q++] = packedRow;
+      packed[q << 1] = lo;
+      packed[(q << 1) + 1] = hi;
+      q++;
     }
   }
-  expand1(packed, 0, 1, c === 32 ? -1 : (1 << c) - 1, depth);
+  if (c <= 32) expand1(packed, 0, 2, c === 32 ? -1 : (1 << c) - 1, depth);
+  else expand2(packed, -1, c === 64 ? -1 : (1 << (c - 32)) - 1, depth);
 }
 
 function anyEdgeIn1(rows: Int32Array, base: number, stride: number, set: number): boolean {

@@ -1,5 +1,5 @@
 import { execFileSync, spawnSync } from "node:child_process";
-import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { mkdirSync, mkdtempSync, rmSync, symlinkSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { nodeLabel, type WeightedGraph } from "@cliquescape/core";
@@ -53,13 +53,16 @@ describe("a folder", () => {
   put("folder/notes.md", "not a graph");
   put("folder/.hidden.csv", TRIANGLE);
   put("folder/sub/c.csv", TRIANGLE);
+  symlinkSync(join(root, "folder/b.txt"), join(root, "folder/linked.txt"));
+  symlinkSync(join(root, "folder/missing.txt"), join(root, "folder/dangling.txt"));
 
-  it("lists graph files sorted by name, not recursively, ids without extension; a repeated id is a problem", () => {
+  it("lists graph files and links to them, sorted by name, not recursively, ids without extension; a repeated id is a problem", () => {
     const dataset = openDataset(join(root, "folder"));
     expect(dataset.kind).toBe("folder");
     expect(dataset.entries.map((e) => [e.id, e.file])).toEqual([
       ["a", join(root, "folder/a.csv")],
       ["b", join(root, "folder/b.txt")],
+      ["linked", join(root, "folder/linked.txt")],
     ]);
     expect(dataset.problems).toEqual([
       {

@@ -1,4 +1,4 @@
-import { readdirSync } from "node:fs";
+import { type Dirent, readdirSync, statSync } from "node:fs";
 import { join } from "node:path";
 import { InputFileError } from "../input-file-error.js";
 import type { Dataset, DatasetEntry, DatasetProblem } from "./dataset-types.js";
@@ -13,7 +13,7 @@ export function openFolderDataset(folder: string): Dataset {
   let names: string[];
   try {
     names = readdirSync(folder, { withFileTypes: true })
-      .filter((d) => d.isFile() && !d.name.startsWith(".") && isGraphFileName(d.name))
+      .filter((d) => !d.name.startsWith(".") && isGraphFileName(d.name) && isFileOrLinkToFile(folder, d))
       .map((d) => d.name)
       .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
   } catch (error) {
@@ -51,4 +51,15 @@ export function openFolderDataset(folder: string): Dataset {
     );
   }
   return { root: folder, kind: "folder", entries, problems };
+}
+
+// Datasets are often folders of symbolic links to the real files; follow them.
+function isFileOrLinkToFile(folder: string, entry: Dirent): boolean {
+  if (entry.isFile()) return true;
+  if (!entry.isSymbolicLink()) return false;
+  try {
+    return statSync(join(folder, entry.name)).isFile();
+  } catch {
+    return false;
+  }
 }

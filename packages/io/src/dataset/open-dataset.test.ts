@@ -175,6 +175,12 @@ describe("a manifest", () => {
     expect(() => openDataset(put("m/empty.csv", ""))).toThrow(/empty\.csv: the manifest has no header line/);
   });
 
+  it("matches known column names without regard to case and keeps metadata names as written", () => {
+    const upper = put("m/upper.csv", "ID,File,Label,Site\ng1,graphs/g1.csv,ring,A\n");
+    const [entry] = openDataset(upper).entries;
+    expect([entry.id, entry.label, entry.metadata]).toEqual(["g1", "ring", { Site: "A" }]);
+  });
+
   it("a dataset-wide coordinates file fills in for entries without their own", () => {
     const wide = put("m/wide.csv", "node,x,y,z\n0,1,2,3\n1,4,5,6\n2,7,8,9\n");
     const dataset = openDataset(manifest, { coordinatesFile: wide });

@@ -44,7 +44,14 @@ function matFile(
   return concat(header, tag, packed);
 }
 
-function matrixElement(name: string, rows: number, cols: number, values: number[], le: boolean): Uint8Array {
+function matrixElement(
+  name: string,
+  rows: number,
+  cols: number,
+  values: number[],
+  le: boolean,
+  storage: "miDOUBLE" | "miUINT8" = "miDOUBLE",
+): Uint8Array {
   const sub = (type: number, data: Uint8Array) => {
     const tag = new Uint8Array(8 + Math.ceil(data.length / 8) * 8);
     const view = new DataView(tag.buffer);
@@ -58,9 +65,20 @@ function matrixElement(name: string, rows: number, cols: number, values: number[
   const dims = new Uint8Array(8);
   new DataView(dims.buffer).setInt32(0, rows, le);
   new DataView(dims.buffer).setInt32(4, cols, le);
-  const data = new Uint8Array(values.length * 8);
-  for (const [k, v] of values.entries()) new DataView(data.buffer).setFloat64(k * 8, v, le);
-  const body = concat(sub(6, flags), sub(5, dims), sub(1, new TextEncoder().encode(name)), sub(9, data));
+  // MATLAB may store a double array's values in a smaller type when they fit (format document, "Numeric
+  // Arrays"): the class stays double.
+  const size = storage === "miDOUBLE" ? 8 : 1;
+  const data = new Uint8Array(values.length * size);
+  for (const [k, v] of values.entries()) {
+    if (size === 8) new DataView(data.buffer).setFloat64(k * 8, v, le);
+    else data[k] = v;
+  }
+  const body = concat(
+    sub(6, flags),
+    sub(5, dims),
+    sub(1, new TextEncoder().encode(name)),
+    sub(storage === "miDOUBLE" ? 9 : 2, data),
+  );
   const tag = new Uint8Array(8);
   new DataView(tag.buffer).setUint32(0, 14, le);
   new DataView(tag.buffer).setUint32(4, body.length, le);
@@ -109,6 +127,17 @@ describe(".mat built from the format document", () => {
       [1, 2, 0.25],
       [2, 0, 2],
     ]);
+  });
+});
+
+describe(".mat: a double variable stored as miUINT8", () => {
+  it("reads the small integers as the double values they are", () => {
+    const header = matFile("M", 1, 1, [0], true, false).subarray(0, 128);
+    const element = matrixElement("W", 3, 3, [0, 7, 0, 7, 0, 255, 0, 255, 0], true, "miUINT8");
+    const graph = readGraphFile(put("uint8-storage.mat", concat(header, element))).graphs[0];
+    expect([...graph.offsets]).toEqual([0, 1, 3, 4]);
+    expect([...graph.targets]).toEqual([1, 0, 2, 1]);
+    expect([...graph.weights]).toEqual([7, 7, 255, 255]);
   });
 });
 

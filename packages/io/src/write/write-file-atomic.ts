@@ -1,5 +1,6 @@
 import { closeSync, fsyncSync, mkdirSync, openSync, renameSync, rmSync, writeSync } from "node:fs";
 import { basename, dirname, join } from "node:path";
+import { threadId } from "node:worker_threads";
 
 let counter = 0;
 
@@ -11,7 +12,8 @@ let counter = 0;
 export function writeFileAtomic(path: string, data: string | Uint8Array): void {
   const folder = dirname(path);
   mkdirSync(folder, { recursive: true });
-  const temporary = join(folder, `.${basename(path)}.${process.pid}.${counter++}.tmp`);
+  // Unique per process, worker thread and call, so concurrent writers never share a temporary file.
+  const temporary = join(folder, `.${basename(path)}.${process.pid}.${threadId}.${counter++}.tmp`);
   const bytes = typeof data === "string" ? Buffer.from(data, "utf8") : data;
   let fd: number | undefined;
   try {

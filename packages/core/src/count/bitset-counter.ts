@@ -65,13 +65,15 @@ export function countWithBitsets(g: EnumerationGraph, maxDim: number, simplexBud
     if (d < 2 || capDim < 1 || (capDim < 2 && truncated)) continue;
     W = (d + 31) >>> 5;
     for (let i = 0; i < d; i++) mark[targets[a + i]] = i;
-    loc.fill(0, 0, d * W);
+    const rows = loc;
+    rows.fill(0, 0, d * W);
     for (let i = 0; i < d; i++) {
       const u = targets[a + i];
       const row = i * W;
-      for (let s = offsets[u]; s < offsets[u + 1]; s++) {
+      const end = offsets[u + 1];
+      for (let s = offsets[u]; s < end; s++) {
         const j = mark[targets[s]];
-        if (j >= 0) loc[row + (j >>> 5)] |= 1 << (j & 31);
+        if (j >= 0) rows[row + (j >>> 5)] |= 1 << (j & 31);
       }
     }
     for (let i = 0; i < d; i++) mark[targets[a + i]] = -1;

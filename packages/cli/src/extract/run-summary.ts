@@ -44,13 +44,20 @@ export function renderSummary(input: SummaryInput): string {
   );
   lines.push("");
   lines.push("outputs:");
-  lines.push(`  ${at(folder.featuresCsv)}   feature table (one row per graph)`);
-  lines.push(`  ${at(folder.featuresNpz)}   X, y, ids, feature_names, label_names for numpy`);
-  lines.push(`  ${at(folder.spec)}   settings, grid, input hashes (reuse with --spec)`);
-  if (spec.outputs.bundles)
-    lines.push(`  ${at(folder.bundles)}/   GNN bundles (x, edge_index, edge_attr, y)`);
-  if (spec.outputs.barcodes) lines.push(`  ${at(folder.barcodes)}/   persistence barcodes (JSON)`);
-  lines.push(`  ${at(folder.errorsCsv)}   graphs left out and why (${errors.length})`);
+  const outputs: [string, string][] = [
+    [at(folder.featuresCsv), "feature table (one row per graph)"],
+    [at(folder.featuresNpz), "X, y, ids, feature_names, label_names for numpy"],
+    [at(folder.spec), "settings, grid, input hashes (reuse with --spec)"],
+    ...(spec.outputs.bundles
+      ? [[`${at(folder.bundles)}/`, "GNN bundles (x, edge_index, edge_attr, y)"] as [string, string]]
+      : []),
+    ...(spec.outputs.barcodes
+      ? [[`${at(folder.barcodes)}/`, "persistence barcodes (JSON)"] as [string, string]]
+      : []),
+    [at(folder.errorsCsv), `graphs left out and why (${errors.length})`],
+  ];
+  const width = Math.max(...outputs.map(([path]) => path.length));
+  for (const [path, what] of outputs) lines.push(`  ${path.padEnd(width)}  ${what}`);
   const means = labelMeans(records, input.featureNames, spec.labelNames);
   if (means.features.length > 0 && means.rows.length > 0) {
     lines.push("");

@@ -1,0 +1,162 @@
+// Benchmark of the batch job (not a test): `cliquescape extract` on 1,000 seeded dense similarity
+// matrices of 100 nodes with the default features (quantile grid, simplices to dimension 3, H0..H2),
+// once with 1 worker and once with 2. Reports graphs per second and the peak memory of the whole process
+// (main thread and workers: /usr/bin/time's maximum resident set size), and writes them into a section of
+// docs/benchmarks.md (other sections of that file are left as they are). Needs `npm run build` first.
+//
+//   node test/bench/extract-bench.mjs [--graphs 1000] [--nodes 100] [--workers 1,2] [--no-docs]
+import { execFileSync } from "node:child_process";
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { cpus, tmpdir, totalmem } from "node:os";
+import { dirname, join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { seededRandom } from "./random.mjs";
+
+const here = dirname(fileURLToPath(import.meta.url));
+const root = join(here, "..", "..");
+const bin = join(root, "packages", "cli", "bin", "cliquescape.js");
+const args = process.argv.slice(2);
+const option = (name, fallback) => {
+  const i = args.indexOf(name);
+  return i >= 0 && i + 1 < args.length ? args[i + 1] : fallback;
+};
+const graphs = Number(option("--graphs", "1000"));
+const nodes = Number(option("--nodes", "100"));
+const workerCounts = option("--workers", "1,2").split(",").map(Number);
+const writeDocs = !args.includes("--no-docs");
+
+/**
+ * A dense similarity matrix: nodes at seeded random places in the unit square, similarity
+ * exp(−d²/(2·0.3²)) times a random factor, plus a little noise, clipped to [0.001, 1] so every pair is an
+ * edge. Two labels differ in how the places are drawn (uniform, or around three centres).
+ */
+function matrixCsv(n, seed, clustered) {
+  const random = seededRandom(seed);
+  const centres = [0, 1, 2].map(() => [random(), random()]);
+  const points = Array.from({ length: n }, () => {
+    if (!clustered) return [random(), random()];
+    const c = centres[Math.floor(random() * 3)];
+    return [c[0] + (random() - 0.5) * 0.35, c[1] + (random() - 0.5) * 0.35];
+  });
+  const m = Array.from({ length: n }, () => new Array(n).fill(0));
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      const dx = points[i][0] - points[j][0];
+      const dy = points[i][1] - points[j][1];
+      const w = Math.exp(-(dx * dx + dy * dy) / (2 * 0.09)) * (0.85 + 0.3 * random()) + 0.05 * random();
+      m[i][j] = m[j][i] = Math.min(1, Math.max(0.001, Math.round(w * 1e4) / 1e4));
+    }
+  }
+  return `${m.map((row) => row.join(",")).join("\n")}\n`;
+}
+
+function makeDataset(dir) {
+  const stamp = join(dir, "made.json");
+  const wanted = JSON.stringify({ graphs, nodes, version: 1 });
+  if (existsSync(stamp) && readFileSync(stamp, "utf8") === wanted) return;
+  rmSync(dir, { recursive: true, force: true });
+  mkdirSync(dir, { recursive: true });
+  const lines = ["id,file,label"];
+  for (let g = 0; g < graphs; g++) {
+    const id = `m${String(g).padStart(4, "0")}`;
+    const clustered = g % 2 === 1;
+    writeFileSync(join(dir, `${id}.csv`), matrixCsv(nodes, 1000 + g, clustered));
+    lines.push(`${id},${id}.csv,${clustered ? "clustered" : "uniform"}`);
+  }
+  writeFileSync(join(dir, "manifest.csv"), `${lines.join("\n")}\n`);
+  writeFileSync(stamp, wanted);
+}
+
+function run(dataset, out, workers) {
+  rmSync(out, { recursive: true, force: true });
+  const timeFile = `${out}.time`;
+  try {
+    execFileSync(
+      "/usr/bin/time",
+      [
+        "-f",
+        "%e %M",
+        "-o",
+        timeFile,
+        process.execPath,
+        bin,
+        "extract",
+        dataset,
+        "--out",
+        out,
+        "--workers",
+        String(workers),
+      ],
+      { stdio: ["ignore", "pipe", "inherit"] },
+    );
+  } catch (error) {
+    throw new Error(`extract failed with ${workers} worker(s): exit ${error.status}`);
+  }
+  const [seconds, maxRssKiB] = readFileSync(timeFile, "utf8").trim().split("\n").pop().split(" ").map(Number);
+  const rows = readFileSync(join(out, "features.csv"), "utf8").trimEnd().split("\n").length - 1;
+  return { workers, seconds, graphsPerSecond: graphs / seconds, peakMiB: maxRssKiB / 1024, rows };
+}
+
+const base = join(tmpdir(), "cliquescape-extract-bench");
+const dataset = join(base, `data-${graphs}x${nodes}`);
+console.error(`generating ${graphs} matrices of ${nodes} nodes in ${dataset} (kept for later runs)…`);
+makeDataset(dataset);
+const results = [];
+for (const workers of workerCounts) {
+  const r = run(join(dataset, "manifest.csv"), join(base, `out-w${workers}`), workers);
+  if (r.rows !== graphs) throw new Error(`only ${r.rows} of ${graphs} graphs in the table`);
+  console.error(
+    `${workers} worker(s): ${r.seconds.toFixed(1)} s, ${r.graphsPerSecond.toFixed(2)} graphs/s, peak ${r.peakMiB.toFixed(0)} MiB`,
+  );
+  results.push(r);
+}
+const identical =
+  results.length > 1 &&
+  results.every(
+    (r) =>
+      readFileSync(join(base, `out-w${r.workers}`, "features.csv"), "utf8") ===
+      readFileSync(join(base, `out-w${results[0].workers}`, "features.csv"), "utf8"),
+  );
+const one = results.find((r) => r.workers === 1);
+const two = results.find((r) => r.workers === 2);
+const speedup = one && two ? one.seconds / two.seconds : null;
+const spec = JSON.parse(readFileSync(join(base, `out-w${results[0].workers}`, "spec.json"), "utf8"));
+const features =
+  readFileSync(join(base, `out-w${results[0].workers}`, "features.csv"), "utf8")
+    .split("\n")[0]
+    .split(",").length - 3;
+
+const section = [
+  "<!-- extract-bench:start -->",
+  "## Batch job: `cliquescape extract`",
+  "",
+  `Measured by \`node test/bench/extract-bench.mjs\` on ${new Date().toISOString().slice(0, 10)}: ${graphs} seeded dense similarity`,
+  `matrices of ${nodes} nodes (every pair an edge, CSV files, a manifest with two labels), default settings:`,
+  `${spec.resolvedGrid.values.length} thresholds between the 5 % and 95 % weight quantiles, simplices to dimension ${spec.complex.topDim},`,
+  `homology H0..H${spec.complex.topDim - 1} over Z/${spec.complex.prime} (barcode up to the grid's end), ${features} features per graph, a GNN`,
+  "bundle and a barcode per graph. Wall time of the whole command (first pass, all graphs, tables);",
+  "peak memory is the process's maximum resident set size (main thread and workers), from /usr/bin/time.",
+  `Machine: ${cpus().length} × ${cpus()[0]?.model ?? "unknown CPU"}, ${(totalmem() / 2 ** 30).toFixed(0)} GiB, Node ${process.version}.`,
+  "",
+  "| workers | wall time (s) | graphs/s | peak memory (MiB) |",
+  "|---:|---:|---:|---:|",
+  ...results.map(
+    (r) =>
+      `| ${r.workers} | ${r.seconds.toFixed(1)} | ${r.graphsPerSecond.toFixed(2)} | ${r.peakMiB.toFixed(0)} |`,
+  ),
+  "",
+  speedup === null
+    ? ""
+    : `Speed-up with 2 workers: ${speedup.toFixed(2)}× (goal ≥ 1.8×); features.csv identical across worker counts: ${identical ? "yes" : "NO"}.`,
+  "<!-- extract-bench:end -->",
+].join("\n");
+console.log(section);
+
+if (writeDocs) {
+  const docs = join(root, "docs", "benchmarks.md");
+  const text = existsSync(docs) ? readFileSync(docs, "utf8") : "# Benchmarks\n";
+  const pattern = /<!-- extract-bench:start -->[\s\S]*<!-- extract-bench:end -->/;
+  const next = pattern.test(text) ? text.replace(pattern, section) : `${text.trimEnd()}\n\n${section}\n`;
+  writeFileSync(docs, next);
+  console.error(`wrote the section into ${docs}`);
+}

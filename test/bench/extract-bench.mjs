@@ -7,7 +7,7 @@
 //   node test/bench/extract-bench.mjs [--graphs 1000] [--nodes 100] [--workers 1,2] [--no-docs]
 import { execFileSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { cpus, tmpdir, totalmem } from "node:os";
+import { cpus, loadavg, tmpdir, totalmem } from "node:os";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { seededRandom } from "./random.mjs";
@@ -75,7 +75,7 @@ function run(dataset, out, workers) {
       "/usr/bin/time",
       [
         "-f",
-        "%e %M",
+        "%e %M %U %S",
         "-o",
         timeFile,
         process.execPath,
@@ -92,9 +92,24 @@ function run(dataset, out, workers) {
   } catch (error) {
     throw new Error(`extract failed with ${workers} worker(s): exit ${error.status}`);
   }
-  const [seconds, maxRssKiB] = readFileSync(timeFile, "utf8").trim().split("\n").pop().split(" ").map(Number);
+  const [seconds, maxRssKiB, user, system] = readFileSync(timeFile, "utf8")
+    .trim()
+    .split("\n")
+    .pop()
+    .split(" ")
+    .map(Number);
   const rows = readFileSync(join(out, "features.csv"), "utf8").trimEnd().split("\n").length - 1;
-  return { workers, seconds, graphsPerSecond: graphs / seconds, peakMiB: maxRssKiB / 1024, rows };
+  const load = loadavg()[0];
+  const cpuSeconds = user + system;
+  return {
+    workers,
+    seconds,
+    cpuSeconds,
+    graphsPerSecond: graphs / seconds,
+    peakMiB: maxRssKiB / 1024,
+    rows,
+    load,
+  };
 }
 
 const base = join(tmpdir(), "cliquescape-extract-bench");
@@ -135,14 +150,16 @@ const section = [
   `${spec.resolvedGrid.values.length} thresholds between the 5 % and 95 % weight quantiles, simplices to dimension ${spec.complex.topDim},`,
   `homology H0..H${spec.complex.topDim - 1} over Z/${spec.complex.prime} (barcode up to the grid's end), ${features} features per graph, a GNN`,
   "bundle and a barcode per graph. Wall time of the whole command (first pass, all graphs, tables);",
-  "peak memory is the process's maximum resident set size (main thread and workers), from /usr/bin/time.",
+  "CPU time is user + system of the process and peak memory its maximum resident set size (main thread and",
+  "workers), both from /usr/bin/time; the 1-minute load average right after each run shows whether other work",
+  "shared the CPUs.",
   `Machine: ${cpus().length} × ${cpus()[0]?.model ?? "unknown CPU"}, ${(totalmem() / 2 ** 30).toFixed(0)} GiB, Node ${process.version}.`,
   "",
-  "| workers | wall time (s) | graphs/s | peak memory (MiB) |",
-  "|---:|---:|---:|---:|",
+  "| workers | wall time (s) | graphs/s | CPU time (s) | peak memory (MiB) | load average after |",
+  "|---:|---:|---:|---:|---:|---:|",
   ...results.map(
     (r) =>
-      `| ${r.workers} | ${r.seconds.toFixed(1)} | ${r.graphsPerSecond.toFixed(2)} | ${r.peakMiB.toFixed(0)} |`,
+      `| ${r.workers} | ${r.seconds.toFixed(1)} | ${r.graphsPerSecond.toFixed(2)} | ${r.cpuSeconds.toFixed(1)} | ${r.peakMiB.toFixed(0)} | ${r.load.toFixed(1)} |`,
   ),
   "",
   speedup === null

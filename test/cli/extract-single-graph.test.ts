@@ -5,11 +5,12 @@
  * dataset's edge weights (outside reference: Debian's python3-numpy).
  */
 import { spawnSync } from "node:child_process";
-import { readFileSync } from "node:fs";
+import { readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
+import { encodeNpy } from "@cliquescape/io";
 import { beforeAll, describe, expect, it } from "vitest";
 import { missingPythonModules } from "../support/python.js";
-import { readFeatureTable, SMALL_DATASET, similarityDataset } from "./extract-fixtures.js";
+import { readFeatureTable, SMALL_DATASET, similarityDataset, similarityMatrix } from "./extract-fixtures.js";
 import { runCli } from "./run-cli.js";
 
 const GRID = [0.9, 0.75, 0.6, 0.45, 0.3, 0.15];
@@ -144,3 +145,46 @@ function missingNumpy(): string | null {
     else process.env.PYTHON = previous;
   }
 }
+
+describe("a stack dataset", () => {
+  it("gives the same feature rows as the same matrices written as CSV files", () => {
+    const graphs = SMALL_DATASET.filter((g) => !g.directed).map((g) => ({ ...g, n: 12 }));
+    const dir = similarityDataset(graphs);
+    const n = 12;
+    const values = new Float64Array(graphs.length * n * n);
+    graphs.forEach((g, s) => {
+      similarityMatrix(n, false, g.seed).forEach((row, i) => {
+        row.forEach((w, j) => {
+          values[(s * n + i) * n + j] = w ?? 0;
+        });
+      });
+    });
+    writeFileSync(join(dir, "stack.npy"), encodeNpy(values, [graphs.length, n, n]));
+    writeFileSync(join(dir, "labels.txt"), `${graphs.map((g) => g.label).join("\n")}\n`);
+    const fromFiles = runCli([
+      "extract",
+      join(dir, "manifest.csv"),
+      "--out",
+      join(dir, "files"),
+      "--threshold",
+      "0.8,0.5,0.2",
+    ]);
+    const fromStack = runCli([
+      "extract",
+      join(dir, "stack.npy"),
+      "--labels",
+      join(dir, "labels.txt"),
+      "--out",
+      join(dir, "stack"),
+      "--threshold",
+      "0.8,0.5,0.2",
+    ]);
+    expect(fromFiles.status).toBe(0);
+    expect(fromStack.stderr).toBe("");
+    expect(fromStack.status).toBe(0);
+    const a = readFeatureTable(join(dir, "files", "features.csv"));
+    const b = readFeatureTable(join(dir, "stack", "features.csv"));
+    expect(b.header).toEqual(a.header);
+    expect(b.rows.map((r) => [r[1], ...r.slice(3)])).toEqual(a.rows.map((r) => [r[1], ...r.slice(3)]));
+  });
+});

@@ -10,18 +10,27 @@ export function extractCommand(): Command {
   const command = new Command("extract")
     .summary("a whole dataset in, topological features for statistics and GNNs out")
     .description(
-      "Reads every graph of a dataset (a manifest CSV with id, file, label, split columns, or a folder of\n" +
-        "graph files), prepares them all the same way, reads their topology on one grid of thresholds shared\n" +
-        "by the whole dataset, and writes a run folder: feature tables (CSV, NPZ), per-graph barcodes and GNN\n" +
-        "bundles, errors.csv and spec.json. Graphs run in parallel on worker threads. Re-running the same\n" +
-        "command skips finished graphs; Ctrl-C keeps every finished graph. Settings come from --spec (a JSON\n" +
-        "file, e.g. a previous run's spec.json) with the options below laid over it; see docs/extract.md.",
+      "Reads every graph of a dataset (a manifest CSV with id, file, label, split columns, a folder of graph " +
+        "files, or a stack of matrices), prepares them all the same way, reads their topology on one grid of " +
+        "thresholds shared by the whole dataset, and writes a run folder: feature tables (CSV, NPZ), per-graph " +
+        "barcodes and GNN bundles, errors.csv and spec.json. Graphs run in parallel on worker threads. Running " +
+        "the same command again skips finished graphs; Ctrl-C keeps every finished graph. Settings come from " +
+        "--spec (a JSON file, e.g. a previous run's spec.json) with the options below laid over it; see " +
+        "docs/extract.md.",
     )
-    .argument("<dataset>", "manifest CSV (id,file[,label,split,directed,…]) or folder of graph files")
+    .argument(
+      "<dataset>",
+      "manifest CSV/TSV (id,file[,label,split,directed,coords,…]), folder of graph files, or stack (.npy .npz .mat)",
+    )
     .requiredOption("--out <dir>", "run folder to write (created; an existing one is resumed)")
     .addOption(new Option("--spec <file>", "run spec JSON: a partial one, or a previous run's spec.json"))
+    .addOption(new Option("--labels <file>", "for a stack: one label per slice (or a CSV with id,label)"))
     .addOption(
-      new Option("--workers <n>", "worker threads (default: all cores)")
+      new Option("--coordinates <file>", "node coordinates CSV (node,x,y[,z]) for graphs without their own"),
+    )
+    .addOption(new Option("--variable <name>", "for a .npz or .mat stack: the array or variable to read"))
+    .addOption(
+      new Option("--workers <n>", "worker threads")
         .argParser(positiveInteger)
         .default(availableParallelism(), "all cores"),
     )
@@ -116,7 +125,7 @@ export function extractCommand(): Command {
     .addOption(
       new Option(
         "--families <list>",
-        "feature families to include (comma-separated; default all but network)",
+        "feature families to include, comma-separated (default: all)",
       ).argParser((text) => text.split(",").map((s) => s.trim())),
     )
     .addOption(new Option("--no-bundles", "do not write GNN bundles"))
@@ -161,6 +170,11 @@ async function extractAction(
       workers: raw.workers as number,
       spec,
       specSource: source,
+      datasetOptions: {
+        labelsFile: raw.labels as string | undefined,
+        coordinatesFile: raw.coordinates as string | undefined,
+        variable: raw.variable as string | undefined,
+      },
       signal: controller.signal,
     });
     process.exitCode = result.exitCode;

@@ -6,6 +6,7 @@ import {
   type DatasetEntry,
   graphFeatureNames,
   hashFile,
+  type OpenDatasetOptions,
   openDataset,
   writeFileAtomic,
 } from "@cliquescape/io";
@@ -33,6 +34,8 @@ export interface ExtractRequest {
   /** The spec as merged from --spec and the options; validated here. */
   spec: Record<string, unknown>;
   specSource: string;
+  /** How to open the dataset: labels of a stack, shared node coordinates, the array of a .npz/.mat. */
+  datasetOptions?: OpenDatasetOptions;
   /** Interrupts the run (Ctrl-C); finished graphs stay saved and the tables are written from them. */
   signal: AbortSignal;
 }
@@ -54,7 +57,7 @@ export interface ExtractResult {
  */
 export async function runExtract(request: ExtractRequest): Promise<ExtractResult> {
   const requested = validateSpec(request.spec, request.specSource);
-  const dataset = openDataset(request.dataset);
+  const dataset = openDataset(request.dataset, request.datasetOptions);
   // Files are named relative to the dataset's folder, so records and tables do not depend on where it sits.
   const base = dataset.kind === "folder" ? dataset.root : dirname(dataset.root);
   const relativeFile = (file: string) => relative(base, file).split(sep).join("/");
@@ -78,7 +81,10 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
 
   createRunFolder(folder);
   removeLeftoverTemps(folder);
-  writeFileAtomic(folder.spec, specDocument(spec, request.dataset, dataset, hashes, relativeFile));
+  writeFileAtomic(
+    folder.spec,
+    specDocument(spec, request.dataset, dataset, hashes, relativeFile, request.datasetOptions),
+  );
 
   const fingerprint = settingsFingerprint(spec);
   const records = new Map<string, GraphRecord>();
@@ -307,6 +313,7 @@ function specDocument(
   dataset: Dataset,
   hashes: string[],
   relativeFile: (file: string) => string,
+  datasetOptions: OpenDatasetOptions | undefined,
 ): string {
   const document = {
     format: spec.format,
@@ -320,6 +327,9 @@ function specDocument(
     outputs: spec.outputs,
     labelNames: spec.labelNames,
     dataset: datasetArgument,
+    ...(datasetOptions && Object.values(datasetOptions).some((v) => v !== undefined)
+      ? { datasetOptions }
+      : {}),
     inputs: [
       ...(dataset.kind === "manifest"
         ? [

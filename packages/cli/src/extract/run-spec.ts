@@ -116,6 +116,13 @@ export const RunSpecSchema = z.strictObject({
   labelNames: z.array(z.string()).optional(),
   /** Provenance only: the dataset and the files of this run. Never compared between runs. */
   dataset: z.string().optional(),
+  datasetOptions: z
+    .strictObject({
+      labelsFile: z.string().optional(),
+      coordinatesFile: z.string().optional(),
+      variable: z.string().optional(),
+    })
+    .optional(),
   inputs: z.array(InputRecordSchema).optional(),
 });
 

@@ -1,0 +1,174 @@
+/**
+ * The run spec of `extract`: a partial spec file is validated and every mistake named by its JSON path;
+ * settings in it take effect; options override it; the edge-value transform equals transforming the
+ * matrices beforehand (reference: the same matrices with 1 − w or 1/w written into the files); a simplex
+ * budget turns a graph into a recorded failure, not a crash.
+ */
+import { readFileSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
+import { describe, expect, it } from "vitest";
+import { readFeatureTable, SMALL_DATASET, similarityDataset, similarityMatrix } from "./extract-fixtures.js";
+import { matrixCsv, runCli } from "./run-cli.js";
+
+describe("extract --spec", () => {
+  it("names every invalid setting by its JSON path and writes nothing", () => {
+    const dir = similarityDataset(SMALL_DATASET.slice(0, 2));
+    writeFileSync(
+      join(dir, "bad.json"),
+      JSON.stringify({
+        complex: { topDim: 0, prime: 4 },
+        grid: { kind: "quantiles", steps: "20" },
+        colour: "red",
+      }),
+    );
+    const run = runCli([
+      "extract",
+      join(dir, "manifest.csv"),
+      "--out",
+      join(dir, "run"),
+      "--spec",
+      join(dir, "bad.json"),
+    ]);
+    expect(run.status).toBe(2);
+    expect(run.stderr).toContain("invalid run spec");
+    expect(run.stderr).toMatch(/at complex\.topDim: .*>=1/);
+    expect(run.stderr).toMatch(/at complex\.prime: must be a prime number/);
+    expect(run.stderr).toMatch(/at grid\.steps: .*expected number/);
+    expect(run.stderr).toMatch(/colour/);
+    expect(() => readFileSync(join(dir, "run", "spec.json"))).toThrow();
+  });
+
+  it("reports broken JSON with its line and column", () => {
+    const dir = similarityDataset(SMALL_DATASET.slice(0, 1));
+    writeFileSync(join(dir, "broken.json"), '{\n  "complex": { "topDim": 2, }\n}\n');
+    const run = runCli([
+      "extract",
+      join(dir, "manifest.csv"),
+      "--out",
+      join(dir, "run"),
+      "--spec",
+      join(dir, "broken.json"),
+    ]);
+    expect(run.status).toBe(2);
+    expect(run.stderr).toMatch(/broken\.json:2:\d+: not valid JSON/);
+  });
+
+  it("applies a partial spec, and options override it", () => {
+    const dir = similarityDataset(SMALL_DATASET.slice(0, 3));
+    writeFileSync(
+      join(dir, "partial.json"),
+      JSON.stringify({ complex: { topDim: 2 }, grid: { kind: "densities", values: [0.3, 0.1, 0.2] } }),
+    );
+    const run = runCli([
+      "extract",
+      join(dir, "manifest.csv"),
+      "--out",
+      join(dir, "run"),
+      "--spec",
+      join(dir, "partial.json"),
+      "--prime",
+      "3",
+      "--families",
+      "betti,euler",
+    ]);
+    expect(run.status).toBe(0);
+    const spec = JSON.parse(readFileSync(join(dir, "run", "spec.json"), "utf8"));
+    expect(spec.complex).toMatchObject({ topDim: 2, prime: 3 });
+    expect(spec.resolvedGrid).toEqual({ kind: "density", values: [0.1, 0.2, 0.3] });
+    const { header } = readFeatureTable(join(dir, "run", "features.csv"));
+    expect(header.slice(3)).toEqual([
+      "euler_dens0.1",
+      "euler_dens0.2",
+      "euler_dens0.3",
+      ...[0, 1].flatMap((k) => ["0.1", "0.2", "0.3"].map((d) => `betti_d${k}_dens${d}`)),
+    ]);
+  });
+});
+
+describe("extract --transform", () => {
+  it.each([
+    ["one-minus", (w: number) => 1 - w],
+    ["reciprocal", (w: number) => 1 / w],
+  ] as const)("%s equals writing the transformed matrices into the files", (transform, f) => {
+    const graphs = SMALL_DATASET.slice(0, 4);
+    const raw = similarityDataset(graphs);
+    const pre = similarityDataset(graphs);
+    for (const g of graphs) {
+      const m = similarityMatrix(g.n, g.directed, g.seed).map((row) =>
+        row.map((w) => (w === null ? null : f(w))),
+      );
+      writeFileSync(join(pre, `${g.id}.csv`), matrixCsv(m));
+    }
+    const grid = transform === "one-minus" ? "0.1,0.3,0.5,0.7" : "1.2,2,4,10";
+    const common = ["--weights", "distance", "--threshold", grid, "--no-bundles"];
+    const a = runCli([
+      "extract",
+      join(raw, "manifest.csv"),
+      "--out",
+      join(raw, "run"),
+      "--transform",
+      transform,
+      ...common,
+    ]);
+    const b = runCli(["extract", join(pre, "manifest.csv"), "--out", join(pre, "run"), ...common]);
+    expect(a.status).toBe(0);
+    expect(b.status).toBe(0);
+    const ta = readFeatureTable(join(raw, "run", "features.csv"));
+    const tb = readFeatureTable(join(pre, "run", "features.csv"));
+    expect(ta.header).toEqual(tb.header);
+    expect(ta.rows).toEqual(tb.rows);
+    const spec = JSON.parse(readFileSync(join(raw, "run", "spec.json"), "utf8"));
+    expect(spec.preparation.transform).toBe(transform);
+  });
+
+  it("a transform that gives an infinite value is a recorded error naming the edge", () => {
+    const dir = similarityDataset([]);
+    writeFileSync(join(dir, "ok.csv"), matrixCsv(similarityMatrix(6, false, 5)));
+    writeFileSync(
+      join(dir, "one.csv"),
+      matrixCsv([
+        [null, 1, 0.5],
+        [1, null, 0.2],
+        [0.5, 0.2, null],
+      ]),
+    );
+    // A 0 read as an edge (--zero-edges edge) has −log 0 = ∞; w = 1 gives 0, which is fine.
+    writeFileSync(join(dir, "zero.csv"), "0,0,0.5\n0,0,0.2\n0.5,0.2,0\n");
+    writeFileSync(join(dir, "manifest.csv"), "id,file,label\nok,ok.csv,a\none,one.csv,a\nzero,zero.csv,a\n");
+    const run = runCli([
+      "extract",
+      join(dir, "manifest.csv"),
+      "--out",
+      join(dir, "run"),
+      "--transform",
+      "neg-log",
+      "--zero-edges",
+      "edge",
+      "--weights",
+      "distance",
+      "--threshold",
+      "0.5,1,2",
+    ]);
+    expect(run.status).toBe(1);
+    const errors = readFeatureTable(join(dir, "run", "errors.csv"));
+    expect(errors.rows).toHaveLength(1);
+    expect(errors.rows[0][0]).toBe("zero");
+    expect(errors.rows[0][4]).toMatch(/neg-log transform turns the weight 0 of edge \(1, 2\) into Infinity/);
+    expect(readFeatureTable(join(dir, "run", "features.csv")).rows.map((r) => r[0])).toEqual(["ok", "one"]);
+  });
+});
+
+describe("extract budgets", () => {
+  it("a graph over the simplex budget is recorded with the reason; the others finish", () => {
+    const dir = similarityDataset([
+      { id: "small", label: "a", directed: false, n: 5, seed: 1 },
+      { id: "large", label: "a", directed: false, n: 30, seed: 2 },
+    ]);
+    const run = runCli(["extract", join(dir, "manifest.csv"), "--out", join(dir, "run"), "--budget", "200"]);
+    expect(run.status).toBe(1);
+    const errors = readFeatureTable(join(dir, "run", "errors.csv"));
+    expect(errors.rows.map((r) => r[0])).toEqual(["large"]);
+    expect(errors.rows[0][4]).toMatch(/budget/i);
+    expect(readFeatureTable(join(dir, "run", "features.csv")).rows.map((r) => r[0])).toEqual(["small"]);
+  });
+});

@@ -1,5 +1,4 @@
 import type { CoboundaryModel } from "./coboundary-model.js";
-import { CofaceBuffer } from "./coface-buffer.js";
 import { ColumnStore } from "./column-store.js";
 import type { ByteLedger } from "./homology-budget.js";
 import { KeyMap } from "./key-map.js";
@@ -91,14 +90,9 @@ export function reduceDimension(
   const pivots = new KeyMap(ledger, `recording the pivots of dimension ${dim}`, Math.max(16, todoCount));
   const store = new ColumnStore(ledger);
   const work = new WorkingColumn(ledger);
-  const buffer = new CofaceBuffer(ledger);
-  /** work += factor · δ(simplex). */
-  const addCoboundary = (simplexKey: number, simplexF: number, factor: number) => {
-    buffer.clear();
-    model.pushCoboundary(dim, simplexKey, simplexF, factor, p, buffer);
-    buffer.sort();
-    work.add(buffer.f, buffer.key, buffer.coef, 0, buffer.size, 1, p);
-  };
+  let openColumn = -1;
+  const keep = (entryF: number, entryKey: number, entryCoef: number) =>
+    store.append(openColumn, entryF, entryKey, entryCoef);
 
   for (let c = 0; c < todoCount; c++) {
     const i = columns[c];
@@ -118,23 +112,25 @@ export function reduceDimension(
     }
 
     counters.reduced++;
-    work.clear();
-    addCoboundary(key, f, 1);
+    work.reset(p);
+    model.pushCoboundary(dim, key, f, 1, p, work);
     for (;;) {
-      if (work.size === 0) {
+      if (!work.settle()) {
         sink.essential(dim, key, f);
         break;
       }
-      const pivotKey = work.key[0];
-      const pivotF = work.f[0];
-      const pivotCoef = work.coef[0];
+      const pivotKey = work.pivotKey;
+      const pivotF = work.pivotF;
+      const pivotCoef = work.pivotCoef;
       const owner = pivots.get(pivotKey);
       if (owner >= 0) {
         // Cancel the pivot with the column that owns it: add -(c / c_owner) times that column.
         const factor = ((p - pivotCoef) * inverse[store.pivotCoef[owner]]) % p;
         const from = store.start[owner];
-        if (from < 0) addCoboundary(store.simplexKey[owner], store.simplexF[owner], factor);
-        else work.add(store.f, store.key, store.coef, from, from + store.length[owner], factor, p);
+        if (from < 0) {
+          model.pushCoboundary(dim, store.simplexKey[owner], store.simplexF[owner], factor, p, work);
+          work.flushIfLarge();
+        } else work.addEntries(store.f, store.key, store.coef, from, from + store.length[owner], factor);
         counters.additions++;
         continue;
       }
@@ -143,21 +139,22 @@ export function reduceDimension(
         const facetSign = model.sign;
         if (model.zeroCoface(dim, facet, pivotF) === pivotKey) {
           // The pivot belongs to an apparent pair (facet, pivot) whose column is just δ(facet).
-          addCoboundary(facet, pivotF, ((p - pivotCoef) * inverse[modP(facetSign, p)]) % p);
+          const factor = ((p - pivotCoef) * inverse[modP(facetSign, p)]) % p;
+          model.pushCoboundary(dim, facet, pivotF, factor, p, work);
+          work.flushIfLarge();
           counters.additions++;
           continue;
         }
       }
       // A new pivot: keep the reduced column.
-      const id = store.openExplicit();
-      for (let e = 0; e < work.size; e++) store.append(id, work.f[e], work.key[e], work.coef[e]);
-      pivots.set(pivotKey, id);
+      openColumn = store.openExplicit();
+      work.drain(keep);
+      pivots.set(pivotKey, openColumn);
       if (pivotF > f || keepZeroLength) sink.pair(dim, key, f, pivotKey, pivotF);
       break;
     }
   }
   work.dispose();
-  buffer.dispose();
   store.dispose();
   ledger.release(list.count * 4);
   return { pivots, counters };

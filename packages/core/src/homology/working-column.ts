@@ -1,133 +1,209 @@
+import { CofaceHeap } from "./coface-heap.js";
+import type { CofaceSink } from "./coface-sink.js";
 import type { ByteLedger } from "./homology-budget.js";
 
 /**
- * The column being reduced, kept merged and sorted in filtration order (f, then key) with no zero
- * coefficients, so its pivot is always entry 0. Adding another sorted column is one linear merge into a
- * second buffer; the buffers then swap. Linear merges beat a heap here: reduced columns of graphs whose
- * weights have no geometry grow long, and a merge touches memory in order.
+ * The column being reduced. Reduced columns of graphs whose weights have little geometry grow long (10⁵
+ * entries) and take hundreds of additions of much shorter columns, so the column is kept in two parts: a
+ * sorted, merged run (filtration order, no zeros) and a heap of pending additions. Additions go into the
+ * heap (cost: the added entries only); when the heap grows past half the run, it is drained and merged into
+ * the run in one linear pass. The pivot is the smallest entry of both, with equal keys summed mod p.
  */
-export class WorkingColumn {
-  f: Float64Array;
-  key: Float64Array;
-  coef: Int32Array;
-  size = 0;
+export class WorkingColumn implements CofaceSink {
+  /** The current pivot, valid after settle() returned true. */
+  pivotF = 0;
+  pivotKey = -1;
+  pivotCoef = 0;
+  private hasPivot = false;
+  private runF: Float64Array;
+  private runKey: Float64Array;
+  private runCoef: Int32Array;
+  private head = 0;
+  private end = 0;
   private spareF: Float64Array;
   private spareKey: Float64Array;
   private spareCoef: Int32Array;
+  private readonly pending: CofaceHeap;
   private readonly ledger: ByteLedger;
+  private p = 2;
 
   constructor(ledger: ByteLedger, capacity = 1024) {
     this.ledger = ledger;
     ledger.reserve(capacity * 40, "growing the working column");
-    this.f = new Float64Array(capacity);
-    this.key = new Float64Array(capacity);
-    this.coef = new Int32Array(capacity);
+    this.runF = new Float64Array(capacity);
+    this.runKey = new Float64Array(capacity);
+    this.runCoef = new Int32Array(capacity);
     this.spareF = new Float64Array(capacity);
     this.spareKey = new Float64Array(capacity);
     this.spareCoef = new Int32Array(capacity);
+    this.pending = new CofaceHeap(ledger);
   }
 
-  clear(): void {
-    this.size = 0;
+  reset(p: number): void {
+    this.p = p;
+    this.head = 0;
+    this.end = 0;
+    this.hasPivot = false;
+    this.pending.clear();
   }
 
-  /** this += factor · other, where other[from .. to) is sorted in filtration order; coefficients mod p. */
-  add(
-    otherF: Float64Array,
-    otherKey: Float64Array,
-    otherCoef: Int32Array,
+  push(f: number, key: number, coef: number): void {
+    this.pending.push(f, key, coef);
+  }
+
+  /** this += factor · other[from .. to) (entries sorted or not). */
+  addEntries(
+    f: Float64Array,
+    key: Float64Array,
+    coef: Int32Array,
     from: number,
     to: number,
     factor: number,
-    p: number,
   ): void {
-    const needed = this.size + (to - from);
-    if (needed > this.spareF.length) this.grow(needed);
-    const af = this.f;
-    const ak = this.key;
-    const ac = this.coef;
-    const of = this.spareF;
-    const ok = this.spareKey;
-    const oc = this.spareCoef;
-    let i = 0;
-    let j = from;
-    let m = 0;
-    const n = this.size;
-    while (i < n && j < to) {
-      const fi = af[i];
-      const fj = otherF[j];
-      const ki = ak[i];
-      const kj = otherKey[j];
-      if (fi < fj || (fi === fj && ki < kj)) {
-        of[m] = fi;
-        ok[m] = ki;
-        oc[m] = ac[i];
-        m++;
-        i++;
-      } else if (fi === fj && ki === kj) {
-        const c = (ac[i] + factor * otherCoef[j]) % p;
-        if (c !== 0) {
-          of[m] = fi;
-          ok[m] = ki;
-          oc[m] = c;
-          m++;
+    const p = this.p;
+    for (let e = from; e < to; e++) this.pending.push(f[e], key[e], (factor * coef[e]) % p);
+    this.flushIfLarge();
+  }
+
+  /** Call after pushing a coboundary straight into the column. */
+  flushIfLarge(): void {
+    if (this.pending.size > 4096 && this.pending.size * 2 > this.end - this.head) this.flush();
+  }
+
+  /** Finds the pivot: the first entry whose summed coefficient is not 0 mod p. False when the column is 0. */
+  settle(): boolean {
+    const p = this.p;
+    const heap = this.pending;
+    for (;;) {
+      const inRun = this.head < this.end;
+      const inHeap = heap.size > 0;
+      if (!this.hasPivot && !inRun && !inHeap) return false;
+      // Smallest key among the held pivot, the run's first entry and the heap's top.
+      let f = Infinity;
+      let key = Infinity;
+      if (this.hasPivot) {
+        f = this.pivotF;
+        key = this.pivotKey;
+      }
+      if (inRun) {
+        const rf = this.runF[this.head];
+        const rk = this.runKey[this.head];
+        if (rf < f || (rf === f && rk < key)) {
+          f = rf;
+          key = rk;
         }
-        i++;
-        j++;
-      } else {
-        const c = (factor * otherCoef[j]) % p;
-        if (c !== 0) {
-          of[m] = fj;
-          ok[m] = kj;
-          oc[m] = c;
-          m++;
+      }
+      if (inHeap) {
+        const hf = heap.f[0];
+        const hk = heap.key[0];
+        if (hf < f || (hf === f && hk < key)) {
+          f = hf;
+          key = hk;
         }
-        j++;
+      }
+      let sum = 0;
+      if (this.hasPivot && this.pivotKey === key) {
+        sum += this.pivotCoef;
+        this.hasPivot = false;
+      }
+      if (inRun && this.runKey[this.head] === key) sum += this.runCoef[this.head++];
+      if (inHeap && heap.key[0] === key) sum += heap.popMerged();
+      sum %= p;
+      if (sum !== 0) {
+        if (this.hasPivot) throw new Error("internal: working column pivot out of order");
+        this.hasPivot = true;
+        this.pivotF = f;
+        this.pivotKey = key;
+        this.pivotCoef = sum;
+        return true;
       }
     }
-    while (i < n) {
-      of[m] = af[i];
-      ok[m] = ak[i];
-      oc[m] = ac[i];
-      m++;
-      i++;
+  }
+
+  /**
+   * Hands every entry, pivot first and in filtration order, to `out` (the column is consumed). Call after
+   * settle() returned true.
+   */
+  drain(out: (f: number, key: number, coef: number) => void): void {
+    while (this.settle()) {
+      out(this.pivotF, this.pivotKey, this.pivotCoef);
+      this.hasPivot = false;
     }
-    while (j < to) {
-      const c = (factor * otherCoef[j]) % p;
-      if (c !== 0) {
-        of[m] = otherF[j];
-        ok[m] = otherKey[j];
-        oc[m] = c;
-        m++;
-      }
-      j++;
-    }
-    this.spareF = af;
-    this.spareKey = ak;
-    this.spareCoef = ac;
-    this.f = of;
-    this.key = ok;
-    this.coef = oc;
-    this.size = m;
   }
 
   dispose(): void {
-    this.ledger.release(this.f.length * 40);
+    this.ledger.release(this.runF.length * 40);
+    this.pending.dispose();
+  }
+
+  /** Merges the heap, drained in order, into the run. */
+  private flush(): void {
+    const heap = this.pending;
+    const p = this.p;
+    const needed = this.end - this.head + heap.size;
+    if (needed > this.spareF.length) this.grow(needed);
+    const rf = this.runF;
+    const rk = this.runKey;
+    const rc = this.runCoef;
+    const of = this.spareF;
+    const ok = this.spareKey;
+    const oc = this.spareCoef;
+    let i = this.head;
+    const end = this.end;
+    let m = 0;
+    while (heap.size > 0) {
+      const hf = heap.f[0];
+      const hk = heap.key[0];
+      // Copy run entries that come first.
+      while (i < end && (rf[i] < hf || (rf[i] === hf && rk[i] < hk))) {
+        of[m] = rf[i];
+        ok[m] = rk[i];
+        oc[m] = rc[i];
+        m++;
+        i++;
+      }
+      let sum = heap.popMerged();
+      if (i < end && rk[i] === hk) sum += rc[i++];
+      sum %= p;
+      if (sum !== 0) {
+        of[m] = hf;
+        ok[m] = hk;
+        oc[m] = sum;
+        m++;
+      }
+    }
+    while (i < end) {
+      of[m] = rf[i];
+      ok[m] = rk[i];
+      oc[m] = rc[i];
+      m++;
+      i++;
+    }
+    this.spareF = rf;
+    this.spareKey = rk;
+    this.spareCoef = rc;
+    this.runF = of;
+    this.runKey = ok;
+    this.runCoef = oc;
+    this.head = 0;
+    this.end = m;
   }
 
   private grow(needed: number): void {
-    let capacity = this.f.length;
+    let capacity = this.runF.length;
     while (capacity < needed) capacity *= 2;
-    this.ledger.reserve((capacity - this.f.length) * 40, "growing the working column");
+    this.ledger.reserve((capacity - this.runF.length) * 40, "growing the working column");
     const f = new Float64Array(capacity);
-    f.set(this.f.subarray(0, this.size));
+    f.set(this.runF.subarray(this.head, this.end));
     const key = new Float64Array(capacity);
-    key.set(this.key.subarray(0, this.size));
+    key.set(this.runKey.subarray(this.head, this.end));
     const coef = new Int32Array(capacity);
-    coef.set(this.coef.subarray(0, this.size));
-    this.f = f;
-    this.key = key;
-    this.coef = coef;
+    coef.set(this.runCoef.subarray(this.head, this.end));
+    this.end -= this.head;
+    this.head = 0;
+    this.runF = f;
+    this.runKey = key;
+    this.runCoef = coef;
     this.spareF = new Float64Array(capacity);
     this.spareKey = new Float64Array(capacity);
     this.spareCoef = new Int32Array(capacity);

@@ -56,7 +56,7 @@ let G = 1;
 let undirected = true;
 let capDim = 0;
 let truncated = false;
-let produced = 0;
+const produced = new Float64Array(1); // a typed cell: no boxing in the hot loop
 let budget = 0;
 let progress = 0;
 let withBins = false;
@@ -106,7 +106,7 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
   undirected = !g.directed;
   truncated = false;
   budget = o.budget;
-  produced = n;
+  produced[0] = n;
   progress = 0;
   gTargets = targets;
   vertexOf = g.vertexOf;
@@ -127,7 +127,7 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
   }
   hist[0] = n;
   run[0] = n;
-  if (produced > budget) fail();
+  if (produced[0] > budget) fail();
   if (capDim < 1) {
     truncated = offsets[n] > 0;
     return finish();
@@ -229,19 +229,56 @@ function grow(level: number, at: number, simplexBin: number): void {
       }
       path[dim] = i;
       let size = 0;
+      let first = -1;
+      let second = -1;
       for (let k = k0; k < W; k++) {
         let y = stack[next + k] | 0;
         while (y !== 0) {
           const lyBit = 31 - Math.clz32(y);
           y ^= 1 << lyBit;
+          const j = (k << 5) + lyBit;
           size++;
+          second = first;
+          first = j;
           if (withBins) {
-            const j = (k << 5) + lyBit;
             const e = lbin[i * D + j];
             const cj = carried[cRow + j];
             carried[nRow + j] = Math.max(e, cj);
           }
         }
+      }
+      if (size <= 2 && !credit) {
+        // one or two candidates: their simplices (and the one or two above, directed) are settled here
+        const up = histRow + G;
+        const bj = withBins ? Math.max(b, carried[nRow + first]) : 0;
+        hist[up + bj]++;
+        if (size === 1) {
+          run[dim + 1]++;
+          produced[0]++;
+          continue;
+        }
+        const bk = withBins ? Math.max(b, carried[nRow + second]) : 0;
+        hist[up + bk]++;
+        run[dim + 1] += 2;
+        produced[0] += 2;
+        const arcs =
+          ((loc[first * W + (second >>> 5)] >>> (second & 31)) & 1) +
+          ((loc[second * W + (first >>> 5)] >>> (first & 31)) & 1);
+        if (arcs === 0) continue;
+        if (dim + 2 > capDim) {
+          truncated = true;
+          continue;
+        }
+        const both = Math.max(bj, bk);
+        if ((loc[first * W + (second >>> 5)] >>> (second & 31)) & 1) {
+          hist[up + G + (withBins ? Math.max(both, lbin[first * D + second]) : 0)]++;
+        }
+        if ((loc[second * W + (first >>> 5)] >>> (first & 31)) & 1) {
+          hist[up + G + (withBins ? Math.max(both, lbin[second * D + first]) : 0)]++;
+        }
+        run[dim + 2] += arcs;
+        produced[0] += arcs;
+        continue;
       }
       if (credit) {
         const hi = Math.min(capDim, dim + size);
@@ -256,8 +293,8 @@ function grow(level: number, at: number, simplexBin: number): void {
     }
   }
   run[dim] += made;
-  produced += made;
-  if (produced > budget) fail();
+  produced[0] += made;
+  if (produced[0] > budget) fail();
 }
 
 /** Saves run[lo..hi] on the snapshot stack; returns where it starts. */

@@ -13,7 +13,8 @@ import { SimplexBudgetError } from "./simplex-budget-error.js";
  */
 
 let loc = new Int32Array(0); // local adjacency, d rows of W words
-let stack = new Int32Array(0); // candidate sets, one block of W words per depth
+let stack = new Int32Array(0);
+let repacked = new Int32Array(0); // universe of one large candidate set, rows of ceil(c/32) words // candidate sets, one block of W words per depth
 const packed = new Int32Array(128); // rows (word pairs) of a compacted candidate set of ≤ 64 members
 let packedIndex = new Int32Array(0); // local index → position in the compacted set
 let cnt = new Float64Array(0);
@@ -46,6 +47,7 @@ export function countWithBitsets(g: EnumerationGraph, maxDim: number, simplexBud
   capDim = Math.min(maxDim, dmax + 1);
   stack = new Int32Array((Math.min(dmax, capDim) + 3) * wmax);
   packedIndex = new Int32Array(dmax);
+  repacked = new Int32Array(dmax * wmax);
   cnt = new Float64Array(capDim + 2);
   undirected = !g.directed;
   truncated = false;
@@ -89,12 +91,12 @@ function runLocal(d: number): void {
   for (let k = 0; k < W; k++) stack[k] = 0;
   for (let i = 0; i < d; i++) stack[i >>> 5] |= 1 << (i & 31);
   if (capDim < 2) {
-    if (!truncated) truncated = anyEdgeInside(0);
+    if (!truncated) truncated = anyEdgeInside(loc, W, 0);
     return;
   }
   if (W === 1) expand1(loc, 0, 1, stack[0], 1);
   else if (W === 2) expand2(loc, stack[0], stack[1], 1);
-  else expandWide(0, 1);
+  else expandWide(loc, W, 0, 1);
 }
 
 /**
@@ -245,24 +247,24 @@ function anyEdgeIn2(rows: Int32Array, x0: number, x1: number): boolean {
   return false;
 }
 
-/** Multi-word version: candidate set in stack[at .. at+W). */
-function expandWide(at: number, depth: number): void {
-  const next = at + W;
+/** Multi-word version: candidate set in stack[at .. at+Wc) over a universe with rows of Wc words. */
+function expandWide(rows: Int32Array, Wc: number, at: number, depth: number): void {
+  const next = at + Wc;
   const deeper = depth + 2 <= capDim;
   let total = 0;
-  for (let w = 0; w < W; w++) {
+  for (let w = 0; w < Wc; w++) {
     let bits = stack[at + w];
     while (bits !== 0) {
       const lowBit = 31 - Math.clz32(bits);
       bits ^= 1 << lowBit;
-      const row = ((w << 5) + lowBit) * W;
+      const row = ((w << 5) + lowBit) * Wc;
       let c = 0;
       let words = 0;
       let only = 0;
       const k0 = undirected ? w : 0;
       for (let k = 0; k < k0; k++) stack[next + k] = 0;
-      for (let k = k0; k < W; k++) {
-        const x = stack[at + k] & loc[row + k];
+      for (let k = k0; k < Wc; k++) {
+        const x = stack[at + k] & rows[row + k];
         stack[next + k] = x;
         if (x !== 0) {
           c += popcount32(x);
@@ -274,16 +276,17 @@ function expandWide(at: number, depth: number): void {
       total += c;
       if (c === 1) continue;
       if (!deeper) {
-        if (!truncated) truncated = anyEdgeInside(next);
+        if (!truncated) truncated = anyEdgeInside(rows, Wc, next);
         continue;
       }
       cnt[depth + 1] += total;
       produced[0] += total;
       total = 0;
-      if (words === 1) expand1(loc, (only << 5) * W + only, W, stack[next + only], depth + 1);
-      else if (c === 2) settlePair(next, depth);
-      else if (c <= 64) expandPacked(next, c, depth + 1);
-      else expandWide(next, depth + 1);
+      if (words === 1) expand1(rows, (only << 5) * Wc + only, Wc, stack[next + only], depth + 1);
+      else if (c === 2) settlePair(rows, Wc, next, depth);
+      else if (c <= 64) expandPacked(rows, Wc, next, c, depth + 1);
+      else if (rows === loc && Wc > ((c + 31) >>> 5) + 1) expandRepacked(next, c, depth + 1);
+      else expandWide(rows, Wc, next, depth + 1);
     }
   }
   cnt[depth + 1] += total;
@@ -291,11 +294,46 @@ function expandWide(at: number, depth: number): void {
   if (produced[0] > budget) fail();
 }
 
+/**
+ * A large candidate set (> 64 members) of the root universe, renumbered in order into a universe of its
+ * own with ceil(c/32)-word rows: its subtree then scans fewer words, and its children pack cheaper.
+ */
+function expandRepacked(at: number, c: number, depth: number): void {
+  const W2 = (c + 31) >>> 5;
+  let q = 0;
+  for (let k = 0; k < W; k++) {
+    for (let b = 0; b < 32; b++) if ((stack[at + k] >>> b) & 1) packedIndex[(k << 5) + b] = q++;
+  }
+  repacked.fill(0, 0, c * W2);
+  q = 0;
+  for (let k = 0; k < W; k++) {
+    const y = stack[at + k];
+    for (let b = 0; b < 32; b++) {
+      if (((y >>> b) & 1) === 0) continue;
+      const row = ((k << 5) + b) * W;
+      const out = q * W2;
+      for (let m = undirected ? k : 0; m < W; m++) {
+        let z = stack[at + m] & loc[row + m];
+        while (z !== 0) {
+          const zb = 31 - Math.clz32(z);
+          z ^= 1 << zb;
+          const p = packedIndex[(m << 5) + zb];
+          repacked[out + (p >>> 5)] |= 1 << (p & 31);
+        }
+      }
+      q++;
+    }
+  }
+  for (let k = 0; k < W2; k++) stack[at + k] = 0;
+  for (let p = 0; p < c; p++) stack[at + (p >>> 5)] |= 1 << (p & 31);
+  expandWide(repacked, W2, at, depth);
+}
+
 /** Exactly two candidates j, k in a multi-word set: the (depth+2)-simplex exists iff j~k. */
-function settlePair(at: number, depth: number): void {
+function settlePair(rows: Int32Array, Wc: number, at: number, depth: number): void {
   let j = -1;
   let k = -1;
-  for (let q = 0; q < W; q++) {
+  for (let q = 0; q < Wc; q++) {
     let y = stack[at + q];
     while (y !== 0) {
       const lowBit = 31 - Math.clz32(y);
@@ -305,15 +343,15 @@ function settlePair(at: number, depth: number): void {
       else k = b;
     }
   }
-  const e = ((loc[j * W + (k >>> 5)] >>> (k & 31)) & 1) + ((loc[k * W + (j >>> 5)] >>> (j & 31)) & 1);
+  const e = ((rows[j * Wc + (k >>> 5)] >>> (k & 31)) & 1) + ((rows[k * Wc + (j >>> 5)] >>> (j & 31)) & 1);
   cnt[depth + 2] += e;
   produced[0] += e;
 }
 
 /** Renumbers a candidate set of c ≤ 64 members into a one- or two-word universe and runs its subtree there. */
-function expandPacked(at: number, c: number, depth: number): void {
+function expandPacked(rows: Int32Array, Wc: number, at: number, c: number, depth: number): void {
   let q = 0;
-  for (let k = 0; k < W; k++) {
+  for (let k = 0; k < Wc; k++) {
     let y = stack[at + k];
     while (y !== 0) {
       const b = 31 - Math.clz32(y);
@@ -322,16 +360,16 @@ function expandPacked(at: number, c: number, depth: number): void {
     }
   }
   q = 0;
-  for (let k = 0; k < W; k++) {
+  for (let k = 0; k < Wc; k++) {
     let y = stack[at + k];
     while (y !== 0) {
       const b = 31 - Math.clz32(y);
       y ^= 1 << b;
-      const row = ((k << 5) + b) * W;
+      const row = ((k << 5) + b) * Wc;
       let lo = 0;
       let hi = 0;
-      for (let m = undirected ? k : 0; m < W; m++) {
-        let z = stack[at + m] & loc[row + m];
+      for (let m = undirected ? k : 0; m < Wc; m++) {
+        let z = stack[at + m] & rows[row + m];
         while (z !== 0) {
           const zb = 31 - Math.clz32(z);
           z ^= 1 << zb;
@@ -359,14 +397,14 @@ function anyEdgeIn1(rows: Int32Array, base: number, stride: number, set: number)
   return false;
 }
 
-function anyEdgeInside(at: number): boolean {
-  for (let w = 0; w < W; w++) {
+function anyEdgeInside(rows: Int32Array, Wc: number, at: number): boolean {
+  for (let w = 0; w < Wc; w++) {
     let bits = stack[at + w];
     while (bits !== 0) {
       const lowBit = 31 - Math.clz32(bits);
       bits ^= 1 << lowBit;
-      const row = ((w << 5) + lowBit) * W;
-      for (let k = 0; k < W; k++) if ((stack[at + k] & loc[row + k]) !== 0) return true;
+      const row = ((w << 5) + lowBit) * Wc;
+      for (let k = 0; k < Wc; k++) if ((stack[at + k] & rows[row + k]) !== 0) return true;
     }
   }
   return false;

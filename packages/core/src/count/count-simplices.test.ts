@@ -154,6 +154,17 @@ describe("countSimplices on hand-checkable graphs", () => {
     const annotated = countSimplices(multipartite(parts, size, "both"), { participation: true });
     expect(list(annotated.counts)).toEqual(list(both.counts));
   });
+
+  it("3 parts of 70: candidate sets above 64 members (the re-packed wide universe) count the same", () => {
+    const want = [1, 2, 3].map((j) => binomial(3, j) * 70 ** j);
+    for (const mode of ["undirected", "ordered", "both"] as const) {
+      const g = multipartite(3, 70, mode);
+      const expected = mode === "both" ? want.map((c, k) => c * [1, 2, 6][k]) : want;
+      expect(list(countSimplices(g).counts)).toEqual(expected);
+      expect(list(countSimplices(g, { maxDim: 1 }).counts)).toEqual(expected.slice(0, 2));
+      expect(countSimplices(g, { maxDim: 1 }).truncated).toBe(true);
+    }
+  });
 });
 
 /** Seeded pseudo-random graph (mulberry32), dense enough for local universes above 64 vertices. */

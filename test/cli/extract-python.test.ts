@@ -2,8 +2,9 @@
  * The outputs of `extract` in their real clients, Debian's python3-numpy and python3-torch:
  * - features.npz loads with numpy.load (no pickle); X, y, ids, feature_names equal features.csv;
  * - a GNN bundle loads with numpy; its arrays have the promised shapes and dtypes, and its values equal
- *   what numpy computes from the graph's own CSV matrix (edges, weights, degrees, strengths, and
- *   triangles per node as diag(A³)/2 — a standard identity for simple graphs);
+ *   what numpy computes from the graph's own CSV matrix (edges, weights, in/out degrees and strengths,
+ *   and triangles per node as diag(A³)/2 — a standard identity for simple graphs); every bundle of a
+ *   dataset with directed graphs has the directed column layout;
  * - torch builds tensors from a bundle and runs one forward pass of a two-layer graph convolution
  *   written in plain torch (T. N. Kipf, M. Welling, "Semi-supervised classification with graph
  *   convolutional networks", ICLR 2017: H' = σ(D^{-1/2}(A+I)D^{-1/2} H W)), checked against the same
@@ -105,16 +106,20 @@ pairs = sorted(zip(ei[0].tolist(), ei[1].tolist()))
 expected_pairs = sorted(zip(*np.nonzero(present)))
 out["edges_match"] = pairs == [(int(u), int(v)) for u, v in expected_pairs]
 out["weights_match"] = bool(np.allclose(ea[:, 0], W[ei[0], ei[1]].astype(np.float32), rtol=0, atol=0))
+out["layout_directed"] = "in_degree" in names
+out["directed_flag"] = int(b["directed"][0])
+out["degree_match"] = bool(np.array_equal(x[:, names.index("out_degree")], A.sum(1)) and
+                          np.array_equal(x[:, names.index("in_degree")], A.sum(0)))
+out["strength_match"] = bool(np.allclose(x[:, names.index("out_strength")], W.sum(1), rtol=1e-6) and
+                            np.allclose(x[:, names.index("in_strength")], W.sum(0), rtol=1e-6))
 if directed:
-    out["degree_match"] = bool(np.array_equal(x[:, names.index("out_degree")], A.sum(1)) and
-                              np.array_equal(x[:, names.index("in_degree")], A.sum(0)))
-    out["strength_match"] = bool(np.allclose(x[:, names.index("out_strength")], W.sum(1), rtol=1e-6))
     out["triangles_match"] = True
+    out["unoriented_zero"] = True
 else:
-    out["degree_match"] = bool(np.array_equal(x[:, names.index("degree")], A.sum(1)))
-    out["strength_match"] = bool(np.allclose(x[:, names.index("strength")], W.sum(1), rtol=1e-6))
     # Triangles through each node of a simple graph: diag(A^3) / 2.
     out["triangles_match"] = bool(np.array_equal(x[:, names.index("simplices_d2")], np.diag(A @ A @ A) // 2))
+    # In the directed layout an undirected graph has no source/sink participation.
+    out["unoriented_zero"] = bool(all((x[:, i] == 0).all() for i, nm in enumerate(names) if "_as_" in nm))
 print(json.dumps(out))`,
         [join(dir, "run", "bundles", `${id}.npz`), join(dir, `${id}.csv`), String(g.directed)],
       ) as Record<string, unknown>;
@@ -132,6 +137,10 @@ print(json.dumps(out))`,
       expect(report.degree_match).toBe(true);
       expect(report.strength_match).toBe(true);
       expect(report.triangles_match).toBe(true);
+      // The dataset has directed graphs, so every bundle has the directed column layout.
+      expect(report.layout_directed).toBe(true);
+      expect(report.directed_flag).toBe(g.directed ? 1 : 0);
+      expect(report.unoriented_zero).toBe(true);
     },
   );
 

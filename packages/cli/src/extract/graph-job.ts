@@ -4,7 +4,9 @@ import {
   densityGrid,
   edgeCount,
   type FeatureConfig,
+  type NodeEdgeFeatures,
   nodeEdgeFeatures,
+  nodeFeatureNames,
   type WeightedGraph,
 } from "@cliquescape/core";
 import {
@@ -133,12 +135,16 @@ function gnnBundle(
 ): Uint8Array {
   const semantics = spec.preparation.weights;
   const threshold = nodeFeatureThreshold(graph, spec);
-  const f = nodeEdgeFeatures(graph, {
-    threshold,
-    semantics,
-    topDim: spec.complex.topDim,
-    budget: spec.complex.simplexBudget ?? undefined,
-  });
+  const f = inNodeLayout(
+    nodeEdgeFeatures(graph, {
+      threshold,
+      semantics,
+      topDim: spec.complex.topDim,
+      budget: spec.complex.simplexBudget ?? undefined,
+    }),
+    graph,
+    spec,
+  );
   const F = f.nodeFeatureNames.length;
   const G = f.edgeFeatureNames.length;
   const E = f.edgeIndex.length / 2;
@@ -148,6 +154,7 @@ function gnnBundle(
     { name: "edge_index", dtype: "int64", shape: [2, E], values: f.edgeIndex },
     { name: "edge_attr", dtype: "float32", shape: [E, G], values: f.edgeAttr },
     { name: "y", dtype: "int64", shape: [1], values: [labelCode] },
+    { name: "directed", dtype: "int64", shape: [1], values: [graph.directed ? 1 : 0] },
     { name: "node_feature_names", dtype: "unicode", shape: [F], values: f.nodeFeatureNames },
     { name: "edge_feature_names", dtype: "unicode", shape: [G], values: f.edgeFeatureNames },
     { name: "node_labels", dtype: "unicode", shape: [graph.n], values: labels },
@@ -159,4 +166,32 @@ function gnnBundle(
     arrays.push({ name: "pos", dtype: "float32", shape: [graph.n, coordinates.dims], values: pos });
   }
   return encodeNpz(arrays);
+}
+
+/**
+ * The node table in the dataset's layout, so every bundle has the same columns. An undirected graph in the
+ * directed layout: in- and out-degree are its degree, in- and out-strength its strength, and participation
+ * as source or sink is 0 (its simplices have no orientation; the bundle's `directed` flag says so).
+ */
+function inNodeLayout(f: NodeEdgeFeatures, graph: WeightedGraph, spec: ResolvedRunSpec): NodeEdgeFeatures {
+  if (spec.nodeLayout === (graph.directed ? "directed" : "undirected")) return f;
+  if (graph.directed) {
+    throw new RangeError(
+      "the graph is directed but the spec's nodeLayout is undirected (made for a dataset without directed graphs)",
+    );
+  }
+  const topDim = spec.complex.topDim;
+  const names = nodeFeatureNames(true, topDim);
+  const from = f.nodeFeatureNames.length;
+  const to = names.length;
+  const x = new Float32Array(graph.n * to);
+  for (let v = 0; v < graph.n; v++) {
+    const row = f.x.subarray(v * from, (v + 1) * from);
+    x[v * to] = row[0]; // in_degree
+    x[v * to + 1] = row[0]; // out_degree
+    x[v * to + 2] = row[1]; // in_strength
+    x[v * to + 3] = row[1]; // out_strength
+    for (let k = 1; k <= topDim; k++) x[v * to + 3 + k] = row[1 + k]; // simplices_d{k}; source/sink stay 0
+  }
+  return { ...f, nodeFeatureNames: names, x };
 }

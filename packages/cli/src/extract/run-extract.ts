@@ -17,6 +17,7 @@ import { featureConfigOf, type GraphOutcome } from "./graph-job.js";
 import { encodeRecord, type GraphRecord, readRecord } from "./graph-record.js";
 import { validateSpec } from "./load-spec.js";
 import { startProgress } from "./progress.js";
+import { readOptionsFor } from "./read-prepared-graph.js";
 import { needsFirstPass, resolveGrid } from "./resolve-grid.js";
 import { createRunFolder, graphPaths, type RunFolder, removeLeftoverTemps, runFolder } from "./run-folder.js";
 import type { ResolvedRunSpec, RunSpec } from "./run-spec.js";
@@ -191,11 +192,12 @@ async function fixSpec(
   const sameRequest =
     previous !== null &&
     specDifferences(
-      { ...previous, resolvedGrid: undefined, labelNames: undefined },
+      { ...previous, resolvedGrid: undefined, labelNames: undefined, nodeLayout: undefined },
       {
         ...spec,
         resolvedGrid: undefined,
         labelNames: undefined,
+        nodeLayout: undefined,
       },
     ).length === 0;
   // Re-running the same command on a run folder reuses its grid: the first pass is not redone.
@@ -212,7 +214,12 @@ async function fixSpec(
   const known = spec.labelNames ?? (sameRequest ? previous?.labelNames : undefined) ?? [];
   const seen = [...new Set(dataset.entries.map((e) => e.label).filter((l): l is string => l !== null))];
   const labelNames = [...known, ...seen.filter((label) => !known.includes(label)).sort()];
-  return { ...spec, resolvedGrid, labelNames, toolVersion: VERSION };
+  const anyDirected = dataset.entries.some((entry) => readOptionsFor(entry, spec.preparation).directed);
+  const nodeLayout =
+    spec.nodeLayout ??
+    (sameRequest ? previous?.nodeLayout : undefined) ??
+    (anyDirected ? "directed" : "undirected");
+  return { ...spec, resolvedGrid, labelNames, nodeLayout, toolVersion: VERSION };
 }
 
 /** Reads every graph once (on the workers) and returns a bounded sample of all their edge values. */
@@ -326,6 +333,7 @@ function specDocument(
     families: spec.families,
     outputs: spec.outputs,
     labelNames: spec.labelNames,
+    nodeLayout: spec.nodeLayout,
     dataset: datasetArgument,
     ...(datasetOptions && Object.values(datasetOptions).some((v) => v !== undefined)
       ? { datasetOptions }

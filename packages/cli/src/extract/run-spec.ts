@@ -114,6 +114,12 @@ export const RunSpecSchema = z.strictObject({
   outputs: OutputsSchema,
   /** Label names in code order (y = index); resolved from the dataset when absent. */
   labelNames: z.array(z.string()).optional(),
+  /**
+   * Column layout of every bundle's node table; resolved from the dataset when absent: "directed" (in/out
+   * degrees and strengths, participation as source and sink) when any graph is directed, so that every
+   * bundle of a dataset has the same columns.
+   */
+  nodeLayout: z.enum(["directed", "undirected"]).optional(),
   /** Provenance only: the dataset and the files of this run. Never compared between runs. */
   dataset: z.string().optional(),
   datasetOptions: z
@@ -139,6 +145,7 @@ export type EdgeTransform = (typeof EDGE_TRANSFORMS)[number];
 export type ResolvedRunSpec = RunSpec & {
   resolvedGrid: ResolvedGrid;
   labelNames: string[];
+  nodeLayout: "directed" | "undirected";
   toolVersion: string;
 };
 

@@ -13,6 +13,7 @@ const COMPARED_KEYS = [
   "families",
   "outputs",
   "labelNames",
+  "nodeLayout",
 ] as const;
 
 /**

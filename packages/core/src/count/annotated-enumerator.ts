@@ -180,6 +180,8 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
         }
       }
       sp = base;
+    } else if (W === 1) {
+      grow1(0, stack[0], 0, 0);
     } else {
       grow(0, 0, 0);
     }
@@ -212,12 +214,18 @@ function grow(level: number, at: number, simplexBin: number): void {
       if (directedRoles) sink[dim][vertexOf[gTargets[listBase + i]]]++;
       const row = i * W;
       let c = 0;
+      let words = 0;
+      let only = 0;
       const k0 = undirected ? w : 0;
       for (let k = 0; k < k0; k++) stack[next + k] = 0;
       for (let k = k0; k < W; k++) {
         const x = stack[at + k] & loc[row + k];
         stack[next + k] = x;
         c |= x;
+        if (x !== 0) {
+          words++;
+          only = k;
+        }
       }
       if (c !== 0 && !deeper) {
         truncated = true;
@@ -228,6 +236,21 @@ function grow(level: number, at: number, simplexBin: number): void {
         continue;
       }
       path[dim] = i;
+      if (words === 1 && !credit) {
+        // the candidates lie in one word: carry their bins there and go on with single words
+        const off = only << 5;
+        let y = stack[next + only];
+        if (withBins) {
+          while (y !== 0) {
+            const yb = 31 - Math.clz32(y);
+            y ^= 1 << yb;
+            const j = off + yb;
+            carried[nRow + j] = Math.max(lbin[i * D + j], carried[cRow + j]);
+          }
+        }
+        grow1(level + 1, stack[next + only], b, only);
+        continue;
+      }
       let size = 0;
       let first = -1;
       let second = -1;
@@ -294,6 +317,87 @@ function grow(level: number, at: number, simplexBin: number): void {
   }
   run[dim] += made;
   produced[0] += made;
+  if (produced[0] > budget) fail();
+}
+
+/**
+ * grow() for a candidate set lying in one word `word` of the universe (no participation): the set is a
+ * number, member b is local vertex 32·word + b, its row word is loc[(32·word + b)·W + word].
+ */
+function grow1(level: number, cand: number, simplexBin: number, word: number): void {
+  const dim = level + 1;
+  const deeper = dim + 1 <= capDim;
+  const cRow = level * D;
+  const nRow = cRow + D;
+  const histRow = dim * G;
+  const off = word << 5;
+  let made = 0;
+  let above = 0;
+  let aboveTwo = 0;
+  let bits = cand;
+  while (bits !== 0) {
+    const ib = 31 - Math.clz32(bits);
+    bits ^= 1 << ib;
+    const i = off + ib;
+    let b = simplexBin;
+    if (withBins) {
+      const ci = carried[cRow + i];
+      if (ci > b) b = ci;
+    }
+    hist[histRow + b]++;
+    made++;
+    if (directedRoles) sink[dim][vertexOf[gTargets[listBase + i]]]++;
+    const x = cand & loc[i * W + word];
+    if (x === 0) continue;
+    if (!deeper) {
+      truncated = true;
+      continue;
+    }
+    const first = 31 - Math.clz32(x);
+    const rest = x ^ (1 << first);
+    if (rest === 0 || (rest & (rest - 1)) === 0) {
+      // one or two candidates: settled here, like grow()
+      const j = off + first;
+      const up = histRow + G;
+      const bj = withBins ? Math.max(b, lbin[i * D + j], carried[cRow + j]) : 0;
+      hist[up + bj]++;
+      if (rest === 0) {
+        above++;
+        continue;
+      }
+      const k = off + 31 - Math.clz32(rest);
+      const bk = withBins ? Math.max(b, lbin[i * D + k], carried[cRow + k]) : 0;
+      hist[up + bk]++;
+      above += 2;
+      const jk = (loc[j * W + word] >>> (k - off)) & 1;
+      const kj = (loc[k * W + word] >>> (j - off)) & 1;
+      if (jk + kj === 0) continue;
+      if (dim + 2 > capDim) {
+        truncated = true;
+        continue;
+      }
+      const both = Math.max(bj, bk);
+      if (jk !== 0) hist[up + G + (withBins ? Math.max(both, lbin[j * D + k]) : 0)]++;
+      if (kj !== 0) hist[up + G + (withBins ? Math.max(both, lbin[k * D + j]) : 0)]++;
+      aboveTwo += jk + kj;
+      continue;
+    }
+    if (withBins) {
+      let y = x;
+      while (y !== 0) {
+        const yb = 31 - Math.clz32(y);
+        y ^= 1 << yb;
+        const j = off + yb;
+        carried[nRow + j] = Math.max(lbin[i * D + j], carried[cRow + j]);
+      }
+    }
+    path[dim] = i;
+    grow1(level + 1, x, b, word);
+  }
+  run[dim] += made;
+  if (above !== 0) run[dim + 1] += above;
+  if (aboveTwo !== 0) run[dim + 2] += aboveTwo;
+  produced[0] += made + above + aboveTwo;
   if (produced[0] > budget) fail();
 }
 

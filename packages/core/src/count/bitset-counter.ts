@@ -219,6 +219,7 @@ function lastPair(rows: Int32Array, base: number, stride: number, y: number): nu
 function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void {
   const deeper = depth + 2 <= capDim;
   let total = 0;
+  let pairs = 0;
   for (let w = 0; w < 2; w++) {
     let bits = w === 0 ? c0 : c1;
     while (bits !== 0) {
@@ -234,6 +235,16 @@ function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void 
         if (!truncated) truncated = anyEdgeIn2(rows, x0, x1);
         continue;
       }
+      if (c === 2) {
+        // two candidates j > k: the next simplex exists once per arc between them
+        const j = x1 !== 0 ? 63 - Math.clz32(x1) : 31 - Math.clz32(x0);
+        const r0 = j < 32 ? x0 ^ (1 << j) : x0;
+        const r1 = j < 32 ? x1 : x1 ^ (1 << (j - 32));
+        const k = r1 !== 0 ? 63 - Math.clz32(r1) : 31 - Math.clz32(r0);
+        pairs +=
+          ((rows[(j << 1) + (k >>> 5)] >>> (k & 31)) & 1) + ((rows[(k << 1) + (j >>> 5)] >>> (j & 31)) & 1);
+        continue;
+      }
       cnt[depth + 1] += total;
       produced[0] += total;
       total = 0;
@@ -243,7 +254,8 @@ function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void 
     }
   }
   cnt[depth + 1] += total;
-  produced[0] += total;
+  produced[0] += total + pairs;
+  if (pairs !== 0) cnt[depth + 2] += pairs;
   if (produced[0] > budget) fail();
 }
 

@@ -220,6 +220,7 @@ function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void 
   const deeper = depth + 2 <= capDim;
   let total = 0;
   let pairs = 0;
+  let triples = 0;
   for (let w = 0; w < 2; w++) {
     let bits = w === 0 ? c0 : c1;
     while (bits !== 0) {
@@ -245,6 +246,22 @@ function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void 
           ((rows[(j << 1) + (k >>> 5)] >>> (k & 31)) & 1) + ((rows[(k << 1) + (j >>> 5)] >>> (j & 31)) & 1);
         continue;
       }
+      if (c === 3 && depth + 3 <= capDim) {
+        // three candidates: both remaining levels settled inline, as in expand1
+        let y0 = x0;
+        let y1 = x1;
+        for (let t = 0; t < 3; t++) {
+          const m = y1 !== 0 ? 63 - Math.clz32(y1) : 31 - Math.clz32(y0);
+          if (m < 32) y0 ^= 1 << m;
+          else y1 ^= 1 << (m - 32);
+          const z0 = x0 & rows[m << 1];
+          const z1 = x1 & rows[(m << 1) + 1];
+          const zc = popcount32(z0) + popcount32(z1);
+          pairs += zc;
+          if (zc === 2) triples += lastPair2(rows, z0, z1);
+        }
+        continue;
+      }
       cnt[depth + 1] += total;
       produced[0] += total;
       total = 0;
@@ -254,9 +271,19 @@ function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void 
     }
   }
   cnt[depth + 1] += total;
-  produced[0] += total + pairs;
+  produced[0] += total + pairs + triples;
   if (pairs !== 0) cnt[depth + 2] += pairs;
+  if (triples !== 0) cnt[depth + 3] += triples;
   if (produced[0] > budget) fail();
+}
+
+/** For a two-word set of exactly two members j, k: how many of the arcs j→k, k→j exist. */
+function lastPair2(rows: Int32Array, z0: number, z1: number): number {
+  const j = z1 !== 0 ? 63 - Math.clz32(z1) : 31 - Math.clz32(z0);
+  const r0 = j < 32 ? z0 ^ (1 << j) : z0;
+  const r1 = j < 32 ? z1 : z1 ^ (1 << (j - 32));
+  const k = r1 !== 0 ? 63 - Math.clz32(r1) : 31 - Math.clz32(r0);
+  return ((rows[(j << 1) + (k >>> 5)] >>> (k & 31)) & 1) + ((rows[(k << 1) + (j >>> 5)] >>> (j & 31)) & 1);
 }
 
 function anyEdgeIn2(rows: Int32Array, x0: number, x1: number): boolean {

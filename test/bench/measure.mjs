@@ -2,7 +2,9 @@
 //   node measure.mjs generate NAME DIR        write DIR/NAME.txt (+ NAME.weights.json sidecar)
 //   node measure.mjs count FILE REPEAT         time countSimplices on all edges
 //   node measure.mjs sweep FILE THRESHOLDS     time sweepSimplexCounts on an even grid vs a plain count
+//   node measure.mjs yardstick BIN FILE REPEAT run the yardstick binary; its time_s and its CPU time
 // Prints one JSON line on stdout.
+import { spawnSync } from "node:child_process";
 import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import {
@@ -47,6 +49,23 @@ function loadGraph(file) {
   return { graph, semantics, weights, csrSeconds: seconds(t0) };
 }
 
+/** CPU seconds of this process (user + system). */
+function cpuSeconds() {
+  const u = process.cpuUsage();
+  return (u.user + u.system) / 1e6;
+}
+
+/** CPU seconds of waited-for children (Linux /proc/self/stat cutime + cstime), or NaN elsewhere. */
+function childCpuSeconds() {
+  try {
+    const fields = readFileSync("/proc/self/stat", "utf8").split(") ")[1].split(" ");
+    // after "pid (comm) ": field 3 is state, so cutime (16) and cstime (17) sit at 13 and 14
+    return (Number(fields[13]) + Number(fields[14])) / 100;
+  } catch {
+    return Number.NaN;
+  }
+}
+
 function peakMiB() {
   return process.resourceUsage().maxRSS / 1024;
 }
@@ -64,11 +83,14 @@ if (mode === "generate") {
 } else if (mode === "count") {
   const { graph, csrSeconds } = loadGraph(a);
   const times = [];
+  const cpu = [];
   let r;
   for (let i = 0; i < Number(b ?? 1); i++) {
     const t0 = performance.now();
+    const c0 = cpuSeconds();
     r = countSimplices(graph);
     times.push(seconds(t0));
+    cpu.push(cpuSeconds() - c0);
   }
   console.log(
     JSON.stringify({
@@ -76,6 +98,7 @@ if (mode === "generate") {
       edges: graph.directed ? graph.targets.length : graph.targets.length / 2,
       counts: Array.from(r.counts),
       seconds: median(times),
+      cpuSeconds: median(cpu),
       csrSeconds,
       peakMiB: peakMiB(),
     }),
@@ -114,7 +137,25 @@ if (mode === "generate") {
       peakMiB: peakMiB(),
     }),
   );
+} else if (mode === "yardstick") {
+  const [, bin, file, repeat] = process.argv.slice(2);
+  const times = [];
+  const cpu = [];
+  let counts = [];
+  for (let i = 0; i < Number(repeat ?? 1); i++) {
+    const c0 = childCpuSeconds();
+    const run = spawnSync(bin, [file], { encoding: "utf8", maxBuffer: 1 << 24 });
+    if (run.status !== 0) throw new Error(`${bin} failed: ${run.stderr}`);
+    const out = run.stdout;
+    counts = [...out.matchAll(/^dim (\d+) (\d+)$/gm)].map((m) => Number(m[2]));
+    times.push(Number(/^time_s (\S+)$/m.exec(out)[1]));
+    // its CPU time less its file parsing, which its time_s leaves out too (10 ms clock ticks)
+    cpu.push(childCpuSeconds() - c0 - Number(/^parse_s (\S+)$/m.exec(out)[1]));
+  }
+  console.log(JSON.stringify({ seconds: median(times), cpuSeconds: median(cpu), counts }));
 } else {
-  console.error("usage: measure.mjs generate NAME DIR | count FILE [REPEAT] | sweep FILE [THRESHOLDS]");
+  console.error(
+    "usage: measure.mjs generate NAME DIR | count FILE [REPEAT] | sweep FILE [THRESHOLDS] | yardstick BIN FILE [REPEAT]",
+  );
   process.exit(2);
 }

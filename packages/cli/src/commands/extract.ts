@@ -91,6 +91,12 @@ export function extractCommand(): Command {
         "barcode up to the grid's end (axis, default) or of the whole filtration",
       ).choices(["axis", "full"]),
     )
+    .addOption(
+      new Option(
+        "--time-limit <s>",
+        "abandon (and record as failed) a graph that takes longer (default: none)",
+      ).argParser(positiveNumber),
+    )
     // Grid.
     .addOption(
       new Option("--threshold <list>", "grid of these weights (comma-separated)").argParser(numberList),
@@ -202,4 +208,10 @@ function quantilePair(text: string): [number, number] {
   const parts = text.split(":");
   if (parts.length !== 2) throw new UsageError(`expected FROM:TO quantiles, got "${text}"`);
   return [finiteNumber(parts[0]), finiteNumber(parts[1])];
+}
+
+function positiveNumber(text: string): number {
+  const value = finiteNumber(text);
+  if (value <= 0) throw new UsageError(`expected a number > 0, got "${text}"`);
+  return value;
 }

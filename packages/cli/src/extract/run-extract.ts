@@ -105,16 +105,15 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
 
   let failed = 0;
   const progress = startProgress("graphs", todo.length);
+  const tasks = todo.map((i) => ({
+    kind: "extract" as const,
+    index: i,
+    entry: dataset.entries[i],
+    relativeFile: relativeFile(dataset.entries[i].file),
+    labelCode: labelCode(dataset.entries[i].label, spec.labelNames),
+  }));
   const ended = await runOnWorkers(
-    Math.max(1, Math.min(request.workers, todo.length)),
-    { kind: "setup", preparation: spec.preparation, spec },
-    todo.map((i) => ({
-      kind: "extract" as const,
-      index: i,
-      entry: dataset.entries[i],
-      relativeFile: relativeFile(dataset.entries[i].file),
-      labelCode: labelCode(dataset.entries[i].label, spec.labelNames),
-    })),
+    tasks,
     (reply) => {
       if (reply.kind !== "extract") return;
       const entry = dataset.entries[reply.index];
@@ -123,22 +122,21 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
       if (!record.ok) failed++;
       progress.update(records.size - skipped, failed);
     },
-    request.signal,
-    (task, message) => ({
-      kind: "extract",
-      index: task.index,
-      outcome: {
-        ok: false,
-        warnings: [],
-        failure: {
-          file: task.entry.file,
-          line: null,
-          column: null,
-          reason: `worker stopped: ${message}`,
-          kind: "WorkerError",
+    {
+      size: Math.max(1, Math.min(request.workers, todo.length)),
+      setup: { kind: "setup", preparation: spec.preparation, spec },
+      signal: request.signal,
+      timeLimitSeconds: spec.complex.timeLimitSeconds,
+      failedReply: (task, message) => ({
+        kind: "extract",
+        index: task.index,
+        outcome: {
+          ok: false,
+          warnings: [],
+          failure: { file: task.entry.file, line: null, column: null, reason: message, kind: "WorkerError" },
         },
-      },
-    }),
+      }),
+    },
   );
   progress.stop();
 
@@ -231,8 +229,6 @@ async function firstPass(spec: RunSpec, dataset: Dataset, request: ExtractReques
   let done = 0;
   const progress = startProgress("first pass (weight quantiles)", entries.length);
   const ended = await runOnWorkers(
-    Math.max(1, Math.min(request.workers, entries.length)),
-    { kind: "setup", preparation: spec.preparation, spec: null },
     entries.map((entry, index) => ({ kind: "sample" as const, index, entry, limit })),
     (reply) => {
       if (reply.kind !== "sample") return;
@@ -241,8 +237,14 @@ async function firstPass(spec: RunSpec, dataset: Dataset, request: ExtractReques
       else failed++;
       progress.update(done, failed);
     },
-    request.signal,
-    (task) => ({ kind: "sample", index: task.index, values: null, failure: null }),
+    {
+      size: Math.max(1, Math.min(request.workers, entries.length)),
+      setup: { kind: "setup", preparation: spec.preparation, spec: null },
+      signal: request.signal,
+      timeLimitSeconds: spec.complex.timeLimitSeconds,
+      // A graph that cannot be read here fails again, with its reason, when it is computed.
+      failedReply: (task) => ({ kind: "sample", index: task.index, values: null, failure: null }),
+    },
   );
   progress.stop();
   if (ended === "stopped")

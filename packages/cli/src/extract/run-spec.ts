@@ -40,6 +40,11 @@ export const ComplexSchema = z
      * still alive there have no death) or of the whole filtration ("full").
      */
     barcodeRange: z.enum(["axis", "full"]).default("axis"),
+    /**
+     * Seconds one graph may take before it is abandoned and recorded as failed; null: no limit. Off by
+     * default because which graphs pass would then depend on the machine.
+     */
+    timeLimitSeconds: z.number().positive().nullable().default(null),
   })
   .prefault({});
 

@@ -4,20 +4,29 @@ import type { WorkerReply, WorkerSetup, WorkerTask } from "./worker-messages.js"
 /** The compiled worker script next to this file in dist/. */
 const WORKER_SCRIPT = new URL("./graph-worker.js", import.meta.url);
 
+export interface PoolOptions {
+  size: number;
+  setup: WorkerSetup;
+  /** Interrupts the run: no new task starts and the tasks in flight are abandoned at once. */
+  signal: AbortSignal;
+  /** A task running longer than this is abandoned (its worker terminated and replaced); none when null. */
+  timeLimitSeconds: number | null;
+  /** The reply standing for a task whose worker died or ran out of time. */
+  failedReply: (task: WorkerTask, message: string) => WorkerReply;
+}
+
 /**
- * Runs tasks on `size` worker threads, one task per worker at a time, handing each reply to `onReply` in
- * the order replies arrive (the caller puts results in dataset order). Once `signal` aborts, no new task
- * starts and the tasks in flight are abandoned at once (their workers are terminated). A worker that dies (a crash, its heap limit) answers its task with a failure and is
- * replaced, so one pathological graph cannot end the run.
+ * Runs tasks on worker threads, one task per worker at a time, handing each reply to `onReply` in the order
+ * replies arrive (the caller puts results in dataset order). A worker that dies (a crash, its heap limit)
+ * or overruns the time limit answers its task with a failure and is replaced, so one pathological graph
+ * cannot end or stall the run.
  */
 export async function runOnWorkers(
-  size: number,
-  setup: WorkerSetup,
   tasks: readonly WorkerTask[],
   onReply: (reply: WorkerReply) => void,
-  signal: AbortSignal,
-  onCrash: (task: WorkerTask, message: string) => WorkerReply,
+  options: PoolOptions,
 ): Promise<"finished" | "stopped"> {
+  const { signal, setup, failedReply, timeLimitSeconds } = options;
   if (tasks.length === 0) return "finished";
   let next = 0;
   let pending = 0;
@@ -30,42 +39,51 @@ export async function runOnWorkers(
       for (const worker of workers) void worker.terminate();
       resolve(how);
     };
-    const feed = (worker: Worker, current: { task: WorkerTask | null }) => {
-      if (signal.aborted) return settle("stopped");
-      if (next >= tasks.length) {
-        current.task = null;
-        if (pending === 0) settle("finished");
-        return;
-      }
-      current.task = tasks[next++];
-      pending++;
-      worker.postMessage(current.task);
-    };
     const start = () => {
       const worker = new Worker(WORKER_SCRIPT);
       workers.add(worker);
-      const current: { task: WorkerTask | null } = { task: null };
+      let task: WorkerTask | null = null;
+      let timer: NodeJS.Timeout | undefined;
+      const feed = () => {
+        if (signal.aborted) return settle("stopped");
+        if (next >= tasks.length) {
+          if (pending === 0) settle("finished");
+          return;
+        }
+        task = tasks[next++];
+        pending++;
+        worker.postMessage(task);
+        if (timeLimitSeconds !== null) timer = setTimeout(overrun, timeLimitSeconds * 1000);
+      };
+      // The worker is lost: its task fails with `message`, and a fresh worker takes its place.
+      const lose = (message: string) => {
+        clearTimeout(timer);
+        workers.delete(worker);
+        if (settled) return;
+        if (task) {
+          pending--;
+          onReply(failedReply(task, message));
+          task = null;
+        }
+        start();
+      };
+      const overrun = () => {
+        void worker.terminate();
+        lose(`took longer than the time limit of ${timeLimitSeconds} s; the graph was abandoned`);
+      };
       worker.postMessage(setup);
       worker.on("message", (reply: WorkerReply) => {
         if (settled) return; // a stopped run writes nothing more
+        clearTimeout(timer);
         pending--;
-        current.task = null;
+        task = null;
         onReply(reply);
-        feed(worker, current);
+        feed();
       });
-      worker.on("error", (error) => {
-        workers.delete(worker);
-        if (settled) return;
-        const task = current.task;
-        if (task) {
-          pending--;
-          onReply(onCrash(task, error.message));
-        }
-        start();
-      });
-      feed(worker, current);
+      worker.on("error", (error) => lose(`worker stopped: ${error.message}`));
+      feed();
     };
     signal.addEventListener("abort", () => settle("stopped"), { once: true });
-    for (let i = 0; i < Math.min(size, tasks.length) && !settled; i++) start();
+    for (let i = 0; i < Math.min(options.size, tasks.length) && !settled; i++) start();
   });
 }

@@ -171,4 +171,44 @@ describe("extract budgets", () => {
     expect(errors.rows[0][4]).toMatch(/budget/i);
     expect(readFeatureTable(join(dir, "run", "features.csv")).rows.map((r) => r[0])).toEqual(["small"]);
   });
+
+  it("a graph over the time limit is abandoned and recorded; the others finish", () => {
+    const dir = similarityDataset([{ id: "small", label: "a", directed: false, n: 6, seed: 1 }]);
+    // Every pair an edge on 48 nodes, simplices to dimension 8: C(48, 9) ≈ 1.7·10^9 of them, far beyond
+    // what counts in a second at ~10^8 per second.
+    const n = 48;
+    const full = Array.from({ length: n }, (_, i) =>
+      Array.from({ length: n }, (_, j) => (i === j ? null : 0.5)),
+    );
+    writeFileSync(join(dir, "dense.csv"), matrixCsv(full));
+    writeFileSync(
+      join(dir, "manifest.csv"),
+      "id,file,label\nsmall,small.csv,a\ndense,dense.csv,a\nlast,small.csv,a\n",
+    );
+    const run = runCli([
+      "extract",
+      join(dir, "manifest.csv"),
+      "--out",
+      join(dir, "run"),
+      "--top-dim",
+      "8",
+      "--families",
+      "simplexCounts",
+      "--threshold",
+      "0.5",
+      "--no-bundles",
+      "--time-limit",
+      "1",
+      "--workers",
+      "1",
+    ]);
+    expect(run.status).toBe(1);
+    const errors = readFeatureTable(join(dir, "run", "errors.csv"));
+    expect(errors.rows.map((r) => r[0])).toEqual(["dense"]);
+    expect(errors.rows[0][4]).toMatch(/longer than the time limit of 1 s/);
+    expect(readFeatureTable(join(dir, "run", "features.csv")).rows.map((r) => r[0])).toEqual([
+      "small",
+      "last",
+    ]);
+  });
 });

@@ -1,8 +1,9 @@
 import { availableParallelism } from "node:os";
 import { Command, Option } from "commander";
 import { exitCodeFor } from "../exit-codes.js";
+import { InterruptedError } from "../extract/interrupted-error.js";
 import { optionsToSpec } from "../extract/options-to-spec.js";
-import { InterruptedError, runExtract } from "../extract/run-extract.js";
+import { runExtract } from "../extract/run-extract.js";
 import { EDGE_TRANSFORMS } from "../extract/run-spec.js";
 import { finiteNumber, nonNegativeInteger, numberList, UsageError } from "../options/graph-options.js";
 

@@ -1,32 +1,20 @@
 import { existsSync, readFileSync } from "node:fs";
 import { dirname, relative, sep } from "node:path";
-import { checkFeatureAxis } from "@cliquescape/core";
-import {
-  type Dataset,
-  type DatasetEntry,
-  graphFeatureNames,
-  hashFile,
-  type OpenDatasetOptions,
-  openDataset,
-  writeFileAtomic,
-} from "@cliquescape/io";
+import { graphFeatureNames, type OpenDatasetOptions, openDataset, writeFileAtomic } from "@cliquescape/io";
 import { UsageError } from "../options/graph-options.js";
-import { VERSION } from "../version.js";
 import { assembleTables, type ErrorRow, labelCode, problemRow } from "./assemble-tables.js";
-import { featureConfigOf, type GraphOutcome } from "./graph-job.js";
-import { encodeRecord, type GraphRecord, readRecord } from "./graph-record.js";
+import { featureConfigOf } from "./graph-job.js";
+import { type GraphRecord, readRecord } from "./graph-record.js";
+import { hashInputs, hashOrNote } from "./input-hashes.js";
 import { validateSpec } from "./load-spec.js";
 import { startProgress } from "./progress.js";
-import { readOptionsFor } from "./read-prepared-graph.js";
-import { needsFirstPass, resolveGrid } from "./resolve-grid.js";
+import { resolveSpec } from "./resolve-spec.js";
 import { createRunFolder, graphPaths, type RunFolder, removeLeftoverTemps, runFolder } from "./run-folder.js";
-import type { ResolvedRunSpec, RunSpec } from "./run-spec.js";
 import { renderSummary } from "./run-summary.js";
+import { outputsExist, saveGraph } from "./save-graph.js";
 import { settingsFingerprint, specDifferences } from "./spec-differences.js";
+import { specDocument } from "./spec-document.js";
 import { runOnWorkers } from "./worker-pool.js";
-
-/** All edge values the first pass may hold at once, over the whole dataset (128 MiB of float64). */
-const FIRST_PASS_VALUES = 2 ** 24;
 
 export interface ExtractRequest {
   dataset: string;
@@ -64,10 +52,10 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
   const relativeFile = (file: string) => relative(base, file).split(sep).join("/");
   const folder = runFolder(request.out);
   const previous = existsSync(folder.spec) ? validateSpec(readJson(folder.spec), folder.spec) : null;
-  const hashes = dataset.entries.map((entry) => hashOrNote(entry.file));
+  const hashes = hashInputs(dataset.entries.map((entry) => entry.file));
 
   const problems: ErrorRow[] = dataset.problems.map((p) => problemRow(p, relativeFile(p.file)));
-  const spec = await fixSpec(requested, previous, dataset, request);
+  const spec = await resolveSpec(requested, previous, dataset, request);
   if (previous) {
     const differences = specDifferences(previous, spec);
     if (differences.length > 0) {
@@ -84,7 +72,15 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
   removeLeftoverTemps(folder);
   writeFileAtomic(
     folder.spec,
-    specDocument(spec, request.dataset, dataset, hashes, relativeFile, request.datasetOptions),
+    specDocument(
+      spec,
+      request.dataset,
+      dataset,
+      hashes,
+      dataset.kind === "manifest" ? hashOrNote(request.dataset) : "",
+      relativeFile,
+      request.datasetOptions,
+    ),
   );
 
   const fingerprint = settingsFingerprint(spec);
@@ -176,199 +172,6 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
 /** Raised when an output folder holds results made under different settings. */
 export class SpecMismatchError extends UsageError {}
 
-/**
- * Completes the spec: the tool version, the grid (reused from the spec or the run folder, or resolved now,
- * with a first pass over the dataset for quantiles) and the label codes.
- */
-async function fixSpec(
-  requested: RunSpec,
-  previous: RunSpec | null,
-  dataset: Dataset,
-  request: ExtractRequest,
-): Promise<ResolvedRunSpec> {
-  const spec: RunSpec = { ...requested, toolVersion: VERSION };
-  const sameRequest =
-    previous !== null &&
-    specDifferences(
-      { ...previous, resolvedGrid: undefined, labelNames: undefined, nodeLayout: undefined },
-      {
-        ...spec,
-        resolvedGrid: undefined,
-        labelNames: undefined,
-        nodeLayout: undefined,
-      },
-    ).length === 0;
-  // Re-running the same command on a run folder reuses its grid: the first pass is not redone.
-  let resolvedGrid = spec.resolvedGrid ?? (sameRequest ? previous?.resolvedGrid : undefined);
-  if (!resolvedGrid) {
-    const sample = needsFirstPass(spec.grid) ? await firstPass(spec, dataset, request) : undefined;
-    resolvedGrid = resolveGrid(spec.grid, spec.preparation.weights, sample);
-  }
-  try {
-    checkFeatureAxis(resolvedGrid, spec.preparation.weights);
-  } catch (error) {
-    throw new UsageError(`resolvedGrid: ${(error as Error).message}`);
-  }
-  const known = spec.labelNames ?? (sameRequest ? previous?.labelNames : undefined) ?? [];
-  const seen = [...new Set(dataset.entries.map((e) => e.label).filter((l): l is string => l !== null))];
-  const labelNames = [...known, ...seen.filter((label) => !known.includes(label)).sort()];
-  const anyDirected = dataset.entries.some((entry) => readOptionsFor(entry, spec.preparation).directed);
-  const nodeLayout =
-    spec.nodeLayout ??
-    (sameRequest ? previous?.nodeLayout : undefined) ??
-    (anyDirected ? "directed" : "undirected");
-  return { ...spec, resolvedGrid, labelNames, nodeLayout, toolVersion: VERSION };
-}
-
-/** Reads every graph once (on the workers) and returns a bounded sample of all their edge values. */
-async function firstPass(spec: RunSpec, dataset: Dataset, request: ExtractRequest): Promise<Float64Array> {
-  const entries = dataset.entries;
-  const limit = Math.max(1, Math.floor(FIRST_PASS_VALUES / Math.max(1, entries.length)));
-  const parts: Float64Array[] = [];
-  let failed = 0;
-  let done = 0;
-  const progress = startProgress("first pass (weight quantiles)", entries.length);
-  const ended = await runOnWorkers(
-    entries.map((entry, index) => ({ kind: "sample" as const, index, entry, limit })),
-    (reply) => {
-      if (reply.kind !== "sample") return;
-      done++;
-      if (reply.values) parts[reply.index] = reply.values;
-      else failed++;
-      progress.update(done, failed);
-    },
-    {
-      size: Math.max(1, Math.min(request.workers, entries.length)),
-      setup: { kind: "setup", preparation: spec.preparation, spec: null },
-      signal: request.signal,
-      timeLimitSeconds: spec.complex.timeLimitSeconds,
-      // A graph that cannot be read here fails again, with its reason, when it is computed.
-      failedReply: (task) => ({ kind: "sample", index: task.index, values: null, failure: null }),
-    },
-  );
-  progress.stop();
-  if (ended === "stopped")
-    throw new InterruptedError("interrupted during the first pass; nothing was computed");
-  // Dataset order, whatever order the workers answered in: the quantiles do not depend on scheduling.
-  const total = parts.reduce((sum, part) => sum + (part?.length ?? 0), 0);
-  const sample = new Float64Array(total);
-  let at = 0;
-  for (const part of parts) {
-    if (!part) continue;
-    sample.set(part, at);
-    at += part.length;
-  }
-  return sample;
-}
-
-/** Ctrl-C before any graph was computed. */
-export class InterruptedError extends Error {
-  override name = "InterruptedError";
-}
-
-/** Writes one graph's barcode and bundle, then its record (last: the record says the graph is complete). */
-function saveGraph(
-  folder: RunFolder,
-  entry: DatasetEntry,
-  outcome: GraphOutcome,
-  sha256: string,
-  settings: string,
-  relativeFile: (file: string) => string,
-): GraphRecord {
-  const paths = graphPaths(folder, entry.id);
-  const base = {
-    id: entry.id,
-    file: relativeFile(entry.file),
-    sha256,
-    settings,
-    label: entry.label,
-    split: entry.split,
-  };
-  if (!outcome.ok) {
-    const failure = { ...outcome.failure, file: relativeFile(outcome.failure.file) };
-    const record: GraphRecord = { ...base, ok: false, failure, warnings: outcome.warnings };
-    writeFileAtomic(paths.record, encodeRecord(record));
-    return record;
-  }
-  if (outcome.barcodeJson !== null) writeFileAtomic(paths.barcode, outcome.barcodeJson);
-  if (outcome.bundle !== null) writeFileAtomic(paths.bundle, outcome.bundle);
-  const record: GraphRecord = {
-    ...base,
-    ok: true,
-    values: Array.from(outcome.values, (v) => (Number.isNaN(v) ? null : v)),
-    thresholds: outcome.thresholds,
-    nodes: outcome.nodes,
-    edges: outcome.edges,
-    directed: outcome.directed,
-    truncated: outcome.truncated,
-    warnings: outcome.warnings,
-  };
-  writeFileAtomic(paths.record, encodeRecord(record));
-  return record;
-}
-
-function outputsExist(folder: RunFolder, id: string, spec: ResolvedRunSpec): boolean {
-  const paths = graphPaths(folder, id);
-  return (
-    (!spec.outputs.bundles || existsSync(paths.bundle)) &&
-    (!spec.outputs.barcodes || existsSync(paths.barcode))
-  );
-}
-
-/** spec.json: keys in a fixed order, the dataset's files with their hashes, no dates (reruns match byte for byte). */
-function specDocument(
-  spec: ResolvedRunSpec,
-  datasetArgument: string,
-  dataset: Dataset,
-  hashes: string[],
-  relativeFile: (file: string) => string,
-  datasetOptions: OpenDatasetOptions | undefined,
-): string {
-  const document = {
-    format: spec.format,
-    toolVersion: spec.toolVersion,
-    preparation: spec.preparation,
-    complex: spec.complex,
-    grid: spec.grid,
-    resolvedGrid: spec.resolvedGrid,
-    nodeFeatures: spec.nodeFeatures,
-    families: spec.families,
-    outputs: spec.outputs,
-    labelNames: spec.labelNames,
-    nodeLayout: spec.nodeLayout,
-    dataset: datasetArgument,
-    ...(datasetOptions && Object.values(datasetOptions).some((v) => v !== undefined)
-      ? { datasetOptions }
-      : {}),
-    inputs: [
-      ...(dataset.kind === "manifest"
-        ? [
-            {
-              id: "(manifest)",
-              file: relativeFile(datasetArgument),
-              sha256: hashOrNote(datasetArgument),
-            },
-          ]
-        : []),
-      ...dataset.entries.map((entry, i) => ({
-        id: entry.id,
-        file: relativeFile(entry.file),
-        sha256: hashes[i],
-      })),
-    ],
-  };
-  return `${JSON.stringify(document, null, 2)}\n`;
-}
-
 function readJson(path: string): Record<string, unknown> {
   return JSON.parse(readFileSync(path, "utf8")) as Record<string, unknown>;
-}
-
-/** The file's SHA-256, or "unreadable" (its reader will then say why, as the graph's error). */
-function hashOrNote(path: string): string {
-  try {
-    return hashFile(path);
-  } catch {
-    return "unreadable";
-  }
 }

@@ -1,0 +1,58 @@
+import type { Dataset } from "@cliquescape/io";
+import { InterruptedError } from "./interrupted-error.js";
+import { startProgress } from "./progress.js";
+import type { RunSpec } from "./run-spec.js";
+import { runOnWorkers } from "./worker-pool.js";
+
+/** All edge values the first pass may hold at once, over the whole dataset (128 MiB of float64). */
+const FIRST_PASS_VALUES = 2 ** 24;
+
+export interface PassOptions {
+  workers: number;
+  signal: AbortSignal;
+}
+
+/** Reads every graph once (on the workers) and returns a bounded sample of all their edge values. */
+export async function firstPass(
+  spec: RunSpec,
+  dataset: Dataset,
+  request: PassOptions,
+): Promise<Float64Array> {
+  const entries = dataset.entries;
+  const limit = Math.max(1, Math.floor(FIRST_PASS_VALUES / Math.max(1, entries.length)));
+  const parts: Float64Array[] = [];
+  let failed = 0;
+  let done = 0;
+  const progress = startProgress("first pass (weight quantiles)", entries.length);
+  const ended = await runOnWorkers(
+    entries.map((entry, index) => ({ kind: "sample" as const, index, entry, limit })),
+    (reply) => {
+      if (reply.kind !== "sample") return;
+      done++;
+      if (reply.values) parts[reply.index] = reply.values;
+      else failed++;
+      progress.update(done, failed);
+    },
+    {
+      size: Math.max(1, Math.min(request.workers, entries.length)),
+      setup: { kind: "setup", preparation: spec.preparation, spec: null },
+      signal: request.signal,
+      timeLimitSeconds: spec.complex.timeLimitSeconds,
+      // A graph that cannot be read here fails again, with its reason, when it is computed.
+      failedReply: (task) => ({ kind: "sample", index: task.index, values: null, failure: null }),
+    },
+  );
+  progress.stop();
+  if (ended === "stopped")
+    throw new InterruptedError("interrupted during the first pass; nothing was computed");
+  // Dataset order, whatever order the workers answered in: the quantiles do not depend on scheduling.
+  const total = parts.reduce((sum, part) => sum + (part?.length ?? 0), 0);
+  const sample = new Float64Array(total);
+  let at = 0;
+  for (const part of parts) {
+    if (!part) continue;
+    sample.set(part, at);
+    at += part.length;
+  }
+  return sample;
+}

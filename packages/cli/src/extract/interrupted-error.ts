@@ -1,0 +1,4 @@
+/** Ctrl-C before any graph was computed. */
+export class InterruptedError extends Error {
+  override name = "InterruptedError";
+}

@@ -1,0 +1,53 @@
+import { checkFeatureAxis } from "@cliquescape/core";
+import type { Dataset } from "@cliquescape/io";
+import { UsageError } from "../options/graph-options.js";
+import { VERSION } from "../version.js";
+import { firstPass, type PassOptions } from "./first-pass.js";
+import { readOptionsFor } from "./read-prepared-graph.js";
+import { needsFirstPass, resolveGrid } from "./resolve-grid.js";
+import type { ResolvedRunSpec, RunSpec } from "./run-spec.js";
+import { specDifferences } from "./spec-differences.js";
+
+/**
+ * Completes the spec: the tool version, the grid (reused from the spec or the run folder, or resolved now,
+ * with a first pass over the dataset for quantiles), the label codes and the node-table layout.
+ */
+export async function resolveSpec(
+  requested: RunSpec,
+  previous: RunSpec | null,
+  dataset: Dataset,
+  request: PassOptions,
+): Promise<ResolvedRunSpec> {
+  const spec: RunSpec = { ...requested, toolVersion: VERSION };
+  const sameRequest =
+    previous !== null &&
+    specDifferences(
+      { ...previous, resolvedGrid: undefined, labelNames: undefined, nodeLayout: undefined },
+      {
+        ...spec,
+        resolvedGrid: undefined,
+        labelNames: undefined,
+        nodeLayout: undefined,
+      },
+    ).length === 0;
+  // Re-running the same command on a run folder reuses its grid: the first pass is not redone.
+  let resolvedGrid = spec.resolvedGrid ?? (sameRequest ? previous?.resolvedGrid : undefined);
+  if (!resolvedGrid) {
+    const sample = needsFirstPass(spec.grid) ? await firstPass(spec, dataset, request) : undefined;
+    resolvedGrid = resolveGrid(spec.grid, spec.preparation.weights, sample);
+  }
+  try {
+    checkFeatureAxis(resolvedGrid, spec.preparation.weights);
+  } catch (error) {
+    throw new UsageError(`resolvedGrid: ${(error as Error).message}`);
+  }
+  const known = spec.labelNames ?? (sameRequest ? previous?.labelNames : undefined) ?? [];
+  const seen = [...new Set(dataset.entries.map((e) => e.label).filter((l): l is string => l !== null))];
+  const labelNames = [...known, ...seen.filter((label) => !known.includes(label)).sort()];
+  const anyDirected = dataset.entries.some((entry) => readOptionsFor(entry, spec.preparation).directed);
+  const nodeLayout =
+    spec.nodeLayout ??
+    (sameRequest ? previous?.nodeLayout : undefined) ??
+    (anyDirected ? "directed" : "undirected");
+  return { ...spec, resolvedGrid, labelNames, nodeLayout, toolVersion: VERSION };
+}

@@ -85,6 +85,11 @@ const rate = (s, t) => {
   const r = s / t;
   return r >= 1e6 ? `${(r / 1e6).toFixed(1)} M/s` : `${(r / 1e3).toFixed(0)} k/s`;
 };
+// the yardstick's CPU time comes in 10 ms clock ticks: below 0.05 s a ratio would be noise
+const cpuRatio = (ours, y) =>
+  y && Number.isFinite(y.cpuSeconds) && y.cpuSeconds >= 0.05
+    ? `${fmt(ours)} / ${fmt(y.cpuSeconds)} = ${fmt(ours / y.cpuSeconds)}`
+    : "–";
 const lines = [];
 lines.push(
   `Machine: ${cpus()[0]?.model ?? "?"}, ${cpus().length} cores, ${(totalmem() / 2 ** 30).toFixed(0)} GiB; Node ${process.version}; ${new Date().toISOString().slice(0, 16).replace("T", " ")} UTC`,
@@ -101,7 +106,7 @@ for (const r of rows) {
   const y = r.yardstick;
   const same = y ? (JSON.stringify(y.counts) === JSON.stringify(r.counts) ? "yes" : "**NO**") : "–";
   lines.push(
-    `| ${r.name} | ${int(r.n)} | ${int(r.edges)} | ${r.counts.length - 1} | ${int(total)} | ${fmt(r.seconds)} s | ${rate(total, r.seconds)} | ${fmt(r.peakMiB, 0)} MiB | ${y ? `${fmt(y.seconds)} s` : "–"} | ${y ? fmt(r.seconds / y.seconds) : "–"} | ${y && Number.isFinite(y.cpuSeconds) ? `${fmt(r.cpuSeconds)} / ${fmt(y.cpuSeconds)} = ${fmt(r.cpuSeconds / y.cpuSeconds)}` : "–"} | ${same} |`,
+    `| ${r.name} | ${int(r.n)} | ${int(r.edges)} | ${r.counts.length - 1} | ${int(total)} | ${fmt(r.seconds)} s | ${rate(total, r.seconds)} | ${fmt(r.peakMiB, 0)} MiB | ${y ? `${fmt(y.seconds)} s` : "–"} | ${y ? fmt(r.seconds / y.seconds) : "–"} | ${cpuRatio(r.cpuSeconds, y)} | ${same} |`,
   );
 }
 if (withSweep) {

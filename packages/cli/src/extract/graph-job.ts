@@ -73,7 +73,7 @@ export function computeGraph(
     });
     const barcodeJson =
       spec.outputs.barcodes && features.barcode
-        ? barcodeDocument(entry.id, relativeFile, graph, features.barcode, spec)
+        ? barcodeDocument(entry.id, relativeFile, graph, features.barcode, features.grid.thresholds, spec)
         : null;
     const bundle = spec.outputs.bundles ? gnnBundle(graph, labelCode, spec, coordinates) : null;
     return {
@@ -93,14 +93,23 @@ export function computeGraph(
   }
 }
 
-/** The barcode in the same JSON layout as `cliquescape barcode --format json`, plus the graph's id. */
+/**
+ * The barcode in the same JSON layout as `cliquescape barcode --format json`, plus the graph's id. `end` is
+ * where the filtration stops: the grid's last threshold for barcodeRange "axis", the last edge for "full".
+ */
 function barcodeDocument(
   id: string,
   file: string,
   graph: WeightedGraph,
   barcode: Barcode,
+  thresholds: Float64Array,
   spec: ResolvedRunSpec,
 ): string {
+  const semantics = spec.preparation.weights;
+  const end =
+    spec.complex.barcodeRange === "axis"
+      ? thresholds[thresholds.length - 1]
+      : allEdgesGrid(graph, semantics).thresholds[0];
   const report: BarcodeReport & { id: string } = {
     id,
     file,
@@ -108,7 +117,7 @@ function barcodeDocument(
     weights: spec.preparation.weights,
     prime: barcode.prime,
     start: barcode.start,
-    end: allEdgesGrid(graph, spec.preparation.weights).thresholds[0],
+    end,
     bars: barcode.bars.map((bar) => ({ dim: bar.dim, birth: bar.birth, death: bar.death })),
   };
   return renderBarcode(report, "json");

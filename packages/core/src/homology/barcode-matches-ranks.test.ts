@@ -91,3 +91,29 @@ describe("barcode against direct ranks", () => {
     );
   });
 });
+
+describe("barcode against direct ranks on larger complete graphs", () => {
+  // Complete graphs of 18–24 vertices with random weights make long reductions: stored columns are
+  // rebuilt from their chains or read back, and the working column merges its pending additions.
+  for (const [n, seed, prime] of [
+    [18, 3, 2],
+    [20, 4, 2],
+    [22, 5, 3],
+    [24, 6, 2],
+  ]) {
+    it(`n=${n}, seed ${seed}, Z/${prime}`, () => {
+      const g = randomGraph(n, 1, 1000, seed, false);
+      const sorted = [...new Set(g.weights)].sort((a, b) => a - b);
+      const thresholds = sorted.filter((_, i) => i % Math.ceil(sorted.length / 12) === 0);
+      const dense = computeBarcode(g, { semantics: "distance", maxDim: 2, prime, cliqueLayout: "dense" });
+      const sparse = computeBarcode(g, { semantics: "distance", maxDim: 2, prime, cliqueLayout: "sparse" });
+      expect(sparse.bars).toEqual(dense.bars);
+      expect(dense.stats.columnAdditions[2]).toBeGreaterThan(0);
+      for (const threshold of thresholds) {
+        expect(bettiFromBarcode(dense, threshold)).toEqual(
+          bettiAt(g, { threshold, semantics: "distance", maxDim: 2, prime }),
+        );
+      }
+    });
+  }
+});

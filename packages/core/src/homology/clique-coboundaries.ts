@@ -102,6 +102,11 @@ export class CliqueCoboundaries implements CoboundaryModel {
     return out;
   }
 
+  cofaceEstimate(dim: number): number {
+    if (this.dense !== null) return Math.max(1, this.n - dim - 1);
+    return Math.max(1, this.targets.length / Math.max(1, this.n));
+  }
+
   releaseSimplices(dim: number): void {
     const list = this.lists[dim];
     if (list) list.release();

@@ -29,6 +29,8 @@ export interface CoboundaryModel {
   zeroCoface(dim: number, key: number, f: number): number;
   /** The latest facet of the simplex when it has the same value f, else -1. Sets `sign` likewise. */
   zeroFacet(dim: number, key: number, f: number): number;
+  /** Typical number of cofaces of a dim-simplex: weighs rebuilding a column from its chain against storing it. */
+  cofaceEstimate(dim: number): number;
   /** ±1: coefficient of the last zeroCoface / zeroFacet pair. */
   sign: number;
 }

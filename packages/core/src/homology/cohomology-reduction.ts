@@ -1,3 +1,4 @@
+import { ChainBuilder } from "./chain-builder.js";
 import type { CoboundaryModel } from "./coboundary-model.js";
 import { ColumnStore } from "./column-store.js";
 import type { ByteLedger } from "./homology-budget.js";
@@ -5,6 +6,9 @@ import { KeyMap } from "./key-map.js";
 import { modP, type PrimeField } from "./prime-field.js";
 import type { PairSink } from "./union-find-pairs.js";
 import { WorkingColumn } from "./working-column.js";
+
+/** Chains longer than this are not tracked: the column keeps its reduced entries instead. */
+const MAX_CHAIN = 1 << 14;
 
 /** Work counters of one dimension. */
 export interface ReductionCounters {
@@ -90,21 +94,27 @@ export function reduceDimension(
   const pivots = new KeyMap(ledger, `recording the pivots of dimension ${dim}`, Math.max(16, todoCount));
   const store = new ColumnStore(ledger);
   const work = new WorkingColumn(ledger);
+  const chain = new ChainBuilder(ledger);
+  const rebuildCost = model.cofaceEstimate(dim);
   let openColumn = -1;
   const keep = (entryF: number, entryKey: number, entryCoef: number) =>
-    store.append(openColumn, entryF, entryKey, entryCoef);
+    store.appendEntry(openColumn, entryF, entryKey, entryCoef);
 
   for (let c = 0; c < todoCount; c++) {
     const i = columns[c];
     const key = lk[i];
     const f = lf[i];
+    chain.clear();
+    chain.push(key, f, 1);
 
     // Emergent pair: the earliest coface enters with σ and nobody has claimed it.
     const first = model.zeroCoface(dim, key, f);
     if (first >= 0) {
       const firstCoef = modP(model.sign, p);
       if (pivots.get(first) < 0 && !claimedByApparentPair(model, dim, first, f, key)) {
-        pivots.set(first, store.addImplicit(key, f, firstCoef));
+        const id = store.open(firstCoef);
+        store.setChain(id, chain.key, chain.f, chain.coef, 1);
+        pivots.set(first, id);
         counters.emergent++;
         if (keepZeroLength) sink.pair(dim, key, f, first, f);
         continue;
@@ -114,6 +124,9 @@ export function reduceDimension(
     counters.reduced++;
     work.reset(p);
     model.pushCoboundary(dim, key, f, 1, p, work);
+    work.commit();
+    // Whether `chain` still lists the simplices whose coboundaries make up the column.
+    let chainKnown = true;
     for (;;) {
       if (!work.settle()) {
         sink.essential(dim, key, f);
@@ -124,13 +137,35 @@ export function reduceDimension(
       const pivotCoef = work.pivotCoef;
       const owner = pivots.get(pivotKey);
       if (owner >= 0) {
-        // Cancel the pivot with the column that owns it: add -(c / c_owner) times that column.
+        // Cancel the pivot with the column that owns it: add -(c / c_owner) times that column, rebuilt
+        // from its chain or read from its entries, whichever is cheaper.
         const factor = ((p - pivotCoef) * inverse[store.pivotCoef[owner]]) % p;
-        const from = store.start[owner];
-        if (from < 0) {
-          model.pushCoboundary(dim, store.simplexKey[owner], store.simplexF[owner], factor, p, work);
-          work.flushIfLarge();
-        } else work.addEntries(store.f, store.key, store.coef, from, from + store.length[owner], factor);
+        const chainFrom = store.chainStart[owner];
+        const chainTo = chainFrom + store.chainLength[owner];
+        const entryFrom = store.entryStart[owner];
+        if (
+          chainFrom >= 0 &&
+          (entryFrom < 0 || store.chainLength[owner] * rebuildCost < store.entryLength[owner])
+        ) {
+          for (let e = chainFrom; e < chainTo; e++) {
+            const g = (factor * store.chainCoef[e]) % p;
+            model.pushCoboundary(dim, store.chainKey[e], store.chainF[e], g, p, work);
+          }
+          work.commit();
+        } else {
+          work.addSorted(
+            store.entryF,
+            store.entryKey,
+            store.entryCoef,
+            entryFrom,
+            entryFrom + store.entryLength[owner],
+            factor,
+          );
+        }
+        if (chainKnown && chainFrom >= 0 && chain.size + store.chainLength[owner] <= MAX_CHAIN) {
+          for (let e = chainFrom; e < chainTo; e++)
+            chain.push(store.chainKey[e], store.chainF[e], (factor * store.chainCoef[e]) % p);
+        } else chainKnown = false;
         counters.additions++;
         continue;
       }
@@ -141,20 +176,30 @@ export function reduceDimension(
           // The pivot belongs to an apparent pair (facet, pivot) whose column is just δ(facet).
           const factor = ((p - pivotCoef) * inverse[modP(facetSign, p)]) % p;
           model.pushCoboundary(dim, facet, pivotF, factor, p, work);
-          work.flushIfLarge();
+          work.commit();
+          if (chainKnown && chain.size < MAX_CHAIN) chain.push(facet, pivotF, factor);
+          else chainKnown = false;
           counters.additions++;
           continue;
         }
       }
-      // A new pivot: keep the reduced column.
-      openColumn = store.openExplicit();
-      work.drain(keep);
-      pivots.set(pivotKey, openColumn);
+      // A new pivot: keep the chain when known, and the entries when rebuilding would cost more.
+      const id = store.open(pivotCoef);
+      if (chainKnown) {
+        chain.compact(p);
+        store.setChain(id, chain.key, chain.f, chain.coef, chain.size);
+      }
+      if (!chainKnown || chain.size * rebuildCost > work.sizeBound) {
+        openColumn = id;
+        work.drain(keep);
+      }
+      pivots.set(pivotKey, id);
       if (pivotF > f || keepZeroLength) sink.pair(dim, key, f, pivotKey, pivotF);
       break;
     }
   }
   work.dispose();
+  chain.dispose();
   store.dispose();
   ledger.release(list.count * 4);
   return { pivots, counters };

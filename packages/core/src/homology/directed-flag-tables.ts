@@ -52,6 +52,11 @@ export class DirectedFlagTables implements CoboundaryModel {
     return list;
   }
 
+  cofaceEstimate(dim: number): number {
+    const t = this.tables[dim];
+    return t.cofaces === null || t.count === 0 ? 1 : Math.max(1, t.cofaces.length / t.count);
+  }
+
   releaseSimplices(dim: number): void {
     this.lists[dim] = null;
   }

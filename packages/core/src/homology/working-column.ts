@@ -51,8 +51,18 @@ export class WorkingColumn implements CofaceSink {
     this.pending.push(f, key, coef);
   }
 
+  /** Closes a coboundary pushed entry by entry (merging the pending entries in when they grew large). */
+  commit(): void {
+    this.flushIfLarge();
+  }
+
+  /** Upper bound on the number of entries. */
+  get sizeBound(): number {
+    return this.end - this.head + this.pending.size + (this.hasPivot ? 1 : 0);
+  }
+
   /** this += factor · other[from .. to) (entries sorted or not). */
-  addEntries(
+  addSorted(
     f: Float64Array,
     key: Float64Array,
     coef: Int32Array,
@@ -65,8 +75,7 @@ export class WorkingColumn implements CofaceSink {
     this.flushIfLarge();
   }
 
-  /** Call after pushing a coboundary straight into the column. */
-  flushIfLarge(): void {
+  private flushIfLarge(): void {
     if (this.pending.size > 4096 && this.pending.size * 2 > this.end - this.head) this.flush();
   }
 

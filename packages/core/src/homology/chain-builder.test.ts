@@ -1,0 +1,23 @@
+import { describe, expect, it } from "vitest";
+import { ChainBuilder } from "./chain-builder.js";
+import { ByteLedger } from "./homology-budget.js";
+
+describe("ChainBuilder", () => {
+  it("sorts by key and sums coefficients mod p, like a Map tally (common practice)", () => {
+    const chain = new ChainBuilder(new ByteLedger(undefined), 4);
+    const tally = new Map<number, number>();
+    let x = 3;
+    for (let i = 0; i < 2000; i++) {
+      x = (x * 69069 + 1) % 4294967296;
+      const key = x % 97;
+      const coef = 1 + (x % 4);
+      chain.push(key, key / 10, coef);
+      tally.set(key, ((tally.get(key) ?? 0) + coef) % 5);
+    }
+    chain.compact(5);
+    const expected = [...tally].filter(([, c]) => c !== 0).sort((a, b) => a[0] - b[0]);
+    expect(Array.from(chain.key.subarray(0, chain.size))).toEqual(expected.map(([k]) => k));
+    expect(Array.from(chain.coef.subarray(0, chain.size))).toEqual(expected.map(([, c]) => c));
+    expect(Array.from(chain.f.subarray(0, chain.size))).toEqual(expected.map(([k]) => k / 10));
+  });
+});

@@ -1,0 +1,112 @@
+import type { ByteLedger } from "./homology-budget.js";
+
+/**
+ * A chain of simplices (key, f, coefficient) collected in any order, then sorted by key with equal keys
+ * summed mod p and zeros dropped. Holds the simplices whose coboundaries make up the column being reduced.
+ */
+export class ChainBuilder {
+  key: Float64Array;
+  f: Float64Array;
+  coef: Int32Array;
+  size = 0;
+  private readonly ledger: ByteLedger;
+
+  constructor(ledger: ByteLedger, capacity = 256) {
+    this.ledger = ledger;
+    ledger.reserve(capacity * 20, "tracking reduction chains");
+    this.key = new Float64Array(capacity);
+    this.f = new Float64Array(capacity);
+    this.coef = new Int32Array(capacity);
+  }
+
+  clear(): void {
+    this.size = 0;
+  }
+
+  push(key: number, f: number, coef: number): void {
+    if (this.size === this.key.length) this.grow();
+    this.key[this.size] = key;
+    this.f[this.size] = f;
+    this.coef[this.size] = coef;
+    this.size++;
+  }
+
+  /** Sorts by key, sums equal keys mod p, drops zeros. */
+  compact(p: number): void {
+    if (this.size < 2) return;
+    this.sortRange(0, this.size - 1);
+    let m = 0;
+    for (let i = 0; i < this.size; ) {
+      const k = this.key[i];
+      const f = this.f[i];
+      let sum = 0;
+      while (i < this.size && this.key[i] === k) sum += this.coef[i++];
+      sum %= p;
+      if (sum !== 0) {
+        this.key[m] = k;
+        this.f[m] = f;
+        this.coef[m] = sum;
+        m++;
+      }
+    }
+    this.size = m;
+  }
+
+  dispose(): void {
+    this.ledger.release(this.key.length * 20);
+  }
+
+  private sortRange(lo: number, hi: number): void {
+    const key = this.key;
+    while (hi - lo > 12) {
+      const pivot = key[(lo + hi) >>> 1];
+      let i = lo;
+      let j = hi;
+      while (i <= j) {
+        while (key[i] < pivot) i++;
+        while (key[j] > pivot) j--;
+        if (i <= j) {
+          this.swap(i, j);
+          i++;
+          j--;
+        }
+      }
+      if (j - lo < hi - i) {
+        this.sortRange(lo, j);
+        lo = i;
+      } else {
+        this.sortRange(i, hi);
+        hi = j;
+      }
+    }
+    for (let a = lo + 1; a <= hi; a++) {
+      for (let b = a; b > lo && key[b - 1] > key[b]; b--) this.swap(b - 1, b);
+    }
+  }
+
+  private swap(i: number, j: number): void {
+    const k = this.key[i];
+    this.key[i] = this.key[j];
+    this.key[j] = k;
+    const f = this.f[i];
+    this.f[i] = this.f[j];
+    this.f[j] = f;
+    const c = this.coef[i];
+    this.coef[i] = this.coef[j];
+    this.coef[j] = c;
+  }
+
+  private grow(): void {
+    const capacity = this.key.length * 2;
+    this.ledger.reserve(this.key.length * 20, "tracking reduction chains");
+    const key = new Float64Array(capacity);
+    key.set(this.key);
+    const f = new Float64Array(capacity);
+    f.set(this.f);
+    const coef = new Int32Array(capacity);
+    coef.set(this.coef);
+    this.key = key;
+    this.f = f;
+    this.coef = coef;
+  }
+}

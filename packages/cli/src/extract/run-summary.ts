@@ -78,6 +78,15 @@ export function renderSummary(input: SummaryInput): string {
     }
     if (errors.length > ERRORS_SHOWN) lines.push(`  … and ${errors.length - ERRORS_SHOWN} more`);
   }
+  // Reader notes (self-loops dropped, values rounded, …) are kept in each graph's record; name the graphs.
+  const noted = records.filter((r) => r.warnings.length > 0);
+  if (noted.length > 0) {
+    lines.push("");
+    lines.push(`reader notes for ${noted.length} graph(s) (all in ${at(folder.records)}/<id>.json):`);
+    for (const r of noted.slice(0, ERRORS_SHOWN))
+      lines.push(`  ${r.id}: ${r.file}: ${r.warnings.join("; ")}`);
+    if (noted.length > ERRORS_SHOWN) lines.push(`  … and ${noted.length - ERRORS_SHOWN} more`);
+  }
   if (input.interrupted) lines.push("\nrun the same command again to finish: finished graphs are kept");
   return `${lines.join("\n")}\n`;
 }

@@ -5,7 +5,7 @@
  * single-worker run of the same command.
  */
 import { spawn } from "node:child_process";
-import { cpSync, existsSync, readdirSync, readFileSync, rmSync } from "node:fs";
+import { cpSync, existsSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { beforeAll, describe, expect, it } from "vitest";
@@ -48,6 +48,19 @@ describe("extract run folders", () => {
     const again = runCli(["extract", join(dir, "manifest.csv"), "--out", out]);
     expect(again.status).toBe(0);
     expect(again.stdout).toContain(`(${SMALL_DATASET.length} already done before this run)`);
+    const after = folderContents(out);
+    for (const [name, bytes] of before) expect(after.get(name)!.equals(bytes), name).toBe(true);
+  });
+
+  it("a damaged bundle is noticed (its size disagrees with the record) and that graph redone", () => {
+    const out = join(dir, "damaged");
+    expect(runCli(["extract", join(dir, "manifest.csv"), "--out", out]).status).toBe(0);
+    const before = folderContents(out);
+    const bundle = join(out, "bundles", `${SMALL_DATASET[1].id}.npz`);
+    writeFileSync(bundle, readFileSync(bundle).subarray(0, 100));
+    const again = runCli(["extract", join(dir, "manifest.csv"), "--out", out]);
+    expect(again.status).toBe(0);
+    expect(again.stdout).toContain(`(${SMALL_DATASET.length - 1} already done before this run)`);
     const after = folderContents(out);
     for (const [name, bytes] of before) expect(after.get(name)!.equals(bytes), name).toBe(true);
   });

@@ -22,6 +22,8 @@ export interface GraphRecord {
   edges?: number;
   directed?: boolean;
   truncated?: boolean | null;
+  /** Sizes of the barcode and bundle files written with this record. */
+  bytes?: { barcode?: number; bundle?: number };
   failure?: GraphFailure;
   warnings: string[];
 }

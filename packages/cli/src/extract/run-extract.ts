@@ -11,7 +11,7 @@ import { startProgress } from "./progress.js";
 import { resolveSpec } from "./resolve-spec.js";
 import { createRunFolder, graphPaths, type RunFolder, removeLeftoverTemps, runFolder } from "./run-folder.js";
 import { renderSummary } from "./run-summary.js";
-import { outputsExist, saveGraph } from "./save-graph.js";
+import { outputsIntact, saveGraph } from "./save-graph.js";
 import { settingsFingerprint, specDifferences } from "./spec-differences.js";
 import { specDocument } from "./spec-document.js";
 import { runOnWorkers } from "./worker-pool.js";
@@ -92,7 +92,7 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
       record?.ok &&
       record.sha256 === hashes[i] &&
       record.settings === fingerprint &&
-      outputsExist(folder, entry.id, spec)
+      outputsIntact(folder, record, spec)
     )
       records.set(entry.id, record);
     else todo.push(i);

@@ -69,8 +69,8 @@ export function fileStem(id: string): string {
     .slice(0, 100)}~${hash}`;
 }
 
-/** The temporary files of io's writeFileAtomic: `.<name>.<pid>.<n>.tmp`. */
-export const TEMPORARY_FILE = /^\..+\.\d+\.\d+\.tmp$/;
+/** Temporary files of io's writeFileAtomic (`.<name>.<pid>.<n>.tmp`) and of saveGraph (`…x<n>.tmp`). */
+export const TEMPORARY_FILE = /^\..+\.\d+\.x?\d+\.tmp$/;
 
 /** Removes temporary files a killed process may have left (they are never a finished output). */
 export function removeLeftoverTemps(folder: RunFolder): void {

@@ -29,7 +29,7 @@ export function resolveGrid(
   }
   if (!sample || sample.length === 0) {
     throw new UsageError(
-      "no graph of the dataset has an edge: a quantile grid cannot be chosen; give weights",
+      "no graph of the dataset gave an edge (all unreadable or without edges): a quantile grid cannot be chosen; give --threshold or --density",
     );
   }
   const sorted = Float64Array.from(sample).sort();

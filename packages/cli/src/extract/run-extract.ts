@@ -55,6 +55,12 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
   const hashes = hashInputs(dataset.entries.map((entry) => entry.file));
 
   const problems: ErrorRow[] = dataset.problems.map((p) => problemRow(p, relativeFile(p.file)));
+  if (dataset.entries.length === 0) {
+    const listed = problems.map((p) => `  ${p.file}${p.line === null ? "" : `:${p.line}`}: ${p.reason}`);
+    throw new UsageError(
+      `${request.dataset} names no usable graph${listed.length > 0 ? `:\n${listed.join("\n")}` : ""}`,
+    );
+  }
   const spec = await resolveSpec(requested, previous, dataset, request);
   if (previous) {
     const differences = specDifferences(previous, spec);

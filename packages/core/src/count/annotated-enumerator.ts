@@ -1,5 +1,6 @@
 import { checkLocalSize } from "./bitset-counter.js";
 import type { EnumerationGraph } from "./enumeration-graph.js";
+import { popcount32 } from "./popcount.js";
 import { SimplexBudgetError } from "./simplex-budget-error.js";
 
 /**
@@ -46,6 +47,12 @@ let rootBin = new Int32Array(0);
 let rootSlot = new Int32Array(0);
 let carried = new Int32Array(0); // carried[level*D + c]
 let path = new Int32Array(0);
+// one packed universe of ≤ 32 candidates at a time (see packAnnotated)
+const packedRows = new Int32Array(32);
+const packedBin = new Int32Array(32 * 32);
+const packedLocal = new Int32Array(32);
+let packedIndex = new Int32Array(0);
+let packedCarried = new Int32Array(0); // [level * 32 + packed index]
 let run = new Float64Array(0); // simplices counted per dimension
 let hist = new Float64Array(0); // flat [dim*G + bin]
 let snaps = new Float64Array(0);
@@ -98,6 +105,8 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
   rootSlot = new Int32Array(dmax);
   carried = withBins ? new Int32Array(levels * dmax) : new Int32Array(0);
   path = new Int32Array(levels + 1);
+  packedIndex = new Int32Array(dmax);
+  packedCarried = withBins ? new Int32Array((levels + 1) * 32) : new Int32Array(0);
   G = withBins ? o.binCount : 1;
   run = new Float64Array(capDim + 2);
   hist = new Float64Array((capDim + 2) * G);
@@ -216,6 +225,7 @@ function grow(level: number, at: number, simplexBin: number): void {
       let c = 0;
       let words = 0;
       let only = 0;
+      let members = 0;
       const k0 = undirected ? w : 0;
       for (let k = 0; k < k0; k++) stack[next + k] = 0;
       for (let k = k0; k < W; k++) {
@@ -225,6 +235,7 @@ function grow(level: number, at: number, simplexBin: number): void {
         if (x !== 0) {
           words++;
           only = k;
+          members += popcount32(x);
         }
       }
       if (c !== 0 && !deeper) {
@@ -249,6 +260,11 @@ function grow(level: number, at: number, simplexBin: number): void {
           }
         }
         grow1(level + 1, stack[next + only], b, only);
+        continue;
+      }
+      if (members >= 3 && members <= 32 && !credit) {
+        packAnnotated(i, next, cRow, level + 1, members);
+        growPacked(level + 1, members === 32 ? -1 : (1 << members) - 1, b);
         continue;
       }
       let size = 0;
@@ -393,6 +409,113 @@ function grow1(level: number, cand: number, simplexBin: number, word: number): v
     }
     path[dim] = i;
     grow1(level + 1, x, b, word);
+  }
+  run[dim] += made;
+  if (above !== 0) run[dim + 1] += above;
+  if (aboveTwo !== 0) run[dim + 2] += aboveTwo;
+  produced[0] += made + above + aboveTwo;
+  if (produced[0] > budget) fail();
+}
+
+/**
+ * Renumbers the candidate set in stack[at..) (≤ 32 members, children of local vertex i) into one word:
+ * packed rows, the bins of the edges among the members, and each member's carried bin at `level`.
+ */
+function packAnnotated(i: number, at: number, cRow: number, level: number, members: number): void {
+  let q = 0;
+  for (let k = 0; k < W; k++) {
+    let y = stack[at + k];
+    while (y !== 0) {
+      const yb = 31 - Math.clz32(y);
+      y ^= 1 << yb;
+      const j = (k << 5) + yb;
+      packedIndex[j] = q;
+      packedLocal[q] = j;
+      if (withBins) packedCarried[level * 32 + q] = Math.max(lbin[i * D + j], carried[cRow + j]);
+      q++;
+    }
+  }
+  for (let p = 0; p < members; p++) {
+    const lp = packedLocal[p];
+    let row = 0;
+    for (let m = undirected ? lp >>> 5 : 0; m < W; m++) {
+      let z = stack[at + m] & loc[lp * W + m];
+      while (z !== 0) {
+        const zb = 31 - Math.clz32(z);
+        z ^= 1 << zb;
+        const lj = (m << 5) + zb;
+        const pj = packedIndex[lj];
+        row |= 1 << pj;
+        if (withBins) packedBin[(p << 5) + pj] = lbin[lp * D + lj];
+      }
+    }
+    packedRows[p] = row;
+  }
+}
+
+/** grow1() on the packed universe (no participation): rows, edge bins and carried bins of ≤ 32 members. */
+function growPacked(level: number, cand: number, simplexBin: number): void {
+  const dim = level + 1;
+  const deeper = dim + 1 <= capDim;
+  const cRow = level * 32;
+  const nRow = cRow + 32;
+  const histRow = dim * G;
+  let made = 0;
+  let above = 0;
+  let aboveTwo = 0;
+  let bits = cand;
+  while (bits !== 0) {
+    const i = 31 - Math.clz32(bits);
+    bits ^= 1 << i;
+    let b = simplexBin;
+    if (withBins) {
+      const ci = packedCarried[cRow + i];
+      if (ci > b) b = ci;
+    }
+    hist[histRow + b]++;
+    made++;
+    const x = cand & packedRows[i];
+    if (x === 0) continue;
+    if (!deeper) {
+      truncated = true;
+      continue;
+    }
+    const j = 31 - Math.clz32(x);
+    const rest = x ^ (1 << j);
+    if (rest === 0 || (rest & (rest - 1)) === 0) {
+      const up = histRow + G;
+      const bj = withBins ? Math.max(b, packedBin[(i << 5) + j], packedCarried[cRow + j]) : 0;
+      hist[up + bj]++;
+      if (rest === 0) {
+        above++;
+        continue;
+      }
+      const k = 31 - Math.clz32(rest);
+      const bk = withBins ? Math.max(b, packedBin[(i << 5) + k], packedCarried[cRow + k]) : 0;
+      hist[up + bk]++;
+      above += 2;
+      const jk = (packedRows[j] >>> k) & 1;
+      const kj = (packedRows[k] >>> j) & 1;
+      if (jk + kj === 0) continue;
+      if (dim + 2 > capDim) {
+        truncated = true;
+        continue;
+      }
+      const both = Math.max(bj, bk);
+      if (jk !== 0) hist[up + G + (withBins ? Math.max(both, packedBin[(j << 5) + k]) : 0)]++;
+      if (kj !== 0) hist[up + G + (withBins ? Math.max(both, packedBin[(k << 5) + j]) : 0)]++;
+      aboveTwo += jk + kj;
+      continue;
+    }
+    if (withBins) {
+      let y = x;
+      while (y !== 0) {
+        const m = 31 - Math.clz32(y);
+        y ^= 1 << m;
+        packedCarried[nRow + m] = Math.max(packedBin[(i << 5) + m], packedCarried[cRow + m]);
+      }
+    }
+    growPacked(level + 1, x, b);
   }
   run[dim] += made;
   if (above !== 0) run[dim + 1] += above;

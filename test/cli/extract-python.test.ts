@@ -11,6 +11,7 @@
  *   formula evaluated in numpy on the matrix read from the CSV.
  */
 import { spawnSync } from "node:child_process";
+import { writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { readFeatureTable, SMALL_DATASET, similarityDataset } from "./extract-fixtures.js";
@@ -189,4 +190,40 @@ print(json.dumps({"shape": list(out.shape), "finite": bool(torch.isfinite(out).a
       expect(result.max_diff).toBeLessThan(1e-4 * Math.max(1, result.scale));
     },
   );
+});
+
+describe.skipIf(numpyMissing !== null)(`node coordinates in bundles ${numpyMissing ?? ""}`, () => {
+  it("a manifest's coords file becomes pos (float32, n × 2), row v = node v", () => {
+    const dir = similarityDataset([{ id: "p1", label: "a", directed: false, n: 5, seed: 3 }]);
+    const coords = [
+      [0.5, -1],
+      [1.25, 2],
+      [3, 0.125],
+      [-4, 5.5],
+      [6, 7],
+    ];
+    writeFileSync(
+      join(dir, "p1-coords.csv"),
+      `node,x,y\n${coords.map((c, v) => `${v},${c[0]},${c[1]}`).join("\n")}\n`,
+    );
+    writeFileSync(join(dir, "manifest.csv"), "id,file,label,coords\np1,p1.csv,a,p1-coords.csv\n");
+    const run = runCli([
+      "extract",
+      join(dir, "manifest.csv"),
+      "--out",
+      join(dir, "run"),
+      "--threshold",
+      "0.5",
+    ]);
+    expect(run.status).toBe(0);
+    const pos = python(
+      `
+import json, sys, numpy as np
+b = np.load(sys.argv[1])
+print(json.dumps({"dtype": str(b["pos"].dtype), "pos": b["pos"].tolist()}))`,
+      [join(dir, "run", "bundles", "p1.npz")],
+    ) as { dtype: string; pos: number[][] };
+    expect(pos.dtype).toBe("float32");
+    expect(pos.pos).toEqual(coords); // these values are exact in float32
+  });
 });

@@ -112,7 +112,7 @@ for (const r of rows) {
 if (withSweep) {
   lines.push(
     "",
-    `One-pass sweep over ${thresholds} evenly spaced thresholds vs one plain count (same process):`,
+    `One-pass sweep over ${thresholds} evenly spaced thresholds vs one plain count (same process, CPU seconds):`,
     "",
     "| graph | plain count | sweep, 1 threshold | sweep, " +
       thresholds +

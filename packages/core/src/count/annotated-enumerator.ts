@@ -7,7 +7,9 @@ import { SimplexBudgetError } from "./simplex-budget-error.js";
  * Simplex enumeration that also records, per simplex, its threshold bin and (optionally) which nodes and
  * edges it contains. Same local universes and bit rows as the plain counter; in addition every candidate
  * carries the largest bin of its edges to the current simplex (`carried`), updated for the members of
- * each new candidate set, so a simplex's bin costs O(1).
+ * each new candidate set, so a simplex's bin costs O(1). Without participation, candidate sets in one word
+ * run in a single-word routine (grow1), sets of ≤ 32 members spread over words are packed into one word
+ * with their edge bins (growPacked), and levels with one or two candidates are settled inline.
  *
  * Participation uses subtrees: a simplex's vertices are the vertices added along its path from the root,
  * so the vertex added at node t lies in exactly the simplices of t's subtree, and so does each edge from

@@ -4,17 +4,21 @@ import { SimplexBudgetError } from "./simplex-budget-error.js";
 
 /**
  * Plain simplex counting, nothing stored: for every root, its list becomes a local universe of d vertices
- * with a d×d bit adjacency (Uint32 words); simplices grow by `candidates &= row[i]` and each level is
- * counted with a popcount. A multi-word candidate set with ≤ 32 members is renumbered into one word for
- * its whole subtree, and a level with exactly two candidates is settled inline. Undirected rows only hold
- * later vertices, so words before the current one are skipped.
+ * with a d×d bit adjacency (32-bit words); simplices grow by `candidates &= row[i]` and each level is
+ * counted with a popcount. Ways to do less per simplex:
+ * - a candidate set of ≤ 64 members spread over several words is renumbered once into a one- or two-word
+ *   universe for its whole subtree; a larger one of the root universe gets a narrower universe of its own;
+ *   a set lying in a single word runs there in place (row stride);
+ * - levels with two or three candidates are settled inline;
+ * - undirected: a candidate set that is itself a clique adds C(c, t) per dimension without enumeration;
+ *   rows only hold later vertices, so words before the current one are skipped.
  *
  * State lives in module variables so the recursive hot functions take only numbers.
  */
 
 let loc = new Int32Array(0); // local adjacency, d rows of W words
-let stack = new Int32Array(0);
-let repacked = new Int32Array(0); // universe of one large candidate set, rows of ceil(c/32) words // candidate sets, one block of W words per depth
+let stack = new Int32Array(0); // candidate sets, one block of W words per depth
+let repacked = new Int32Array(0); // universe of one large candidate set, rows of ceil(c/32) words
 const packed = new Int32Array(128); // rows (word pairs) of a compacted candidate set of ≤ 64 members
 let packedIndex = new Int32Array(0); // local index → position in the compacted set
 let cnt = new Float64Array(0);

@@ -189,7 +189,10 @@ export function reduceDimension(
         chain.compact(p);
         store.setChain(id, chain.key, chain.f, chain.coef, chain.size);
       }
-      if (!chainKnown || chain.size * rebuildCost > work.sizeBound) {
+      // Entries cost 20 bytes each; past half the budget, columns with a chain keep only the chain (slower
+      // to add, but the computation fits).
+      const entriesFit = ledger.held + work.sizeBound * 20 < ledger.maxBytes / 2;
+      if (!chainKnown || (chain.size * rebuildCost > work.sizeBound && entriesFit)) {
         openColumn = id;
         work.drain(keep);
       }

@@ -93,3 +93,26 @@ describe("computeBarcode", () => {
     ).toThrow(HomologyBudgetError);
   });
 });
+
+describe("computeBarcode under a tight budget", () => {
+  it("keeps only chains when entries would take half the budget, with the same bars", () => {
+    const edges: [number, number, number][] = [];
+    let x = 17;
+    for (let u = 0; u < 26; u++) {
+      for (let v = u + 1; v < 26; v++) {
+        x = (x * 48271) % 2147483647;
+        edges.push([u, v, x / 2147483647]);
+      }
+    }
+    const g = graph(26, edges);
+    const roomy = computeBarcode(g, { semantics: "similarity", maxDim: 2 });
+    const tight = computeBarcode(g, {
+      semantics: "similarity",
+      maxDim: 2,
+      budget: { maxBytes: Math.ceil(roomy.stats.peakBytes * 1.1) },
+    });
+    expect(tight.bars).toEqual(roomy.bars);
+    // Strictly less: the chain-only path was taken.
+    expect(tight.stats.peakBytes).toBeLessThan(roomy.stats.peakBytes);
+  });
+});

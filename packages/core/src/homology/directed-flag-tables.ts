@@ -3,6 +3,7 @@ import type { CoboundaryModel, SimplexList } from "./coboundary-model.js";
 import type { CofaceSink } from "./coface-sink.js";
 import type { ByteLedger } from "./homology-budget.js";
 import { TupleIndex } from "./tuple-index.js";
+import { TupleTableBuilder } from "./tuple-table-builder.js";
 
 /** One dimension of the directed flag complex, sorted in filtration order: (f, then tuple lexicographically). */
 interface DimensionTable {
@@ -118,13 +119,9 @@ function enumerateDirectedSimplices(
 ): DimensionTable[] {
   const n = graph.n;
   const { offsets, targets } = graph;
-  const f: number[][] = [];
-  const tuples: number[][] = [];
-  // Plain arrays while enumerating (sizes unknown); the budget is charged per simplex stored.
-  for (let d = 0; d <= topDim; d++) {
-    f.push([]);
-    tuples.push([]);
-  }
+  const built: TupleTableBuilder[] = [];
+  for (let d = 0; d <= topDim; d++)
+    built.push(new TupleTableBuilder(d + 1, ledger, `listing directed ${d}-simplices`));
   let maxOut = 0;
   for (let u = 0; u < n; u++) maxOut = Math.max(maxOut, offsets[u + 1] - offsets[u]);
   // Candidate extensions per depth: vertex and running value of the simplex extended by it.
@@ -136,15 +133,6 @@ function enumerateDirectedSimplices(
     candF.push(new Float64Array(maxOut));
   }
   const tuple = new Int32Array(topDim + 1);
-  const bytesPerSimplex = (d: number) => 8 + 4 * (d + 1) + 8 * (d + 1) + 16;
-  let stored = 0;
-
-  const record = (d: number, value: number) => {
-    stored += bytesPerSimplex(d);
-    if (stored + ledger.held > ledger.maxBytes) ledger.reserve(stored, "listing directed simplices");
-    f[d].push(value);
-    for (let i = 0; i <= d; i++) tuples[d].push(tuple[i]);
-  };
 
   const extend = (depth: number) => {
     // tuple[0 .. depth] is a simplex; its extensions are candV[depth][0 .. candCount[depth]).
@@ -155,7 +143,7 @@ function enumerateDirectedSimplices(
     for (let c = 0; c < m; c++) {
       const v = cv[c];
       tuple[depth + 1] = v;
-      record(depth + 1, cf[c]);
+      built[depth + 1].push(cf[c], tuple);
       if (depth + 1 === topDim) continue;
       // Next candidates: current candidates w that v also reaches (v → w). The value of tuple + v + w is
       // the largest of: tuple + v (cf[c]), the arcs from the tuple to w (cf[c2]) and v → w.
@@ -182,8 +170,7 @@ function enumerateDirectedSimplices(
 
   for (let u = 0; u < n; u++) {
     tuple[0] = u;
-    f[0].push(Number.NEGATIVE_INFINITY);
-    tuples[0].push(u);
+    built[0].push(Number.NEGATIVE_INFINITY, tuple);
     let k = 0;
     for (let q = offsets[u]; q < offsets[u + 1]; q++) {
       candV[0][k] = targets[q];
@@ -193,15 +180,14 @@ function enumerateDirectedSimplices(
     candCount[0] = k;
     extend(0);
   }
-  ledger.reserve(stored, "storing directed simplex tables");
 
   const out: DimensionTable[] = [];
   for (let d = 0; d <= topDim; d++) {
-    const count = f[d].length;
+    const count = built[d].count;
     const order = new Int32Array(count);
     for (let i = 0; i < count; i++) order[i] = i;
-    const fd = f[d];
-    const td = tuples[d];
+    const fd = built[d].f;
+    const td = built[d].tuples;
     const w = d + 1;
     order.sort((a, b) => {
       if (fd[a] !== fd[b]) return fd[a] < fd[b] ? -1 : 1;

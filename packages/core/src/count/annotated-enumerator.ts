@@ -1,7 +1,7 @@
 import { checkLocalSize } from "./bitset-counter.js";
 import type { EnumerationGraph } from "./enumeration-graph.js";
 import { popcount32 } from "./popcount.js";
-import { SimplexBudgetError } from "./simplex-budget-error.js";
+import { rootProgress, SimplexBudgetError } from "./simplex-budget-error.js";
 
 /**
  * Simplex enumeration that also records, per simplex, its threshold bin and (optionally) which nodes and
@@ -67,7 +67,8 @@ let capDim = 0;
 let truncated = false;
 const produced = new Float64Array(1); // a typed cell: no boxing in the hot loop
 let budget = 0;
-let progress = 0;
+let rootIndex = -1; // root being enumerated (-1: before the first)
+let rootOffsets: Int32Array = new Int32Array(1);
 let withBins = false;
 let credit = false; // any participation
 let creditNodes = false;
@@ -118,7 +119,8 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
   truncated = false;
   budget = o.budget;
   produced[0] = n;
-  progress = 0;
+  rootIndex = -1;
+  rootOffsets = offsets;
   gTargets = targets;
   vertexOf = g.vertexOf;
   reverse = o.reverse;
@@ -138,7 +140,7 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
   }
   hist[0] = n;
   run[0] = n;
-  if (produced[0] > budget) fail();
+  if (produced[0] > budget) fail(false);
   if (capDim < 1) {
     truncated = offsets[n] > 0;
     return finish();
@@ -171,7 +173,7 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
       }
     }
     for (let i = 0; i < d; i++) mark[targets[a + i]] = -1;
-    progress = v / n;
+    rootIndex = v;
     for (let k = 0; k < W; k++) stack[k] = 0;
     for (let i = 0; i < d; i++) {
       stack[i >>> 5] |= 1 << (i & 31);
@@ -335,7 +337,7 @@ function grow(level: number, at: number, simplexBin: number): void {
   }
   run[dim] += made;
   produced[0] += made;
-  if (produced[0] > budget) fail();
+  if (produced[0] > budget) fail(level === 0);
 }
 
 /**
@@ -416,7 +418,7 @@ function grow1(level: number, cand: number, simplexBin: number, word: number): v
   if (above !== 0) run[dim + 1] += above;
   if (aboveTwo !== 0) run[dim + 2] += aboveTwo;
   produced[0] += made + above + aboveTwo;
-  if (produced[0] > budget) fail();
+  if (produced[0] > budget) fail(level === 0);
 }
 
 /**
@@ -523,7 +525,7 @@ function growPacked(level: number, cand: number, simplexBin: number): void {
   if (above !== 0) run[dim + 1] += above;
   if (aboveTwo !== 0) run[dim + 2] += aboveTwo;
   produced[0] += made + above + aboveTwo;
-  if (produced[0] > budget) fail();
+  if (produced[0] > budget) fail(false);
 }
 
 /** Saves run[lo..hi] on the snapshot stack; returns where it starts. */
@@ -613,7 +615,14 @@ function finish(): AnnotatedResult {
   return result;
 }
 
-function fail(): never {
+/** `rootDone`: the check after a root's top-level expansion, so that root is finished. */
+function fail(rootDone: boolean): never {
   const top = Math.max(topDim(), 0);
-  throw new SimplexBudgetError(budget, run.slice(0, top + 1), progress);
+  // vertices were counted up front; every root with a neighbour adds its edges and more
+  throw new SimplexBudgetError(
+    budget,
+    run.slice(0, top + 1),
+    rootProgress(rootOffsets, nVertices, rootIndex, rootDone, 1),
+    run[0],
+  );
 }

@@ -1,6 +1,6 @@
 import type { EnumerationGraph } from "./enumeration-graph.js";
 import { popcount32 } from "./popcount.js";
-import { SimplexBudgetError } from "./simplex-budget-error.js";
+import { rootProgress, SimplexBudgetError } from "./simplex-budget-error.js";
 
 /**
  * Plain simplex counting, nothing stored: for every root, its list becomes a local universe of d vertices
@@ -35,7 +35,9 @@ let capDim = 0; // highest dimension counted
 let truncated = false;
 const produced = new Float64Array(1); // simplices counted so far, for the budget (a typed cell: no boxing)
 let budget = 0;
-let progress = 0;
+let rootIndex = -1; // root being enumerated (-1: before the first)
+let rootOffsets: Int32Array = new Int32Array(1);
+let nRoots = 0;
 
 export interface PlainCounts {
   counts: Float64Array;
@@ -58,11 +60,13 @@ export function countWithBitsets(g: EnumerationGraph, maxDim: number, simplexBud
   budget = simplexBudget;
   produced[0] = n;
   cnt[0] = n;
-  progress = 0;
+  rootIndex = -1;
+  rootOffsets = offsets;
+  nRoots = n;
   if (capDim >= 1) cnt[1] = offsets[n];
   else truncated = offsets[n] > 0;
   produced[0] += capDim >= 1 ? offsets[n] : 0;
-  if (produced[0] > budget) fail();
+  if (produced[0] > budget) fail(0);
 
   const mark = new Int32Array(n).fill(-1);
   for (let v = 0; v < n; v++) {
@@ -96,7 +100,7 @@ export function countWithBitsets(g: EnumerationGraph, maxDim: number, simplexBud
       }
     }
     for (let i = 0; i < d; i++) mark[targets[a + i]] = -1;
-    progress = v / n;
+    rootIndex = v;
     runLocal(d);
   }
   let top = cnt.length - 1;
@@ -173,7 +177,7 @@ function expand1(rows: Int32Array, base: number, stride: number, cand: number, d
   }
   cnt[depth + 1] += total;
   produced[0] += total;
-  if (produced[0] > budget) fail();
+  if (produced[0] > budget) fail(depth);
 }
 
 /**
@@ -278,7 +282,7 @@ function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void 
   produced[0] += total + pairs + triples;
   if (pairs !== 0) cnt[depth + 2] += pairs;
   if (triples !== 0) cnt[depth + 3] += triples;
-  if (produced[0] > budget) fail();
+  if (produced[0] > budget) fail(depth);
 }
 
 /** For a two-word set of exactly two members j, k: how many of the arcs j→k, k→j exist. */
@@ -347,7 +351,7 @@ function expandWide(rows: Int32Array, Wc: number, at: number, depth: number): vo
   }
   cnt[depth + 1] += total;
   produced[0] += total;
-  if (produced[0] > budget) fail();
+  if (produced[0] > budget) fail(depth);
 }
 
 /**
@@ -466,10 +470,14 @@ function anyEdgeInside(rows: Int32Array, Wc: number, at: number): boolean {
   return false;
 }
 
-function fail(): never {
+/** `depth` 1: the check after a root's top-level expansion, so that root is finished. */
+function fail(depth: number): never {
   let top = cnt.length - 1;
   while (top > 0 && cnt[top] === 0) top--;
-  throw new SimplexBudgetError(budget, cnt.slice(0, top + 1), progress);
+  // vertices and edges were all counted up front; only roots with ≥ 2 neighbours add more
+  const progress = rootProgress(rootOffsets, nRoots, rootIndex, depth === 1, 2);
+  const upFront = cnt[0] + (capDim >= 1 ? cnt[1] : 0);
+  throw new SimplexBudgetError(budget, cnt.slice(0, top + 1), progress, upFront);
 }
 
 /** Local bit matrices are d×d bits; refuse clearly rather than run out of memory on a huge hub. */

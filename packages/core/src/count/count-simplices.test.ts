@@ -255,6 +255,35 @@ describe("limits", () => {
     );
   });
 
+  it("a budget passed only once the count is complete says so, with no extrapolation", () => {
+    const k4 = multipartite(4, 1, "undirected"); // 4, 6, 4, 1: 15 simplices
+    for (const participation of [false, true]) {
+      let caught: unknown;
+      try {
+        countSimplices(k4, { budget: 14, participation });
+      } catch (e) {
+        caught = e;
+      }
+      expect(caught).toBeInstanceOf(SimplexBudgetError);
+      const err = caught as SimplexBudgetError;
+      expect(list(err.counted)).toEqual([4, 6, 4, 1]);
+      expect(err.progress).toBe(1);
+      expect(err.message).toMatch(/count is complete/);
+      expect(err.message).not.toMatch(/extrapolation/);
+    }
+    // stopped inside the work: the share done excludes unfinished roots and the estimate is finite
+    const k8 = multipartite(8, 1, "undirected");
+    let stopped: unknown;
+    try {
+      countSimplices(k8, { budget: 40 });
+    } catch (e) {
+      stopped = e;
+    }
+    expect(stopped).toBeInstanceOf(SimplexBudgetError);
+    expect((stopped as SimplexBudgetError).progress).toBeLessThan(1);
+    expect((stopped as SimplexBudgetError).message).not.toMatch(/count is complete/);
+  });
+
   it("rejects bad limits and a threshold without semantics", () => {
     expect(() => countSimplices(k6, { maxDim: -1 })).toThrow(RangeError);
     expect(() => countSimplices(k6, { maxDim: 1.5 })).toThrow(RangeError);

@@ -309,11 +309,12 @@ function anyEdgeIn2(rows: Int32Array, x0: number, x1: number): boolean {
 
 /** Multi-word version: candidate set in stack[at .. at+Wc) over a universe with rows of Wc words. */
 function expandWide(rows: Int32Array, Wc: number, at: number, depth: number): void {
+  const st = stack; // module array held in a local for the hot loops
   const next = at + Wc;
   const deeper = depth + 2 <= capDim;
   let total = 0;
   for (let w = 0; w < Wc; w++) {
-    let bits = stack[at + w];
+    let bits = st[at + w];
     while (bits !== 0) {
       const lowBit = 31 - Math.clz32(bits);
       bits ^= 1 << lowBit;
@@ -322,10 +323,10 @@ function expandWide(rows: Int32Array, Wc: number, at: number, depth: number): vo
       let words = 0;
       let only = 0;
       const k0 = undirected ? w : 0;
-      for (let k = 0; k < k0; k++) stack[next + k] = 0;
+      for (let k = 0; k < k0; k++) st[next + k] = 0;
       for (let k = k0; k < Wc; k++) {
-        const x = stack[at + k] & rows[row + k];
-        stack[next + k] = x;
+        const x = st[at + k] & rows[row + k];
+        st[next + k] = x;
         if (x !== 0) {
           c += popcount32(x);
           words++;
@@ -342,7 +343,7 @@ function expandWide(rows: Int32Array, Wc: number, at: number, depth: number): vo
       cnt[depth + 1] += total;
       produced[0] += total;
       total = 0;
-      if (words === 1) expand1(rows, (only << 5) * Wc + only, Wc, stack[next + only], depth + 1);
+      if (words === 1) expand1(rows, (only << 5) * Wc + only, Wc, st[next + only], depth + 1);
       else if (c === 2) settlePair(rows, Wc, next, depth);
       else if (c <= 64) expandPacked(rows, Wc, next, c, depth + 1);
       else if (rows === loc && Wc > ((c + 31) >>> 5) + 1) expandRepacked(next, c, depth + 1);
@@ -410,18 +411,20 @@ function settlePair(rows: Int32Array, Wc: number, at: number, depth: number): vo
 
 /** Renumbers a candidate set of c ≤ 64 members into a one- or two-word universe and runs its subtree there. */
 function expandPacked(rows: Int32Array, Wc: number, at: number, c: number, depth: number): void {
+  const st = stack; // module arrays held in locals for the hot loops
+  const index = packedIndex;
   let q = 0;
   for (let k = 0; k < Wc; k++) {
-    let y = stack[at + k];
+    let y = st[at + k];
     while (y !== 0) {
       const b = 31 - Math.clz32(y);
       y ^= 1 << b;
-      packedIndex[(k << 5) + b] = q++;
+      index[(k << 5) + b] = q++;
     }
   }
   q = 0;
   for (let k = 0; k < Wc; k++) {
-    let y = stack[at + k];
+    let y = st[at + k];
     while (y !== 0) {
       const b = 31 - Math.clz32(y);
       y ^= 1 << b;
@@ -429,11 +432,11 @@ function expandPacked(rows: Int32Array, Wc: number, at: number, c: number, depth
       let lo = 0;
       let hi = 0;
       for (let m = undirected ? k : 0; m < Wc; m++) {
-        let z = stack[at + m] & rows[row + m];
+        let z = st[at + m] & rows[row + m];
         while (z !== 0) {
           const zb = 31 - Math.clz32(z);
           z ^= 1 << zb;
-          const p = packedIndex[(m << 5) + zb];
+          const p = index[(m << 5) + zb];
           if (p < 32) lo |= 1 << p;
           else hi |= 1 << p;
         }

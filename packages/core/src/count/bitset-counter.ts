@@ -19,7 +19,11 @@ import { rootProgress, SimplexBudgetError } from "./simplex-budget-error.js";
 let loc = new Int32Array(0); // local adjacency, d rows of W words
 let stack = new Int32Array(0); // candidate sets, one block of W words per depth
 let repacked = new Int32Array(0); // universe of one large candidate set, rows of ceil(c/32) words
-const packed = new Int32Array(128); // rows (word pairs) of a compacted candidate set of ≤ 64 members
+const packed = new Int32Array(128);
+// members of a set being packed (≤ 64): word, bit and row start in the universe it comes from
+const memberWord = new Int32Array(64);
+const memberShift = new Int32Array(64);
+const memberRow = new Int32Array(64); // rows (word pairs) of a compacted candidate set of ≤ 64 members
 let packedIndex = new Int32Array(0); // local index → position in the compacted set
 let cnt = new Float64Array(0);
 /** BINOMIAL[c * 33 + t] = C(c, t) for 0 ≤ t ≤ c ≤ 32 (Pascal's rule; exact in doubles). */
@@ -412,39 +416,34 @@ function settlePair(rows: Int32Array, Wc: number, at: number, depth: number): vo
 /** Renumbers a candidate set of c ≤ 64 members into a one- or two-word universe and runs its subtree there. */
 function expandPacked(rows: Int32Array, Wc: number, at: number, c: number, depth: number): void {
   const st = stack; // module arrays held in locals for the hot loops
-  const index = packedIndex;
+  const word = memberWord;
+  const shift = memberShift;
+  const base = memberRow;
   let q = 0;
   for (let k = 0; k < Wc; k++) {
     let y = st[at + k];
     while (y !== 0) {
-      const b = 31 - Math.clz32(y);
-      y ^= 1 << b;
-      index[(k << 5) + b] = q++;
+      // ascending, so a packed row of the undirected complex holds later members only, like its source
+      const low = y & -y;
+      const b = 31 - Math.clz32(low);
+      y ^= low;
+      word[q] = k;
+      shift[q] = b;
+      base[q++] = ((k << 5) + b) * Wc;
     }
   }
-  q = 0;
-  for (let k = 0; k < Wc; k++) {
-    let y = st[at + k];
-    while (y !== 0) {
-      const b = 31 - Math.clz32(y);
-      y ^= 1 << b;
-      const row = ((k << 5) + b) * Wc;
-      let lo = 0;
-      let hi = 0;
-      for (let m = undirected ? k : 0; m < Wc; m++) {
-        let z = st[at + m] & rows[row + m];
-        while (z !== 0) {
-          const zb = 31 - Math.clz32(z);
-          z ^= 1 << zb;
-          const p = index[(m << 5) + zb];
-          if (p < 32) lo |= 1 << p;
-          else hi |= 1 << p;
-        }
-      }
-      packed[q << 1] = lo;
-      packed[(q << 1) + 1] = hi;
-      q++;
-    }
+  // Bit p of packed row q is bit (member p) of row (member q): one test per pair, no data-dependent
+  // branches (a loop over the set bits of each row word mispredicts on most words).
+  const lowEnd = Math.min(c, 32);
+  for (q = 0; q < c; q++) {
+    const row = base[q];
+    let lo = 0;
+    let hi = 0;
+    let p = undirected ? q + 1 : 0;
+    for (; p < lowEnd; p++) lo |= ((rows[row + word[p]] >>> shift[p]) & 1) << p;
+    for (; p < c; p++) hi |= ((rows[row + word[p]] >>> shift[p]) & 1) << p;
+    packed[q << 1] = lo;
+    packed[(q << 1) + 1] = hi;
   }
   if (c <= 32) expand1(packed, 0, 2, c === 32 ? -1 : (1 << c) - 1, depth);
   else expand2(packed, -1, c === 64 ? -1 : (1 << (c - 32)) - 1, depth);

@@ -3,12 +3,9 @@ import type { CoboundaryModel } from "./coboundary-model.js";
 import { ColumnStore } from "./column-store.js";
 import type { ByteLedger } from "./homology-budget.js";
 import { KeyMap } from "./key-map.js";
+import { LazyColumn } from "./lazy-column.js";
 import { modP, type PrimeField } from "./prime-field.js";
 import type { PairSink } from "./union-find-pairs.js";
-import { WorkingColumn } from "./working-column.js";
-
-/** Chains longer than this are not tracked: the column keeps its reduced entries instead. */
-const MAX_CHAIN = 1 << 14;
 
 /** Work counters of one dimension. */
 export interface ReductionCounters {
@@ -92,13 +89,12 @@ export function reduceDimension(
   columns.sort((a, b) => (lf[a] !== lf[b] ? (lf[a] > lf[b] ? -1 : 1) : lk[b] - lk[a]));
 
   const pivots = new KeyMap(ledger, `recording the pivots of dimension ${dim}`, Math.max(16, todoCount));
+  // Implicit reduction: a finished column keeps only its chain (the simplices whose coboundaries sum to
+  // it); its entries are regenerated from the chain whenever it is added.
   const store = new ColumnStore(ledger);
-  const work = new WorkingColumn(ledger);
+  const work = new LazyColumn(ledger);
   const chain = new ChainBuilder(ledger);
-  const rebuildCost = model.cofaceEstimate(dim);
-  let openColumn = -1;
-  const keep = (entryF: number, entryKey: number, entryCoef: number) =>
-    store.appendEntry(openColumn, entryF, entryKey, entryCoef);
+  let compactAt = 1024;
 
   for (let c = 0; c < todoCount; c++) {
     const i = columns[c];
@@ -106,6 +102,7 @@ export function reduceDimension(
     const f = lf[i];
     chain.clear();
     chain.push(key, f, 1);
+    compactAt = 1024;
 
     // Emergent pair: the earliest coface enters with σ and nobody has claimed it.
     const first = model.zeroCoface(dim, key, f);
@@ -124,9 +121,6 @@ export function reduceDimension(
     counters.reduced++;
     work.reset(p);
     model.pushCoboundary(dim, key, f, 1, p, work);
-    work.commit();
-    // Whether `chain` still lists the simplices whose coboundaries make up the column.
-    let chainKnown = true;
     for (;;) {
       if (!work.settle()) {
         sink.essential(dim, key, f);
@@ -137,35 +131,23 @@ export function reduceDimension(
       const pivotCoef = work.pivotCoef;
       const owner = pivots.get(pivotKey);
       if (owner >= 0) {
-        // Cancel the pivot with the column that owns it: add -(c / c_owner) times that column, rebuilt
-        // from its chain or read from its entries, whichever is cheaper.
+        // Cancel the pivot with the column that owns it: add -(c / c_owner) times that column, regenerated
+        // from its chain.
         const factor = ((p - pivotCoef) * inverse[store.pivotCoef[owner]]) % p;
         const chainFrom = store.chainStart[owner];
         const chainTo = chainFrom + store.chainLength[owner];
-        const entryFrom = store.entryStart[owner];
-        if (
-          chainFrom >= 0 &&
-          (entryFrom < 0 || store.chainLength[owner] * rebuildCost < store.entryLength[owner])
-        ) {
-          for (let e = chainFrom; e < chainTo; e++) {
-            const g = (factor * store.chainCoef[e]) % p;
-            model.pushCoboundary(dim, store.chainKey[e], store.chainF[e], g, p, work);
-          }
-          work.commit();
-        } else {
-          work.addSorted(
-            store.entryF,
-            store.entryKey,
-            store.entryCoef,
-            entryFrom,
-            entryFrom + store.entryLength[owner],
-            factor,
-          );
+        const ck = store.chainKey;
+        const cf = store.chainF;
+        const cc = store.chainCoef;
+        for (let e = chainFrom; e < chainTo; e++) {
+          const g = (factor * cc[e]) % p;
+          model.pushCoboundary(dim, ck[e], cf[e], g, p, work);
+          chain.push(ck[e], cf[e], g);
         }
-        if (chainKnown && chainFrom >= 0 && chain.size + store.chainLength[owner] <= MAX_CHAIN) {
-          for (let e = chainFrom; e < chainTo; e++)
-            chain.push(store.chainKey[e], store.chainF[e], (factor * store.chainCoef[e]) % p);
-        } else chainKnown = false;
+        if (chain.size > compactAt) {
+          chain.compact(p);
+          compactAt = Math.max(1024, chain.size * 2);
+        }
         counters.additions++;
         continue;
       }
@@ -176,26 +158,15 @@ export function reduceDimension(
           // The pivot belongs to an apparent pair (facet, pivot) whose column is just δ(facet).
           const factor = ((p - pivotCoef) * inverse[modP(facetSign, p)]) % p;
           model.pushCoboundary(dim, facet, pivotF, factor, p, work);
-          work.commit();
-          if (chainKnown && chain.size < MAX_CHAIN) chain.push(facet, pivotF, factor);
-          else chainKnown = false;
+          chain.push(facet, pivotF, factor);
           counters.additions++;
           continue;
         }
       }
-      // A new pivot: keep the chain when known, and the entries when rebuilding would cost more.
+      // A new pivot: keep the chain.
       const id = store.open(pivotCoef);
-      if (chainKnown) {
-        chain.compact(p);
-        store.setChain(id, chain.key, chain.f, chain.coef, chain.size);
-      }
-      // Entries cost 20 bytes each; past half the budget, columns with a chain keep only the chain (slower
-      // to add, but the computation fits).
-      const entriesFit = ledger.held + work.sizeBound * 20 < ledger.maxBytes / 2;
-      if (!chainKnown || (chain.size * rebuildCost > work.sizeBound && entriesFit)) {
-        openColumn = id;
-        work.drain(keep);
-      }
+      chain.compact(p);
+      store.setChain(id, chain.key, chain.f, chain.coef, chain.size);
       pivots.set(pivotKey, id);
       if (pivotF > f || keepZeroLength) sink.pair(dim, key, f, pivotKey, pivotF);
       break;

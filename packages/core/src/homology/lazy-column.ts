@@ -1,0 +1,60 @@
+import { CofaceHeap } from "./coface-heap.js";
+import type { CofaceSink } from "./coface-sink.js";
+import type { ByteLedger } from "./homology-budget.js";
+
+/**
+ * The column being reduced in implicit matrix reduction: a binary min-heap of (f, key, coefficient) entries
+ * filled from the cofaces of the chain simplices. Nothing is ever sorted or merged as a whole: settle() pops
+ * only until the first key whose summed coefficient is not 0 mod p (the pivot), and puts that back so the
+ * column stays complete. Equal keys are cancelled lazily when they reach the top.
+ */
+export class LazyColumn implements CofaceSink {
+  pivotF = 0;
+  pivotKey = -1;
+  pivotCoef = 0;
+  /** Largest heap size seen since construction. */
+  peak = 0;
+  private readonly heap: CofaceHeap;
+  private p = 2;
+
+  constructor(ledger: ByteLedger, capacity = 1024) {
+    this.heap = new CofaceHeap(ledger, capacity);
+  }
+
+  reset(p: number): void {
+    this.p = p;
+    this.heap.clear();
+  }
+
+  push(f: number, key: number, coef: number): void {
+    this.heap.push(f, key, coef);
+  }
+
+  get size(): number {
+    return this.heap.size;
+  }
+
+  /** Finds the pivot (leaving it in the column). False when the column is 0 (then the heap is empty). */
+  settle(): boolean {
+    const heap = this.heap;
+    const p = this.p;
+    if (heap.size > this.peak) this.peak = heap.size;
+    while (heap.size > 0) {
+      const f = heap.f[0];
+      const key = heap.key[0];
+      const sum = heap.popMerged() % p;
+      if (sum !== 0) {
+        this.pivotF = f;
+        this.pivotKey = key;
+        this.pivotCoef = sum;
+        heap.push(f, key, sum);
+        return true;
+      }
+    }
+    return false;
+  }
+
+  dispose(): void {
+    this.heap.dispose();
+  }
+}

@@ -16,6 +16,13 @@ export class LazyColumn implements CofaceSink {
   peak = 0;
   private readonly heap: CofaceHeap;
   private p = 2;
+  /**
+   * Entries before (floorF, floorKey) are dropped on push. Once the pivot P is found, every entry before P
+   * sums to zero in the column, and every column added to cancel P has P as its pivot too, so its entries
+   * before P also sum to zero: they need never enter the heap.
+   */
+  private floorF = Number.NEGATIVE_INFINITY;
+  private floorKey = 0;
 
   constructor(ledger: ByteLedger, capacity = 1024) {
     this.heap = new CofaceHeap(ledger, capacity);
@@ -24,9 +31,12 @@ export class LazyColumn implements CofaceSink {
   reset(p: number): void {
     this.p = p;
     this.heap.clear();
+    this.floorF = Number.NEGATIVE_INFINITY;
+    this.floorKey = 0;
   }
 
   push(f: number, key: number, coef: number): void {
+    if (f < this.floorF || (f === this.floorF && key < this.floorKey)) return;
     this.heap.push(f, key, coef);
   }
 
@@ -47,6 +57,8 @@ export class LazyColumn implements CofaceSink {
         this.pivotF = f;
         this.pivotKey = key;
         this.pivotCoef = sum;
+        this.floorF = f;
+        this.floorKey = key;
         heap.push(f, key, sum);
         return true;
       }

@@ -31,6 +31,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
   private readonly high: Float64Array;
   private readonly ptr: Int32Array;
   private readonly pairF: Float64Array;
+  private readonly rows: Int32Array;
 
   /** `edgeF` is the filtration value per CSR slot; `maxVertices` the largest simplex (maxDim + 2). */
   constructor(
@@ -64,6 +65,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
     this.low = new Float64Array(maxVertices + 2);
     this.high = new Float64Array(maxVertices + 2);
     this.ptr = new Int32Array(maxVertices + 1);
+    this.rows = new Int32Array(maxVertices + 1);
     this.pairF = new Float64Array((maxVertices + 1) * (maxVertices + 1));
   }
 
@@ -156,18 +158,41 @@ export class CliqueCoboundaries implements CoboundaryModel {
     const values = this.binom.values;
     const row = this.row;
     if (this.dense !== null) {
+      // The matrix is symmetric: read the rows of σ's vertices, so v sweeps contiguous memory.
       const m = this.dense;
       const n = this.n;
       let j = 0;
+      if (count === 3) {
+        const r0 = s[0] * n;
+        const r1 = s[1] * n;
+        const r2 = s[2] * n;
+        for (let v = 0; v < n; v++) {
+          if (j < 3 && v === s[j]) {
+            j++;
+            continue;
+          }
+          let fv = f;
+          const x0 = m[r0 + v];
+          const x1 = m[r1 + v];
+          const x2 = m[r2 + v];
+          if (x0 > fv) fv = x0;
+          if (x1 > fv) fv = x1;
+          if (x2 > fv) fv = x2;
+          if (fv === Infinity) continue;
+          sink.push(fv, low[j] + values[(j + 1) * row + v] + high[j], (j & 1) === 0 ? factor : negative);
+        }
+        return;
+      }
+      const rows = this.rows;
+      for (let i = 0; i < count; i++) rows[i] = s[i] * n;
       for (let v = 0; v < n; v++) {
         if (j < count && v === s[j]) {
           j++;
           continue;
         }
         let fv = f;
-        const base = v * n;
         for (let i = 0; i < count; i++) {
-          const x = m[base + s[i]];
+          const x = m[rows[i] + v];
           if (x > fv) fv = x;
         }
         if (fv === Infinity) continue;
@@ -204,9 +229,8 @@ export class CliqueCoboundaries implements CoboundaryModel {
           j++;
           continue;
         }
-        const base = v * n;
         let i = 0;
-        while (i < count && m[base + s[i]] <= f) i++;
+        while (i < count && m[s[i] * n + v] <= f) i++;
         if (i === count) {
           this.sign = (j & 1) === 0 ? 1 : -1;
           return this.low[j] + values[(j + 1) * row + v] + this.high[j];

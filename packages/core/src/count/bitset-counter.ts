@@ -26,6 +26,8 @@ const memberShift = new Int32Array(64);
 const memberRow = new Int32Array(64); // rows (word pairs) of a compacted candidate set of ≤ 64 members
 let packedIndex = new Int32Array(0); // local index → position in the compacted set
 let cnt = new Float64Array(0);
+// children with ≥ 2 members of one two-word level, 64 × (word, word, size) per depth
+let kids = new Int32Array(0);
 /** BINOMIAL[c * 33 + t] = C(c, t) for 0 ≤ t ≤ c ≤ 32 (Pascal's rule; exact in doubles). */
 const BINOMIAL = new Float64Array(33 * 33);
 for (let c = 0; c <= 32; c++) {
@@ -57,6 +59,7 @@ export function countWithBitsets(g: EnumerationGraph, maxDim: number, simplexBud
   capDim = Math.min(maxDim, dmax + 1);
   stack = new Int32Array((Math.min(dmax, capDim) + 3) * wmax);
   packedIndex = new Int32Array(dmax);
+  kids = new Int32Array((Math.min(dmax, capDim) + 3) * 192);
   repacked = new Int32Array(dmax * wmax);
   cnt = new Float64Array(capDim + 2);
   undirected = !g.directed;
@@ -227,63 +230,90 @@ function lastPair(rows: Int32Array, base: number, stride: number, y: number): nu
   return ((rows[base + j * stride] >>> k) & 1) + ((rows[base + k * stride] >>> j) & 1);
 }
 
-/** Two-word universe (≤ 64 members, rows are word pairs): the candidate set is held in two numbers. */
+/**
+ * Two-word universe (≤ 64 members, rows are word pairs): the candidate set is held in two numbers.
+ * First pass: every member's child set and its size, no branch on the size (most children have fewer
+ * than two members; a branch on that mispredicts often); children with ≥ 2 members are kept in
+ * `kids` (per depth) and settled in a second pass.
+ */
 function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void {
   const deeper = depth + 2 <= capDim;
+  const kv = kids;
+  const at = depth * 192;
+  let n = 0;
   let total = 0;
-  let pairs = 0;
-  let triples = 0;
-  for (let w = 0; w < 2; w++) {
-    let bits = w === 0 ? c0 : c1;
-    while (bits !== 0) {
-      const b = 31 - Math.clz32(bits);
-      bits ^= 1 << b;
-      const row = ((w << 5) + b) << 1;
-      const x0 = c0 & rows[row];
-      const x1 = c1 & rows[row + 1];
-      const c = popcount32(x0) + popcount32(x1);
-      total += c;
-      if (c < 2) continue;
-      if (!deeper) {
-        if (!truncated) truncated = anyEdgeIn2(rows, x0, x1);
-        continue;
-      }
-      if (c === 2) {
-        // two candidates j > k: the next simplex exists once per arc between them
-        const j = x1 !== 0 ? 63 - Math.clz32(x1) : 31 - Math.clz32(x0);
-        const r0 = j < 32 ? x0 ^ (1 << j) : x0;
-        const r1 = j < 32 ? x1 : x1 ^ (1 << (j - 32));
-        const k = r1 !== 0 ? 63 - Math.clz32(r1) : 31 - Math.clz32(r0);
-        pairs +=
-          ((rows[(j << 1) + (k >>> 5)] >>> (k & 31)) & 1) + ((rows[(k << 1) + (j >>> 5)] >>> (j & 31)) & 1);
-        continue;
-      }
-      if (c === 3 && depth + 3 <= capDim) {
-        // three candidates: both remaining levels settled inline, as in expand1
-        let y0 = x0;
-        let y1 = x1;
-        for (let t = 0; t < 3; t++) {
-          const m = y1 !== 0 ? 63 - Math.clz32(y1) : 31 - Math.clz32(y0);
-          if (m < 32) y0 ^= 1 << m;
-          else y1 ^= 1 << (m - 32);
-          const z0 = x0 & rows[m << 1];
-          const z1 = x1 & rows[(m << 1) + 1];
-          const zc = popcount32(z0) + popcount32(z1);
-          pairs += zc;
-          if (zc === 2) triples += lastPair2(rows, z0, z1);
-        }
-        continue;
-      }
-      cnt[depth + 1] += total;
-      produced[0] += total;
-      total = 0;
-      if (x1 === 0) expand1(rows, 0, 2, x0, depth + 1);
-      else if (x0 === 0) expand1(rows, 65, 2, x1, depth + 1);
-      else expand2(rows, x0, x1, depth + 1);
-    }
+  let bits = c0;
+  while (bits !== 0) {
+    const b = 31 - Math.clz32(bits);
+    bits ^= 1 << b;
+    const x0 = c0 & rows[b << 1];
+    const x1 = c1 & rows[(b << 1) + 1];
+    const c = popcount32(x0) + popcount32(x1);
+    total += c;
+    const e = at + n * 3;
+    kv[e] = x0;
+    kv[e + 1] = x1;
+    kv[e + 2] = c;
+    n += (1 - c) >>> 31; // c ≥ 2
+  }
+  bits = c1;
+  while (bits !== 0) {
+    const b = 31 - Math.clz32(bits);
+    bits ^= 1 << b;
+    const x0 = c0 & rows[(b + 32) << 1];
+    const x1 = c1 & rows[((b + 32) << 1) + 1];
+    const c = popcount32(x0) + popcount32(x1);
+    total += c;
+    const e = at + n * 3;
+    kv[e] = x0;
+    kv[e + 1] = x1;
+    kv[e + 2] = c;
+    n += (1 - c) >>> 31;
   }
   cnt[depth + 1] += total;
-  produced[0] += total + pairs + triples;
+  produced[0] += total;
+  let pairs = 0;
+  let triples = 0;
+  for (let i = 0; i < n; i++) {
+    const e = at + i * 3;
+    const x0 = kv[e];
+    const x1 = kv[e + 1];
+    const c = kv[e + 2];
+    if (!deeper) {
+      if (!truncated) truncated = anyEdgeIn2(rows, x0, x1);
+      continue;
+    }
+    if (c === 2) {
+      // two candidates j > k: the next simplex exists once per arc between them
+      const j = x1 !== 0 ? 63 - Math.clz32(x1) : 31 - Math.clz32(x0);
+      const r0 = j < 32 ? x0 ^ (1 << j) : x0;
+      const r1 = j < 32 ? x1 : x1 ^ (1 << (j - 32));
+      const k = r1 !== 0 ? 63 - Math.clz32(r1) : 31 - Math.clz32(r0);
+      pairs +=
+        ((rows[(j << 1) + (k >>> 5)] >>> (k & 31)) & 1) + ((rows[(k << 1) + (j >>> 5)] >>> (j & 31)) & 1);
+      continue;
+    }
+    if (c === 3 && depth + 3 <= capDim) {
+      // three candidates: both remaining levels settled inline, as in expand1
+      let y0 = x0;
+      let y1 = x1;
+      for (let t = 0; t < 3; t++) {
+        const m = y1 !== 0 ? 63 - Math.clz32(y1) : 31 - Math.clz32(y0);
+        if (m < 32) y0 ^= 1 << m;
+        else y1 ^= 1 << (m - 32);
+        const z0 = x0 & rows[m << 1];
+        const z1 = x1 & rows[(m << 1) + 1];
+        const zc = popcount32(z0) + popcount32(z1);
+        pairs += zc;
+        if (zc === 2) triples += lastPair2(rows, z0, z1);
+      }
+      continue;
+    }
+    if (x1 === 0) expand1(rows, 0, 2, x0, depth + 1);
+    else if (x0 === 0) expand1(rows, 65, 2, x1, depth + 1);
+    else expand2(rows, x0, x1, depth + 1);
+  }
+  produced[0] += pairs + triples;
   if (pairs !== 0) cnt[depth + 2] += pairs;
   if (triples !== 0) cnt[depth + 3] += triples;
   if (produced[0] > budget) fail(depth);

@@ -95,6 +95,12 @@ export function reduceDimension(
   const work = new LazyColumn(ledger);
   const chain = new ChainBuilder(ledger);
   let compactAt = 1024;
+  ledger.reserve(todoCount * 8, `sorting the ${dim}-simplex values`);
+  const sortedCount = todoCount;
+  const sortedF = new Float64Array(sortedCount);
+  for (let c = 0; c < todoCount; c++) sortedF[c] = lf[columns[c]];
+  sortedF.sort();
+  const firstWindow = 64;
 
   for (let c = 0; c < todoCount; c++) {
     const i = columns[c];
@@ -120,9 +126,37 @@ export function reduceDimension(
 
     counters.reduced++;
     work.reset(p);
+    // Cofaces are heaped only up to a horizon `window` values past σ's (in the sorted values of the
+    // dim-simplices); when the heap runs dry before a pivot shows up, the window doubles and the
+    // chain is pushed again for the new band.
+    let lo = 0;
+    let hi = sortedCount;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (sortedF[mid] <= f) lo = mid + 1;
+      else hi = mid;
+    }
+    let window = firstWindow;
+    let horizonRank = lo + window;
+    work.horizon = horizonRank < sortedCount ? sortedF[horizonRank] : Number.POSITIVE_INFINITY;
     model.pushCoboundary(dim, key, f, 1, p, work);
     for (;;) {
       if (!work.settle()) {
+        if (work.deferred) {
+          window *= 2;
+          horizonRank += window;
+          work.bandLow = work.horizon;
+          work.horizon = horizonRank < sortedCount ? sortedF[horizonRank] : Number.POSITIVE_INFINITY;
+          work.deferred = false;
+          if (chain.size > compactAt) {
+            chain.compact(p);
+            compactAt = Math.max(1024, chain.size * 2);
+          }
+          for (let e = 0; e < chain.size; e++)
+            model.pushCoboundary(dim, chain.key[e], chain.f[e], chain.coef[e], p, work);
+          work.bandLow = Number.NEGATIVE_INFINITY;
+          continue;
+        }
         sink.essential(dim, key, f);
         break;
       }
@@ -174,6 +208,7 @@ export function reduceDimension(
   }
   work.dispose();
   chain.dispose();
+  ledger.release(sortedCount * 8);
   store.dispose();
   ledger.release(list.count * 4);
   return { pivots, counters };

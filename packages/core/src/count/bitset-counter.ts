@@ -28,6 +28,7 @@ let packedIndex = new Int32Array(0); // local index → position in the compacte
 let cnt = new Float64Array(0);
 // children with ≥ 2 members of one two-word level, 64 × (word, word, size) per depth
 let kids = new Int32Array(0);
+let kids1 = new Int32Array(0); // the same for one-word levels, 32 × (set, size) per depth
 /** BINOMIAL[c * 33 + t] = C(c, t) for 0 ≤ t ≤ c ≤ 32 (Pascal's rule; exact in doubles). */
 const BINOMIAL = new Float64Array(33 * 33);
 for (let c = 0; c <= 32; c++) {
@@ -60,6 +61,7 @@ export function countWithBitsets(g: EnumerationGraph, maxDim: number, simplexBud
   stack = new Int32Array((Math.min(dmax, capDim) + 3) * wmax);
   packedIndex = new Int32Array(dmax);
   kids = new Int32Array((Math.min(dmax, capDim) + 3) * 192);
+  kids1 = new Int32Array((Math.min(dmax, capDim) + 3) * 64);
   repacked = new Int32Array(dmax * wmax);
   cnt = new Float64Array(capDim + 2);
   undirected = !g.directed;
@@ -133,19 +135,32 @@ function runLocal(d: number): void {
  * without being copied.
  */
 function expand1(rows: Int32Array, base: number, stride: number, cand: number, depth: number): void {
+  // first pass without a branch on the child's size (as in expand2): those with ≥ 2 members are kept
+  const kv = kids1;
+  const at = depth << 6;
+  let n = 0;
   let total = 0;
-  let pairs = 0;
-  let triples = 0;
   let bits = cand;
-  const deeper = depth + 2 <= capDim;
   while (bits !== 0) {
     const lowBit = 31 - Math.clz32(bits);
     bits ^= 1 << lowBit;
     const x = cand & rows[base + lowBit * stride];
-    if (x === 0) continue;
     const c = popcount32(x);
     total += c;
-    if (c === 1) continue;
+    const e = at + (n << 1);
+    kv[e] = x;
+    kv[e + 1] = c;
+    n += (1 - c) >>> 31; // c ≥ 2
+  }
+  cnt[depth + 1] += total;
+  produced[0] += total;
+  const deeper = depth + 2 <= capDim;
+  let pairs = 0;
+  let triples = 0;
+  for (let i = 0; i < n; i++) {
+    const e = at + (i << 1);
+    const x = kv[e];
+    const c = kv[e + 1];
     if (!deeper) {
       if (!truncated) truncated = anyEdgeIn1(rows, base, stride, x);
     } else if (c === 3 && depth + 3 <= capDim) {
@@ -163,9 +178,6 @@ function expand1(rows: Int32Array, base: number, stride: number, cand: number, d
         lastPair(rows, base, stride, yb) +
         lastPair(rows, base, stride, yc);
     } else if (c >= 3) {
-      cnt[depth + 1] += total;
-      produced[0] += total;
-      total = 0;
       if (undirected && isClique(rows, base, stride, x)) countClique(c, depth + 1);
       else expand1(rows, base, stride, x, depth + 1);
     } else {
@@ -182,8 +194,6 @@ function expand1(rows: Int32Array, base: number, stride: number, cand: number, d
       produced[0] += triples;
     }
   }
-  cnt[depth + 1] += total;
-  produced[0] += total;
   if (produced[0] > budget) fail(depth);
 }
 

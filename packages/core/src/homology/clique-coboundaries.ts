@@ -162,6 +162,8 @@ export class CliqueCoboundaries implements CoboundaryModel {
       const m = this.dense;
       const n = this.n;
       let j = 0;
+      const horizon = sink.horizon ?? Number.POSITIVE_INFINITY;
+      const bandLow = sink.bandLow ?? Number.NEGATIVE_INFINITY;
       if (count === 3) {
         const r0 = s[0] * n;
         const r1 = s[1] * n;
@@ -178,7 +180,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
           if (x0 > fv) fv = x0;
           if (x1 > fv) fv = x1;
           if (x2 > fv) fv = x2;
-          if (fv === Infinity) continue;
+          if (fv > horizon || fv <= bandLow) continue;
           sink.push(fv, low[j] + values[(j + 1) * row + v] + high[j], (j & 1) === 0 ? factor : negative);
         }
         return;
@@ -195,7 +197,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
           const x = m[rows[i] + v];
           if (x > fv) fv = x;
         }
-        if (fv === Infinity) continue;
+        if (fv === Infinity || fv > horizon || fv <= bandLow) continue;
         sink.push(fv, low[j] + values[(j + 1) * row + v] + high[j], (j & 1) === 0 ? factor : negative);
       }
       return;

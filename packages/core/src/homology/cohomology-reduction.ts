@@ -147,7 +147,6 @@ export function reduceDimension(
           horizonRank += window;
           work.bandLow = work.horizon;
           work.horizon = horizonRank < sortedCount ? sortedF[horizonRank] : Number.POSITIVE_INFINITY;
-          work.deferred = false;
           if (chain.size > compactAt) {
             chain.compact(p);
             compactAt = Math.max(1024, chain.size * 2);

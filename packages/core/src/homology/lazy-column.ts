@@ -24,14 +24,13 @@ export class LazyColumn implements CofaceSink {
   private floorF = Number.NEGATIVE_INFINITY;
   private floorKey = 0;
   /**
-   * Entries after `horizon` are not heaped (most entries of a long column are never reached by its pivot);
-   * `deferred` says some were dropped, so the column is zero only once the horizon has been raised to the
-   * end and nothing is left. While the chain is pushed again for a raised horizon, only entries after
-   * `bandLow` (the old horizon) are new.
+   * Entries after `horizon` are not heaped (most entries of a long column are never reached by its pivot),
+   * and producers may skip them before computing their keys; so the column is known to be zero only once
+   * the horizon has been raised to +∞ and nothing is left. While the chain is pushed again for a raised
+   * horizon, only entries after `bandLow` (the old horizon) are new.
    */
   horizon = Number.POSITIVE_INFINITY;
   bandLow = Number.NEGATIVE_INFINITY;
-  deferred = false;
 
   constructor(ledger: ByteLedger, capacity = 1024) {
     this.heap = new CofaceHeap(ledger, capacity);
@@ -44,16 +43,22 @@ export class LazyColumn implements CofaceSink {
     this.floorKey = 0;
     this.horizon = Number.POSITIVE_INFINITY;
     this.bandLow = Number.NEGATIVE_INFINITY;
-    this.deferred = false;
   }
 
   push(f: number, key: number, coef: number): void {
-    if (f > this.horizon) {
-      this.deferred = true;
+    if (
+      f > this.horizon ||
+      f <= this.bandLow ||
+      f < this.floorF ||
+      (f === this.floorF && key < this.floorKey)
+    )
       return;
-    }
-    if (f <= this.bandLow || f < this.floorF || (f === this.floorF && key < this.floorKey)) return;
     this.heap.push(f, key, coef);
+  }
+
+  /** Whether entries may lie past the horizon. */
+  get deferred(): boolean {
+    return this.horizon !== Number.POSITIVE_INFINITY;
   }
 
   get size(): number {

@@ -21,6 +21,8 @@ export class CliqueCoboundaries implements CoboundaryModel {
   private readonly binom: BinomialTable;
   private readonly row: number;
   private readonly dense: Float64Array | null;
+  private readonly rowOrder: Int32Array | null;
+  private readonly rowSorted: Float64Array | null;
   private readonly offsets: Int32Array;
   private readonly targets: Int32Array;
   private readonly edgeF: Float64Array;
@@ -58,8 +60,27 @@ export class CliqueCoboundaries implements CoboundaryModel {
           m[u * n + graph.targets[slot]] = edgeF[slot];
       }
       this.dense = m;
+      // Each row's vertices sorted by edge value: the cofaces of σ below a horizon are among the
+      // neighbours of any one vertex of σ below it.
+      ledger.reserve(n * n * 12, "sorting the dense edge-value rows");
+      const order = new Int32Array(n * n);
+      const sorted = new Float64Array(n * n);
+      const idx = new Int32Array(n);
+      for (let u = 0; u < n; u++) {
+        for (let v = 0; v < n; v++) idx[v] = v;
+        const base = u * n;
+        idx.sort((a, b) => m[base + a] - m[base + b] || a - b);
+        for (let r = 0; r < n; r++) {
+          order[base + r] = idx[r];
+          sorted[base + r] = m[base + idx[r]];
+        }
+      }
+      this.rowOrder = order;
+      this.rowSorted = sorted;
     } else {
       this.dense = null;
+      this.rowOrder = null;
+      this.rowSorted = null;
     }
     this.s = new Int32Array(maxVertices + 1);
     this.low = new Float64Array(maxVertices + 2);
@@ -164,6 +185,49 @@ export class CliqueCoboundaries implements CoboundaryModel {
       let j = 0;
       const horizon = sink.horizon ?? Number.POSITIVE_INFINITY;
       const bandLow = sink.bandLow ?? Number.NEGATIVE_INFINITY;
+      if (horizon !== Number.POSITIVE_INFINITY) {
+        // Only neighbours v of σ's vertex with the fewest edges ≤ horizon can give cofaces ≤ horizon.
+        const sorted = this.rowSorted as Float64Array;
+        let best = -1;
+        let bestLength = n + 1;
+        for (let i = 0; i < count; i++) {
+          const base = s[i] * n;
+          let lo = 0;
+          let hi = n;
+          while (lo < hi) {
+            const mid = (lo + hi) >>> 1;
+            if (sorted[base + mid] <= horizon) lo = mid + 1;
+            else hi = mid;
+          }
+          if (lo < bestLength) {
+            bestLength = lo;
+            best = i;
+          }
+        }
+        if (bestLength * 4 < n) {
+          const order = this.rowOrder as Int32Array;
+          const start = s[best] * n;
+          const rows = this.rows;
+          for (let i = 0; i < count; i++) rows[i] = s[i] * n;
+          for (let r = 0; r < bestLength; r++) {
+            const v = order[start + r];
+            let fv = f;
+            for (let i = 0; i < count; i++) {
+              const x = m[rows[i] + v];
+              if (x > fv) fv = x;
+            }
+            if (fv > horizon || fv <= bandLow) continue;
+            let jv = 0;
+            while (jv < count && s[jv] < v) jv++;
+            sink.push(
+              fv,
+              low[jv] + values[(jv + 1) * row + v] + high[jv],
+              (jv & 1) === 0 ? factor : negative,
+            );
+          }
+          return;
+        }
+      }
       if (count === 3) {
         const r0 = s[0] * n;
         const r1 = s[1] * n;

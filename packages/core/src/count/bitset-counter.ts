@@ -164,19 +164,22 @@ function expand1(rows: Int32Array, base: number, stride: number, cand: number, d
     if (!deeper) {
       if (!truncated) truncated = anyEdgeIn1(rows, base, stride, x);
     } else if (c === 3 && depth + 3 <= capDim) {
-      // three candidates: both remaining levels settled inline (saves a call on the commonest small case)
+      // three candidates a, b, c: both remaining levels settled inline from the six arc bits, no branch
       const a = 31 - Math.clz32(x);
       const r = x ^ (1 << a);
-      const b2 = 31 - Math.clz32(r);
-      const c3 = 31 - Math.clz32(r ^ (1 << b2));
-      const ya = x & rows[base + a * stride];
-      const yb = x & rows[base + b2 * stride];
-      const yc = x & rows[base + c3 * stride];
-      pairs += popcount32(ya) + popcount32(yb) + popcount32(yc);
-      triples +=
-        lastPair(rows, base, stride, ya) +
-        lastPair(rows, base, stride, yb) +
-        lastPair(rows, base, stride, yc);
+      const b = 31 - Math.clz32(r);
+      const cc = 31 - Math.clz32(r ^ (1 << b));
+      const ra = rows[base + a * stride];
+      const rb = rows[base + b * stride];
+      const rc = rows[base + cc * stride];
+      const ab = (ra >>> b) & 1;
+      const ac = (ra >>> cc) & 1;
+      const ba = (rb >>> a) & 1;
+      const bc = (rb >>> cc) & 1;
+      const ca = (rc >>> a) & 1;
+      const cb = (rc >>> b) & 1;
+      pairs += ab + ac + ba + bc + ca + cb;
+      triples += (ab & ac) * (bc + cb) + (ba & bc) * (ac + ca) + (ca & cb) * (ab + ba);
     } else if (c >= 3) {
       if (undirected && isClique(rows, base, stride, x)) countClique(c, depth + 1);
       else expand1(rows, base, stride, x, depth + 1);
@@ -230,14 +233,6 @@ function countClique(c: number, depth: number): void {
     made += ways;
   }
   produced[0] += made;
-}
-
-/** For a set y of exactly two members j, k: how many of the arcs j→k, k→j exist (else 0). */
-function lastPair(rows: Int32Array, base: number, stride: number, y: number): number {
-  if (y === 0 || (y & (y - 1)) === 0) return 0;
-  const j = 31 - Math.clz32(y);
-  const k = 31 - Math.clz32(y ^ (1 << j));
-  return ((rows[base + j * stride] >>> k) & 1) + ((rows[base + k * stride] >>> j) & 1);
 }
 
 /**
@@ -304,19 +299,24 @@ function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void 
       continue;
     }
     if (c === 3 && depth + 3 <= capDim) {
-      // three candidates: both remaining levels settled inline, as in expand1
-      let y0 = x0;
-      let y1 = x1;
-      for (let t = 0; t < 3; t++) {
-        const m = y1 !== 0 ? 63 - Math.clz32(y1) : 31 - Math.clz32(y0);
-        if (m < 32) y0 ^= 1 << m;
-        else y1 ^= 1 << (m - 32);
-        const z0 = x0 & rows[m << 1];
-        const z1 = x1 & rows[(m << 1) + 1];
-        const zc = popcount32(z0) + popcount32(z1);
-        pairs += zc;
-        if (zc === 2) triples += lastPair2(rows, z0, z1);
-      }
+      // three candidates: both remaining levels settled inline from the six arc bits, as in expand1
+      const a = x1 !== 0 ? 63 - Math.clz32(x1) : 31 - Math.clz32(x0);
+      const ha = (31 - a) >> 31; // -1 when a lies in the second word
+      const y0 = x0 ^ ((1 << a) & ~ha);
+      const y1 = x1 ^ ((1 << a) & ha);
+      const b = y1 !== 0 ? 63 - Math.clz32(y1) : 31 - Math.clz32(y0);
+      const hb = (31 - b) >> 31;
+      const w0 = y0 ^ ((1 << b) & ~hb);
+      const w1 = y1 ^ ((1 << b) & hb);
+      const cc = w1 !== 0 ? 63 - Math.clz32(w1) : 31 - Math.clz32(w0);
+      const ab = (rows[(a << 1) + (b >>> 5)] >>> b) & 1;
+      const ac = (rows[(a << 1) + (cc >>> 5)] >>> cc) & 1;
+      const ba = (rows[(b << 1) + (a >>> 5)] >>> a) & 1;
+      const bc = (rows[(b << 1) + (cc >>> 5)] >>> cc) & 1;
+      const ca = (rows[(cc << 1) + (a >>> 5)] >>> a) & 1;
+      const cb = (rows[(cc << 1) + (b >>> 5)] >>> b) & 1;
+      pairs += ab + ac + ba + bc + ca + cb;
+      triples += (ab & ac) * (bc + cb) + (ba & bc) * (ac + ca) + (ca & cb) * (ab + ba);
       continue;
     }
     if (x1 === 0) expand1(rows, 0, 2, x0, depth + 1);
@@ -327,15 +327,6 @@ function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void 
   if (pairs !== 0) cnt[depth + 2] += pairs;
   if (triples !== 0) cnt[depth + 3] += triples;
   if (produced[0] > budget) fail(depth);
-}
-
-/** For a two-word set of exactly two members j, k: how many of the arcs j→k, k→j exist. */
-function lastPair2(rows: Int32Array, z0: number, z1: number): number {
-  const j = z1 !== 0 ? 63 - Math.clz32(z1) : 31 - Math.clz32(z0);
-  const r0 = j < 32 ? z0 ^ (1 << j) : z0;
-  const r1 = j < 32 ? z1 : z1 ^ (1 << (j - 32));
-  const k = r1 !== 0 ? 63 - Math.clz32(r1) : 31 - Math.clz32(r0);
-  return ((rows[(j << 1) + (k >>> 5)] >>> (k & 31)) & 1) + ((rows[(k << 1) + (j >>> 5)] >>> (j & 31)) & 1);
 }
 
 function anyEdgeIn2(rows: Int32Array, x0: number, x1: number): boolean {

@@ -23,6 +23,7 @@ const CASES = {
   corr200: { kind: "correlation", n: 200, maxDim: 2 },
   uniform200: { kind: "uniform", n: 200, maxDim: 2 },
   corr400: { kind: "correlation", n: 400, maxDim: 2 },
+  corr300: { kind: "correlation", n: 300, maxDim: 2 },
   uniform400: { kind: "uniform", n: 400, maxDim: 2 },
   sparse5000: { kind: "sparse", n: 5000, degree: 20, maxDim: 1 },
   directed300: { kind: "directed", n: 300, p: 0.1, maxDim: 2 },

@@ -29,36 +29,6 @@ let cnt = new Float64Array(0);
 // children with ≥ 2 members of one two-word level, 64 × (word, word, size) per depth
 let kids = new Int32Array(0);
 let kids1 = new Int32Array(0); // the same for one-word levels, 32 × (set, size) per depth
-/**
- * The subtree of a four-member candidate set, by its 12 arc bits (bit 3i + k: member i → the k-th other
- * member, in order): FOUR[3 · mask] arcs, FOUR[3 · mask + 1] ordered triples with all three forward arcs,
- * FOUR[3 · mask + 2] orderings of all four with all six forward arcs.
- */
-const FOUR = new Uint8Array(3 * 4096);
-{
-  const arc = (m: number, i: number, j: number) => (m >>> (3 * i + (j < i ? j : j - 1))) & 1;
-  for (let m = 0; m < 4096; m++) {
-    let e = 0;
-    let t = 0;
-    let q = 0;
-    for (let i = 0; i < 4; i++) {
-      for (let j = 0; j < 4; j++) {
-        if (j === i || !arc(m, i, j)) continue;
-        e++;
-        for (let k = 0; k < 4; k++) {
-          if (k === i || k === j || !arc(m, i, k) || !arc(m, j, k)) continue;
-          t++;
-          const l = 6 - i - j - k;
-          if (arc(m, i, l) && arc(m, j, l) && arc(m, k, l)) q++;
-        }
-      }
-    }
-    FOUR[3 * m] = e;
-    FOUR[3 * m + 1] = t;
-    FOUR[3 * m + 2] = q;
-  }
-}
-const fourMembers = new Int32Array(4);
 /** BINOMIAL[c * 33 + t] = C(c, t) for 0 ≤ t ≤ c ≤ 32 (Pascal's rule; exact in doubles). */
 const BINOMIAL = new Float64Array(33 * 33);
 for (let c = 0; c <= 32; c++) {
@@ -309,8 +279,6 @@ function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void 
   produced[0] += total;
   let pairs = 0;
   let triples = 0;
-  let quads = 0;
-  const four = fourMembers;
   for (let i = 0; i < n; i++) {
     const e = at + i * 3;
     const x0 = kv[e];
@@ -351,51 +319,13 @@ function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void 
       triples += (ab & ac) * (bc + cb) + (ba & bc) * (ac + ca) + (ca & cb) * (ab + ba);
       continue;
     }
-    if (c === 4 && depth + 4 <= capDim) {
-      // four candidates: the three remaining levels looked up by the 12 arc bits
-      let y0 = x0;
-      let y1 = x1;
-      for (let t = 0; t < 4; t++) {
-        const m = y1 !== 0 ? 63 - Math.clz32(y1) : 31 - Math.clz32(y0);
-        const h = (31 - m) >> 31;
-        y0 ^= (1 << m) & ~h;
-        y1 ^= (1 << m) & h;
-        four[t] = m;
-      }
-      const a = four[0];
-      const b = four[1];
-      const cc = four[2];
-      const d = four[3];
-      const ra = a << 1;
-      const rb = b << 1;
-      const rc = cc << 1;
-      const rd = d << 1;
-      const mask =
-        ((rows[ra + (b >>> 5)] >>> b) & 1) |
-        (((rows[ra + (cc >>> 5)] >>> cc) & 1) << 1) |
-        (((rows[ra + (d >>> 5)] >>> d) & 1) << 2) |
-        (((rows[rb + (a >>> 5)] >>> a) & 1) << 3) |
-        (((rows[rb + (cc >>> 5)] >>> cc) & 1) << 4) |
-        (((rows[rb + (d >>> 5)] >>> d) & 1) << 5) |
-        (((rows[rc + (a >>> 5)] >>> a) & 1) << 6) |
-        (((rows[rc + (b >>> 5)] >>> b) & 1) << 7) |
-        (((rows[rc + (d >>> 5)] >>> d) & 1) << 8) |
-        (((rows[rd + (a >>> 5)] >>> a) & 1) << 9) |
-        (((rows[rd + (b >>> 5)] >>> b) & 1) << 10) |
-        (((rows[rd + (cc >>> 5)] >>> cc) & 1) << 11);
-      pairs += FOUR[3 * mask];
-      triples += FOUR[3 * mask + 1];
-      quads += FOUR[3 * mask + 2];
-      continue;
-    }
     if (x1 === 0) expand1(rows, 0, 2, x0, depth + 1);
     else if (x0 === 0) expand1(rows, 65, 2, x1, depth + 1);
     else expand2(rows, x0, x1, depth + 1);
   }
-  produced[0] += pairs + triples + quads;
+  produced[0] += pairs + triples;
   if (pairs !== 0) cnt[depth + 2] += pairs;
   if (triples !== 0) cnt[depth + 3] += triples;
-  if (quads !== 0) cnt[depth + 4] += quads;
   if (produced[0] > budget) fail(depth);
 }
 

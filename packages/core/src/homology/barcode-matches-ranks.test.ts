@@ -94,7 +94,7 @@ describe("barcode against direct ranks", () => {
 
 describe("barcode against direct ranks on larger complete graphs", () => {
   // Complete graphs of 18–24 vertices with random weights make long reductions: stored columns are
-  // rebuilt from their chains or read back, and the working column merges its pending additions.
+  // regenerated from their chains many times over, and the lazy column widens its horizon repeatedly.
   for (const [n, seed, prime] of [
     [18, 3, 2],
     [20, 4, 2],

@@ -1,27 +1,20 @@
 import type { ByteLedger } from "./homology-budget.js";
 
+const COLUMN_BYTES = 12; // chainStart, chainLength, pivotCoef
+const CHAIN_ENTRY_BYTES = 20; // key (f64), f (f64), coefficient (i32)
+
 /**
- * Finished columns of the coboundary reduction, each owning one pivot, in up to two forms:
- * - the chain: the simplices (key, f, coefficient) whose coboundaries sum to the column — short on most
- *   data, and the column is rebuilt from it on demand;
- * - the reduced entries themselves (f, key, coefficient) in filtration order, pivot first — kept when
- *   rebuilding would cost more than reading them, or when the chain grew too long to track.
- * At least one form is present.
+ * Finished columns of the coboundary reduction, each owning one pivot. A column is kept as its chain only:
+ * the simplices (key, f, coefficient) whose coboundaries sum to it, short on most data; the reduction
+ * regenerates the column's entries from the chain when it needs them (implicit reduction).
  */
 export class ColumnStore {
-  /** Reduced entries: start in the entry pool, or -1 when not kept. */
-  entryStart: Int32Array;
-  entryLength: Int32Array;
-  /** Chain: start in the chain pool, or -1 when not tracked. */
+  /** Chain of column id: start in the chain pool, and length. */
   chainStart: Int32Array;
   chainLength: Int32Array;
   /** Coefficient of the pivot in the column. */
   pivotCoef: Int32Array;
   columns = 0;
-  entryF: Float64Array;
-  entryKey: Float64Array;
-  entryCoef: Int32Array;
-  entriesUsed = 0;
   chainKey: Float64Array;
   chainF: Float64Array;
   chainCoef: Int32Array;
@@ -30,26 +23,19 @@ export class ColumnStore {
 
   constructor(ledger: ByteLedger) {
     this.ledger = ledger;
-    ledger.reserve(256 * 20 + 2048 * 20, "storing reduced columns");
-    this.entryStart = new Int32Array(256);
-    this.entryLength = new Int32Array(256);
+    ledger.reserve(256 * COLUMN_BYTES + 1024 * CHAIN_ENTRY_BYTES, "storing reduced columns");
     this.chainStart = new Int32Array(256);
     this.chainLength = new Int32Array(256);
     this.pivotCoef = new Int32Array(256);
-    this.entryF = new Float64Array(1024);
-    this.entryKey = new Float64Array(1024);
-    this.entryCoef = new Int32Array(1024);
     this.chainKey = new Float64Array(1024);
     this.chainF = new Float64Array(1024);
     this.chainCoef = new Int32Array(1024);
   }
 
-  /** Opens a column; then give it a chain (setChain), entries (appendEntry), or both. */
+  /** Opens a column with its pivot's coefficient; then give it its chain with setChain. */
   open(pivotCoef: number): number {
-    if (this.columns === this.entryStart.length) this.growColumns();
+    if (this.columns === this.chainStart.length) this.growColumns();
     const id = this.columns++;
-    this.entryStart[id] = -1;
-    this.entryLength[id] = 0;
     this.chainStart[id] = -1;
     this.chainLength[id] = 0;
     this.pivotCoef[id] = pivotCoef;
@@ -66,42 +52,21 @@ export class ColumnStore {
     this.chainUsed += length;
   }
 
-  /** Appends one reduced entry to column `id`, which must be the last column opened. */
-  appendEntry(id: number, f: number, key: number, coef: number): void {
-    if (this.entriesUsed === this.entryF.length) this.growEntries();
-    if (this.entryStart[id] < 0) this.entryStart[id] = this.entriesUsed;
-    this.entryF[this.entriesUsed] = f;
-    this.entryKey[this.entriesUsed] = key;
-    this.entryCoef[this.entriesUsed] = coef;
-    this.entriesUsed++;
-    this.entryLength[id]++;
-  }
-
   dispose(): void {
-    this.ledger.release(this.entryStart.length * 20 + this.entryF.length * 20 + this.chainKey.length * 20);
+    this.ledger.release(this.chainStart.length * COLUMN_BYTES + this.chainKey.length * CHAIN_ENTRY_BYTES);
   }
 
   private growColumns(): void {
-    const size = this.entryStart.length * 2;
-    this.ledger.reserve(this.entryStart.length * 20, "storing reduced columns");
-    this.entryStart = grownInt(this.entryStart, size);
-    this.entryLength = grownInt(this.entryLength, size);
+    const size = this.chainStart.length * 2;
+    this.ledger.reserve(this.chainStart.length * COLUMN_BYTES, "storing reduced columns");
     this.chainStart = grownInt(this.chainStart, size);
     this.chainLength = grownInt(this.chainLength, size);
     this.pivotCoef = grownInt(this.pivotCoef, size);
   }
 
-  private growEntries(): void {
-    const size = this.entryF.length * 2;
-    this.ledger.reserve(this.entryF.length * 20, "storing reduced columns");
-    this.entryF = grownFloat(this.entryF, size);
-    this.entryKey = grownFloat(this.entryKey, size);
-    this.entryCoef = grownInt(this.entryCoef, size);
-  }
-
   private growChains(): void {
     const size = this.chainKey.length * 2;
-    this.ledger.reserve(this.chainKey.length * 20, "storing reduced columns");
+    this.ledger.reserve(this.chainKey.length * CHAIN_ENTRY_BYTES, "storing reduced columns");
     this.chainKey = grownFloat(this.chainKey, size);
     this.chainF = grownFloat(this.chainF, size);
     this.chainCoef = grownInt(this.chainCoef, size);

@@ -1,7 +1,7 @@
 import { sweepSimplexCounts } from "../count/sweep-simplex-counts.js";
 import type { SweepCounts } from "../count/types.js";
 import type { ThresholdGrid } from "../filtration/threshold-grid.js";
-import { toFiltrationValue, type WeightSemantics } from "../filtration/weight-semantics.js";
+import type { WeightSemantics } from "../filtration/weight-semantics.js";
 import { thresholdSubgraph } from "../graph/threshold-subgraph.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
 import type { Barcode } from "../homology/barcode.js";
@@ -91,14 +91,6 @@ export function topologicalFeatures(
     const betti = bettiCurves(barcode, grid);
     for (let t = 0; t < T; t++)
       for (let k = 0; k < topDim; k++) curves[(topDim + 1 + k) * T + t] = betti[t][k];
-    // The barcode's vertices are born when the filtration starts (the largest weight for similarities), but
-    // the count sweep has them at every threshold. A threshold before the start keeps no edge — density 0
-    // under similarity weights, say — so read it as the n isolated vertices the counts show, keeping
-    // χ = Σ (−1)^k β_k true in every row.
-    const start = toFiltrationValue(barcode.start, semantics);
-    for (let t = 0; t < T; t++) {
-      if (toFiltrationValue(grid.thresholds[t], semantics) < start) curves[(topDim + 1) * T + t] = graph.n;
-    }
   }
 
   const values: number[] = [];

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
+import { explicitGrid } from "../filtration/threshold-grid.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import { bettiAt } from "./betti-at.js";
-import { bettiFromBarcode } from "./betti-curves.js";
+import { bettiCurves, bettiFromBarcode } from "./betti-curves.js";
 import { computeBarcode } from "./compute-barcode.js";
 import { HomologyBudgetError } from "./homology-budget.js";
 
@@ -42,6 +43,21 @@ describe("computeBarcode", () => {
     expect(barcode.bars.filter((b) => b.dim === 1)).toEqual([]);
     expect(barcode.bars.filter((b) => b.dim === 0).map((b) => b.death)).toEqual([4, 2, null]);
     expect(barcode.start).toBe(5);
+  });
+
+  it("reads a threshold before the filtration start as n isolated vertices, as the counts do", () => {
+    // Similarity weights start at 5; at 6 no edge is in: four components, no loop (χ = 4 = β0).
+    const barcode = computeBarcode(square, { semantics: "similarity", maxDim: 1 });
+    expect(bettiFromBarcode(barcode, 6)).toEqual([4, 0]);
+    const curves = bettiCurves(barcode, explicitGrid([6, 5, 4.5], "similarity")).map((row) =>
+      Array.from(row),
+    );
+    // At 5 the diagonal 0-2 is in: three components; at 4.5 still three.
+    expect(curves).toEqual([
+      [4, 0],
+      [3, 0],
+      [3, 0],
+    ]);
   });
 
   it("keeps zero-length bars only when asked", () => {

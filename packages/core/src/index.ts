@@ -1,20 +1,13 @@
-export type { WeightedGraph } from "./graph/weighted-graph.js";
-export { density, edgeCount, nodeLabel, possibleEdgeCount } from "./graph/weighted-graph.js";
-export { thresholdSubgraph } from "./graph/threshold-subgraph.js";
-export { GraphInputError } from "./graph/graph-input-error.js";
-export type { GraphInputLocation, GraphInputProblem } from "./graph/graph-input-error.js";
-export type { NegativePolicy, SymmetrizePolicy, WarningSink } from "./graph/policies.js";
-export { fromEdgeList } from "./graph/from-edge-list.js";
-export type { EdgeListInput } from "./graph/from-edge-list.js";
-export { fromDenseMatrix } from "./graph/from-dense-matrix.js";
-export type { DenseMatrixOptions } from "./graph/from-dense-matrix.js";
-export { fromGraphology } from "./graph/from-graphology.js";
-export type { GraphologyOptions } from "./graph/from-graphology.js";
-
-export { fromFiltrationValue, toFiltrationValue } from "./filtration/weight-semantics.js";
-export type { WeightSemantics } from "./filtration/weight-semantics.js";
-export { edgeFiltration, filtrationStart } from "./filtration/edge-filtration.js";
+export type { CountSimplicesOptions } from "./count/count-simplices.js";
+export { countSimplices } from "./count/count-simplices.js";
+export { DEFAULT_SIMPLEX_BUDGET } from "./count/defaults.js";
+export { SimplexBudgetError } from "./count/simplex-budget-error.js";
+export { sweepSimplexCounts } from "./count/sweep-simplex-counts.js";
+export type { CountOptions, NodeParticipation, SimplexCounts, SweepCounts } from "./count/types.js";
+export * from "./features/index.js";
 export { edgeBins } from "./filtration/edge-bins.js";
+export { edgeFiltration, filtrationStart } from "./filtration/edge-filtration.js";
+export type { ThresholdGrid } from "./filtration/threshold-grid.js";
 export {
   allEdgesGrid,
   densityGrid,
@@ -22,14 +15,19 @@ export {
   explicitGrid,
   gridFiltrationValues,
 } from "./filtration/threshold-grid.js";
-export type { ThresholdGrid } from "./filtration/threshold-grid.js";
+export type { WeightSemantics } from "./filtration/weight-semantics.js";
 
-export { countSimplices } from "./count/count-simplices.js";
-export type { CountSimplicesOptions } from "./count/count-simplices.js";
-export { sweepSimplexCounts } from "./count/sweep-simplex-counts.js";
-export { SimplexBudgetError } from "./count/simplex-budget-error.js";
-export { DEFAULT_SIMPLEX_BUDGET } from "./count/defaults.js";
-export type { CountOptions, NodeParticipation, SimplexCounts, SweepCounts } from "./count/types.js";
-
+export { fromFiltrationValue, toFiltrationValue } from "./filtration/weight-semantics.js";
+export type { DenseMatrixOptions } from "./graph/from-dense-matrix.js";
+export { fromDenseMatrix } from "./graph/from-dense-matrix.js";
+export type { EdgeListInput } from "./graph/from-edge-list.js";
+export { fromEdgeList } from "./graph/from-edge-list.js";
+export type { GraphologyOptions } from "./graph/from-graphology.js";
+export { fromGraphology } from "./graph/from-graphology.js";
+export type { GraphInputLocation, GraphInputProblem } from "./graph/graph-input-error.js";
+export { GraphInputError } from "./graph/graph-input-error.js";
+export type { NegativePolicy, SymmetrizePolicy, WarningSink } from "./graph/policies.js";
+export { thresholdSubgraph } from "./graph/threshold-subgraph.js";
+export type { WeightedGraph } from "./graph/weighted-graph.js";
+export { density, edgeCount, nodeLabel, possibleEdgeCount } from "./graph/weighted-graph.js";
 export * from "./homology/index.js";
-export * from "./features/index.js";

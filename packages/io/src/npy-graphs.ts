@@ -1,8 +1,9 @@
 import { fromDenseMatrix, GraphInputError, type WeightedGraph } from "@cliquescape/core";
+import { checkMatrixSize } from "./check-matrix-size.js";
 import { InputFileError } from "./input-file-error.js";
 import { readElement } from "./npy-dtype.js";
 import { type NpyArray, npyElementOffset, npyStrides } from "./parse-npy.js";
-import { DEFAULT_MAX_CELLS, type GraphReadOptions, zeroIsEdge } from "./read-options.js";
+import { type GraphReadOptions, zeroIsEdge } from "./read-options.js";
 
 /** Graphs read from one file: one for a matrix, k for a stack. */
 export interface GraphsReadResult {
@@ -32,14 +33,7 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
   if (shape[shape.length - 2] !== n) {
     throw new InputFileError(file, "not-square", `matrices of shape ${shapeText} are not square`);
   }
-  const maxCells = options.maxCells ?? DEFAULT_MAX_CELLS;
-  if (n * n > maxCells) {
-    throw new InputFileError(
-      file,
-      "too-large",
-      `a ${n}×${n} matrix has ${n * n} cells, more than the limit of ${maxCells}; raise maxCells if you have the memory`,
-    );
-  }
+  checkMatrixSize(n, options, file);
   if (options.labels && options.labels.length !== n) {
     throw new InputFileError(
       file,

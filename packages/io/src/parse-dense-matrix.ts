@@ -1,7 +1,8 @@
 import { fromDenseMatrix, GraphInputError, type WeightedGraph } from "@cliquescape/core";
+import { checkMatrixSize } from "./check-matrix-size.js";
 import { describePosition, InputFileError, type InputFilePosition } from "./input-file-error.js";
 import { classifyCell, looksNumeric } from "./parse-number.js";
-import { DEFAULT_MAX_CELLS, type GraphReadOptions, zeroIsEdge } from "./read-options.js";
+import { type GraphReadOptions, zeroIsEdge } from "./read-options.js";
 import { type Delimiter, detectDelimiter, type TextRow, textRows } from "./text-rows.js";
 
 export interface DenseMatrixTextOptions extends GraphReadOptions {
@@ -58,15 +59,7 @@ export function parseDenseMatrixText(
   const width = first.cells.length;
   const n = width - skip;
   if (n < 1) throw new InputFileError(file, "not-square", "matrix has no columns", { line: first.line });
-  const maxCells = options.maxCells ?? DEFAULT_MAX_CELLS;
-  if (n * n > maxCells) {
-    throw new InputFileError(
-      file,
-      "too-large",
-      `a ${n}×${n} matrix has ${n * n} cells, more than the limit of ${maxCells}; raise maxCells if you have the memory`,
-      { line: first.line },
-    );
-  }
+  checkMatrixSize(n, options, file, { line: first.line });
 
   const zeroEdge = zeroIsEdge(options);
   const values = new Float64Array(n * n);

@@ -9,7 +9,7 @@ import { describe, expect, it } from "vitest";
 import { edgesOf, significant } from "../support/graph-ops.js";
 import { octahedronSurface, type TriangulatedSurface, torusGrid4x4 } from "../support/known-graphs.js";
 import { missingPythonModules, runPythonScript } from "../support/python.js";
-import { describeSurface, type Face } from "../support/surfaces.js";
+import { describeSurface, type Face, projectivePlane6 } from "../support/surfaces.js";
 
 const missing = missingPythonModules(["networkx"]);
 
@@ -107,20 +107,8 @@ describe.each(SPACES)("$name", ({ surface, counts, euler }) => {
 
 describe("the surface checks can fail", () => {
   it("recognise the 6-vertex projective plane as closed, non-orientable, χ = 1", () => {
-    // Recalled from memory: the 6-vertex triangulation of RP² (half of the icosahedron); the checks here
-    // confirm it is a closed surface with χ = 1, which is RP² by the classification (Massey 1991).
-    const faces: Face[] = [
-      [0, 1, 2],
-      [0, 2, 3],
-      [0, 3, 4],
-      [0, 4, 5],
-      [0, 5, 1],
-      [1, 2, 4],
-      [2, 3, 5],
-      [3, 4, 1],
-      [4, 5, 2],
-      [5, 1, 3],
-    ];
+    // The 6-vertex RP² (test/support/surfaces.ts, recalled from memory); checked here to be what it claims.
+    const faces = projectivePlane6;
     const report = describeSurface(6, faces);
     expect(report).toMatchObject({
       everyEdgeInTwoFaces: true,

@@ -14,7 +14,7 @@ import {
 import { describe, expect, it } from "vitest";
 import { octahedronSurface, torusGrid4x4 } from "../support/known-graphs.js";
 import { seededRandom } from "../support/random.js";
-import { describeSurface, type Face } from "../support/surfaces.js";
+import { describeSurface, type Face, projectivePlane6 } from "../support/surfaces.js";
 
 /** The graph with fresh random weights in [1, 2) on its edges (same edges). */
 function reweighted(graph: WeightedGraph, seed: number): WeightedGraph {
@@ -110,18 +110,7 @@ function kleinBottle4x4(): Face[] {
  * per flag vertex ⊂ edge ⊂ face. A barycentric subdivision is a flag complex (common practice: it is the
  * order complex of the face poset), so it is the clique complex of its 1-skeleton.
  */
-const rp2Faces: Face[] = [
-  [0, 1, 2],
-  [0, 2, 3],
-  [0, 3, 4],
-  [0, 4, 5],
-  [0, 5, 1],
-  [1, 2, 4],
-  [2, 3, 5],
-  [3, 4, 1],
-  [4, 5, 2],
-  [5, 1, 3],
-];
+const rp2Faces = projectivePlane6;
 
 function barycentricSubdivision(faces: readonly Face[]): { n: number; faces: Face[] } {
   const ids = new Map<string, number>();

@@ -112,3 +112,22 @@ function orient(faces: readonly Face[], facesOfEdge: Map<string, number[]>) {
 function runs(face: Face, from: number, to: number): boolean {
   return facePairs(face).some(([a, b]) => a === from && b === to);
 }
+
+/**
+ * The 6-vertex triangulation of the real projective plane (the antipodal quotient of the icosahedron).
+ * Recalled from memory; the tests that use it first check it is a closed, non-orientable surface with
+ * χ = 1, which is RP² by the classification of surfaces (W. S. Massey, A Basic Course in Algebraic
+ * Topology, 1991).
+ */
+export const projectivePlane6: readonly Face[] = [
+  [0, 1, 2],
+  [0, 2, 3],
+  [0, 3, 4],
+  [0, 4, 5],
+  [0, 5, 1],
+  [1, 2, 4],
+  [2, 3, 5],
+  [3, 4, 1],
+  [4, 5, 2],
+  [5, 1, 3],
+];

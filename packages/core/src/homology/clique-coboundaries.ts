@@ -34,6 +34,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
   private readonly ptr: Int32Array;
   private readonly pairF: Float64Array;
   private readonly rows: Int32Array;
+  private readonly bandEnd: Int32Array;
 
   /** `edgeF` is the filtration value per CSR slot; `maxVertices` the largest simplex (maxDim + 2). */
   constructor(
@@ -87,6 +88,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
     this.high = new Float64Array(maxVertices + 2);
     this.ptr = new Int32Array(maxVertices + 1);
     this.rows = new Int32Array(maxVertices + 1);
+    this.bandEnd = new Int32Array(maxVertices + 1);
     this.pairF = new Float64Array((maxVertices + 1) * (maxVertices + 1));
   }
 
@@ -185,6 +187,12 @@ export class CliqueCoboundaries implements CoboundaryModel {
       let j = 0;
       const horizon = sink.horizon ?? Number.POSITIVE_INFINITY;
       const bandLow = sink.bandLow ?? Number.NEGATIVE_INFINITY;
+      const floor = sink.floor ?? Number.NEGATIVE_INFINITY;
+      if (
+        (floor > f || bandLow > f) &&
+        this.pushBand(count, f, factor, negative, floor, bandLow, horizon, sink)
+      )
+        return;
       if (horizon !== Number.POSITIVE_INFINITY) {
         // Only neighbours v of σ's vertex with the fewest edges ≤ horizon can give cofaces ≤ horizon.
         const sorted = this.rowSorted as Float64Array;
@@ -278,6 +286,85 @@ export class CliqueCoboundaries implements CoboundaryModel {
         (j & 1) === 0 ? factor : negative,
       );
     }
+  }
+
+  /**
+   * Dense sweep of the cofaces with a value in the band [floor, horizon] (and > bandLow) when that band
+   * starts above σ's value f: such a coface σ ∪ {v} has an edge {s_i, v} in the band, and the edges of
+   * each row in the band are a contiguous run of its sorted order. v is emitted from the first row whose
+   * edge reaches the band. False (nothing pushed) when the runs are too long to beat a full sweep.
+   * Expects prepareCofaceKeys to have run.
+   */
+  private pushBand(
+    count: number,
+    f: number,
+    factor: number,
+    negative: number,
+    floor: number,
+    bandLow: number,
+    horizon: number,
+    sink: CofaceSink,
+  ): boolean {
+    const n = this.n;
+    const m = this.dense as Float64Array;
+    const sorted = this.rowSorted as Float64Array;
+    const order = this.rowOrder as Int32Array;
+    const s = this.s;
+    const rows = this.rows;
+    const ptr = this.ptr;
+    const ends = this.bandEnd;
+    let total = 0;
+    for (let i = 0; i < count; i++) {
+      const base = s[i] * n;
+      rows[i] = base;
+      // First rank with value ≥ floor and > bandLow.
+      let lo = 0;
+      let hi = n;
+      while (lo < hi) {
+        const mid = (lo + hi) >>> 1;
+        const x = sorted[base + mid];
+        if (x < floor || x <= bandLow) lo = mid + 1;
+        else hi = mid;
+      }
+      ptr[i] = lo;
+      // First rank with value > horizon (or infinite: absent edge).
+      hi = n;
+      while (lo < hi) {
+        const mid = (lo + hi) >>> 1;
+        const x = sorted[base + mid];
+        if (x <= horizon && x !== Infinity) lo = mid + 1;
+        else hi = mid;
+      }
+      ends[i] = lo;
+      total += lo - ptr[i];
+    }
+    if (total * 2 > n) return false;
+    const low = this.low;
+    const high = this.high;
+    const values = this.binom.values;
+    const row = this.row;
+    for (let i = 0; i < count; i++) {
+      const base = rows[i];
+      for (let r = ptr[i]; r < ends[i]; r++) {
+        const v = order[base + r];
+        let fv = f;
+        let earlier = false;
+        for (let k = 0; k < count; k++) {
+          const x = m[rows[k] + v];
+          if (k < i && x >= floor && x > bandLow) {
+            earlier = true;
+            break;
+          }
+          if (x > fv) fv = x;
+        }
+        if (earlier || fv > horizon || fv === Infinity) continue;
+        let jv = 0;
+        while (jv < count && s[jv] < v) jv++;
+        if (jv < count && s[jv] === v) continue;
+        sink.push(fv, low[jv] + values[(jv + 1) * row + v] + high[jv], (jv & 1) === 0 ? factor : negative);
+      }
+    }
+    return true;
   }
 
   zeroCoface(dim: number, key: number, f: number): number {

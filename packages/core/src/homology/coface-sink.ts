@@ -4,4 +4,6 @@ export interface CofaceSink {
   /** When set, entries with f > horizon or f ≤ bandLow are dropped by push; producers may skip them early. */
   readonly horizon?: number;
   readonly bandLow?: number;
+  /** When set, entries with f < floor are dropped by push (entries at f = floor may still be kept). */
+  readonly floor?: number;
 }

@@ -61,6 +61,11 @@ export class LazyColumn implements CofaceSink {
     return this.horizon !== Number.POSITIVE_INFINITY;
   }
 
+  /** Entries with f below this are dropped by push (those at it are compared by key). */
+  get floor(): number {
+    return this.floorF;
+  }
+
   get size(): number {
     return this.heap.size;
   }

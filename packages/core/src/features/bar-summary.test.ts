@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { fromEdgeList } from "../graph/from-edge-list.js";
 import { computeBarcode } from "../homology/compute-barcode.js";
 import { persistenceEntropy, summarizeBars } from "./bar-summary.js";
+import { weightedSquare } from "./weighted-square.fixture.js";
 
 describe("persistenceEntropy", () => {
   it("is ln m for m bars of equal length (follows from the definition H = −Σ p ln p with p = 1/m)", () => {
@@ -26,13 +26,7 @@ describe("persistenceEntropy", () => {
 describe("summarizeBars", () => {
   // A square 0-1-2-3 with distances 1, 2, 3, 4 and the diagonal 0-2 at 5 (hand-computed; common practice):
   // H0: four components born at 0, three die at 1, 2, 3, one never dies; H1: one loop born at 4, killed at 5.
-  const square = fromEdgeList({
-    n: 4,
-    sources: [0, 1, 2, 3, 0],
-    targets: [1, 2, 3, 0, 2],
-    weights: [1, 2, 3, 4, 5],
-    directed: false,
-  });
+  const square = weightedSquare();
 
   it("summarises H0 and H1 of a weighted square (distance weights)", () => {
     const barcode = computeBarcode(square, { semantics: "distance", maxDim: 1 });
@@ -55,13 +49,7 @@ describe("summarizeBars", () => {
 
   it("measures persistence in weight units when thresholds go down (similarity weights)", () => {
     // Weights 6 − w: edges enter in the same order, so the loop is born at 2 and dies at 1.
-    const mirrored = fromEdgeList({
-      n: 4,
-      sources: [0, 1, 2, 3, 0],
-      targets: [1, 2, 3, 0, 2],
-      weights: [5, 4, 3, 2, 1],
-      directed: false,
-    });
+    const mirrored = weightedSquare(true);
     const barcode = computeBarcode(mirrored, { semantics: "similarity", maxDim: 1 });
     expect(summarizeBars(barcode, 1)).toMatchObject({ count: 1, totalPersistence: 1, maxPersistence: 1 });
     // Similarity filtrations start at the largest weight (5), where the first merge happens at once: that

@@ -9,8 +9,8 @@ import {
 } from "../../../../test/support/known-graphs.js";
 import { seededRandom } from "../../../../test/support/random.js";
 import { countSimplices } from "../count/count-simplices.js";
-import { fromEdgeList } from "../graph/from-edge-list.js";
 import { nodeEdgeFeatures } from "./node-edge-features.js";
+import { weightedSquare } from "./weighted-square.fixture.js";
 
 /** Column `name` of a row-major table with the given column names. */
 function column(table: Float32Array, names: string[], name: string): number[] {
@@ -111,13 +111,7 @@ describe("nodeEdgeFeatures", () => {
 
   it("keeps only the edges present at the threshold, for degrees, strengths and edge_index", () => {
     // Square 0-1-2-3 with distances 1, 2, 3, 4 and diagonal 0-2 at 5; at threshold 3 the path 0-1-2-3 is left.
-    const square = fromEdgeList({
-      n: 4,
-      sources: [0, 1, 2, 3, 0],
-      targets: [1, 2, 3, 0, 2],
-      weights: [1, 2, 3, 4, 5],
-      directed: false,
-    });
+    const square = weightedSquare();
     const f = nodeEdgeFeatures(square, { topDim: 2, threshold: 3, semantics: "distance" });
     expect(column(f.x, f.nodeFeatureNames, "degree")).toEqual([1, 2, 2, 1]);
     expect(column(f.x, f.nodeFeatureNames, "strength")).toEqual([1, 3, 5, 3]);

@@ -17,6 +17,7 @@ import { axisGrid, type FeatureAxis } from "./feature-axis.js";
 import { DEFAULT_FEATURE_CONFIG, type FeatureConfig } from "./feature-config.js";
 import { topologicalFeatureNames } from "./feature-names.js";
 import { topologicalFeatures } from "./topological-features.js";
+import { weightedSquare } from "./weighted-square.fixture.js";
 
 /** The feature row as a name → value map, so checks read like the columns a user sees. */
 function row(
@@ -38,13 +39,7 @@ function columnValue(names: string[], values: Float64Array, name: string): numbe
 }
 
 // A square 0-1-2-3 with distances 1, 2, 3, 4 and the diagonal 0-2 at 5 (hand-computed; common practice).
-const square = fromEdgeList({
-  n: 4,
-  sources: [0, 1, 2, 3, 0],
-  targets: [1, 2, 3, 0, 2],
-  weights: [1, 2, 3, 4, 5],
-  directed: false,
-});
+const square = weightedSquare();
 
 const onlyTopology = (families: Partial<FeatureConfig["families"]>, topDim = 3): FeatureConfig => ({
   topDim,
@@ -182,13 +177,7 @@ describe("topologicalFeatures", () => {
 
   it("gives the same curves for similarity weights read along a descending axis", () => {
     // Weights 6 − w enter in the same order under similarity semantics.
-    const mirrored = fromEdgeList({
-      n: 4,
-      sources: [0, 1, 2, 3, 0],
-      targets: [1, 2, 3, 0, 2],
-      weights: [5, 4, 3, 2, 1],
-      directed: false,
-    });
+    const mirrored = weightedSquare(true);
     const config = onlyTopology({ simplexCounts: true, euler: true, betti: true });
     // Axes start at the first edge: the filtration of similarity weights only starts at the largest weight.
     const distance = topologicalFeatures(square, {

@@ -252,7 +252,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
           if (x0 > fv) fv = x0;
           if (x1 > fv) fv = x1;
           if (x2 > fv) fv = x2;
-          if (fv > horizon || fv <= bandLow) continue;
+          if (fv === Infinity || fv > horizon || fv <= bandLow) continue;
           sink.push(fv, low[j] + values[(j + 1) * row + v] + high[j], (j & 1) === 0 ? factor : negative);
         }
         return;

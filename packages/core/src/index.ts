@@ -31,3 +31,5 @@ export { thresholdSubgraph } from "./graph/threshold-subgraph.js";
 export type { WeightedGraph } from "./graph/weighted-graph.js";
 export { density, edgeCount, nodeLabel, possibleEdgeCount } from "./graph/weighted-graph.js";
 export * from "./homology/index.js";
+export { describeProgress, TimeLimitError } from "./work/time-limit-error.js";
+export type { WorkControl, WorkProgress, WorkStage } from "./work/work-control.js";

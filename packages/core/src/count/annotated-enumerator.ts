@@ -1,4 +1,6 @@
+import type { WorkMonitor } from "../work/work-monitor.js";
 import { checkLocalSize } from "./bitset-counter.js";
+import { CHECK_EVERY } from "./count-limits.js";
 import type { EnumerationGraph } from "./enumeration-graph.js";
 import { popcount32 } from "./popcount.js";
 import { rootProgress, SimplexBudgetError } from "./simplex-budget-error.js";
@@ -20,6 +22,8 @@ import { rootProgress, SimplexBudgetError } from "./simplex-budget-error.js";
 export interface AnnotateOptions {
   maxDim: number;
   budget: number;
+  /** Clock and progress of the computation. */
+  monitor: WorkMonitor;
   /** Bin per input CSR slot (all listed edges have bin ≥ 0), or null for a single bin. */
   bins: Int32Array | null;
   binCount: number;
@@ -67,6 +71,9 @@ let capDim = 0;
 let truncated = false;
 const produced = new Float64Array(1); // a typed cell: no boxing in the hot loop
 let budget = 0;
+/** Simplex count at which the budget and the clock are next checked (≤ budget). */
+let checkpoint = 0;
+let monitor: WorkMonitor | null = null;
 let rootIndex = -1; // root being enumerated (-1: before the first)
 let rootOffsets: Int32Array = new Int32Array(1);
 let withBins = false;
@@ -118,6 +125,8 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
   undirected = !g.directed;
   truncated = false;
   budget = o.budget;
+  monitor = o.monitor;
+  checkpoint = 0;
   produced[0] = n;
   rootIndex = -1;
   rootOffsets = offsets;
@@ -140,7 +149,7 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
   }
   hist[0] = n;
   run[0] = n;
-  if (produced[0] > budget) fail(false);
+  if (produced[0] > checkpoint) passCheckpoint(false);
   if (capDim < 1) {
     truncated = offsets[n] > 0;
     return finish();
@@ -174,6 +183,7 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
     }
     for (let i = 0; i < d; i++) mark[targets[a + i]] = -1;
     rootIndex = v;
+    if ((v & 255) === 0) o.monitor.check(v);
     for (let k = 0; k < W; k++) stack[k] = 0;
     for (let i = 0; i < d; i++) {
       stack[i >>> 5] |= 1 << (i & 31);
@@ -337,7 +347,7 @@ function grow(level: number, at: number, simplexBin: number): void {
   }
   run[dim] += made;
   produced[0] += made;
-  if (produced[0] > budget) fail(level === 0);
+  if (produced[0] > checkpoint) passCheckpoint(level === 0);
 }
 
 /**
@@ -418,7 +428,7 @@ function grow1(level: number, cand: number, simplexBin: number, word: number): v
   if (above !== 0) run[dim + 1] += above;
   if (aboveTwo !== 0) run[dim + 2] += aboveTwo;
   produced[0] += made + above + aboveTwo;
-  if (produced[0] > budget) fail(level === 0);
+  if (produced[0] > checkpoint) passCheckpoint(level === 0);
 }
 
 /**
@@ -525,7 +535,7 @@ function growPacked(level: number, cand: number, simplexBin: number): void {
   if (above !== 0) run[dim + 1] += above;
   if (aboveTwo !== 0) run[dim + 2] += aboveTwo;
   produced[0] += made + above + aboveTwo;
-  if (produced[0] > budget) fail(false);
+  if (produced[0] > checkpoint) passCheckpoint(false);
 }
 
 /** Saves run[lo..hi] on the snapshot stack; returns where it starts. */
@@ -613,6 +623,13 @@ function finish(): AnnotatedResult {
   }
   if (creditEdges) result.edges = cut(edges, slotCount);
   return result;
+}
+
+/** Past a checkpoint: stop on the budget or the clock, else set the next checkpoint. */
+function passCheckpoint(rootDone: boolean): void {
+  if (produced[0] > budget) fail(rootDone);
+  monitor?.check(rootIndex + 1);
+  checkpoint = Math.min(budget, produced[0] + CHECK_EVERY);
 }
 
 /** `rootDone`: the check after a root's top-level expansion, so that root is finished. */

@@ -1,3 +1,5 @@
+import type { WorkMonitor } from "../work/work-monitor.js";
+import { CHECK_EVERY } from "./count-limits.js";
 import type { EnumerationGraph } from "./enumeration-graph.js";
 import { popcount32 } from "./popcount.js";
 import { rootProgress, SimplexBudgetError } from "./simplex-budget-error.js";
@@ -42,6 +44,9 @@ let capDim = 0; // highest dimension counted
 let truncated = false;
 const produced = new Float64Array(1); // simplices counted so far, for the budget (a typed cell: no boxing)
 let budget = 0;
+/** Simplex count at which the budget and the clock are next checked (≤ budget). */
+let checkpoint = 0;
+let monitor: WorkMonitor | null = null;
 let rootIndex = -1; // root being enumerated (-1: before the first)
 let rootOffsets: Int32Array = new Int32Array(1);
 let nRoots = 0;
@@ -51,7 +56,12 @@ export interface PlainCounts {
   truncated: boolean;
 }
 
-export function countWithBitsets(g: EnumerationGraph, maxDim: number, simplexBudget: number): PlainCounts {
+export function countWithBitsets(
+  g: EnumerationGraph,
+  maxDim: number,
+  simplexBudget: number,
+  work: WorkMonitor,
+): PlainCounts {
   const { n, offsets, targets, maxList } = g;
   const dmax = Math.max(maxList, 1);
   const wmax = (dmax + 31) >>> 5;
@@ -67,6 +77,8 @@ export function countWithBitsets(g: EnumerationGraph, maxDim: number, simplexBud
   undirected = !g.directed;
   truncated = false;
   budget = simplexBudget;
+  monitor = work;
+  checkpoint = 0;
   produced[0] = n;
   cnt[0] = n;
   rootIndex = -1;
@@ -75,7 +87,7 @@ export function countWithBitsets(g: EnumerationGraph, maxDim: number, simplexBud
   if (capDim >= 1) cnt[1] = offsets[n];
   else truncated = offsets[n] > 0;
   produced[0] += capDim >= 1 ? offsets[n] : 0;
-  if (produced[0] > budget) fail(0);
+  if (produced[0] > checkpoint) passCheckpoint(0);
 
   const mark = new Int32Array(n).fill(-1);
   for (let v = 0; v < n; v++) {
@@ -110,6 +122,7 @@ export function countWithBitsets(g: EnumerationGraph, maxDim: number, simplexBud
     }
     for (let i = 0; i < d; i++) mark[targets[a + i]] = -1;
     rootIndex = v;
+    if ((v & 255) === 0) work.check(v);
     runLocal(d);
   }
   let top = cnt.length - 1;
@@ -197,7 +210,7 @@ function expand1(rows: Int32Array, base: number, stride: number, cand: number, d
       produced[0] += triples;
     }
   }
-  if (produced[0] > budget) fail(depth);
+  if (produced[0] > checkpoint) passCheckpoint(depth);
 }
 
 /**
@@ -326,7 +339,7 @@ function expand2(rows: Int32Array, c0: number, c1: number, depth: number): void 
   produced[0] += pairs + triples;
   if (pairs !== 0) cnt[depth + 2] += pairs;
   if (triples !== 0) cnt[depth + 3] += triples;
-  if (produced[0] > budget) fail(depth);
+  if (produced[0] > checkpoint) passCheckpoint(depth);
 }
 
 function anyEdgeIn2(rows: Int32Array, x0: number, x1: number): boolean {
@@ -387,7 +400,7 @@ function expandWide(rows: Int32Array, Wc: number, at: number, depth: number): vo
   }
   cnt[depth + 1] += total;
   produced[0] += total;
-  if (produced[0] > budget) fail(depth);
+  if (produced[0] > checkpoint) passCheckpoint(depth);
 }
 
 /**
@@ -501,6 +514,13 @@ function anyEdgeInside(rows: Int32Array, Wc: number, at: number): boolean {
     }
   }
   return false;
+}
+
+/** Past a checkpoint: stop on the budget or the clock, else set the next checkpoint. */
+function passCheckpoint(depth: number): void {
+  if (produced[0] > budget) fail(depth);
+  monitor?.check(rootIndex + 1);
+  checkpoint = Math.min(budget, produced[0] + CHECK_EVERY);
 }
 
 /** `depth` 1: the check after a root's top-level expansion, so that root is finished. */

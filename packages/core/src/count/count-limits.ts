@@ -1,6 +1,9 @@
 import { DEFAULT_SIMPLEX_BUDGET } from "./defaults.js";
 import type { CountOptions } from "./types.js";
 
+/** Simplices counted between two checks of the budget and the clock: a slow-path call per million. */
+export const CHECK_EVERY = 2 ** 20;
+
 /** Checks the limits and fills in defaults: no dimension cap, DEFAULT_SIMPLEX_BUDGET simplices. */
 export function resolveLimits(options: CountOptions): { maxDim: number; budget: number } {
   const maxDim = options.maxDim ?? Number.POSITIVE_INFINITY;

@@ -1,6 +1,7 @@
 import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { toFiltrationValue, type WeightSemantics } from "../filtration/weight-semantics.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
+import { WorkMonitor } from "../work/work-monitor.js";
 import { enumerateAnnotated } from "./annotated-enumerator.js";
 import { countWithBitsets } from "./bitset-counter.js";
 import { resolveLimits } from "./count-limits.js";
@@ -37,15 +38,18 @@ export function countSimplices(graph: WeightedGraph, options: CountSimplicesOpti
     for (let s = 0; s < f.length; s++) mask[s] = f[s] <= cut ? 0 : -1;
   }
   const g = buildEnumerationGraph(graph, mask);
+  const monitor = new WorkMonitor(options);
+  monitor.begin("counting simplices", 0, g.n);
   const participation = options.participation === true;
   const edgeParticipation = options.edgeParticipation === true;
   if (!participation && !edgeParticipation) {
-    const { counts, truncated } = countWithBitsets(g, maxDim, budget);
+    const { counts, truncated } = countWithBitsets(g, maxDim, budget, monitor);
     return { counts, euler: eulerCharacteristic(counts), truncated };
   }
   const r = enumerateAnnotated(g, {
     maxDim,
     budget,
+    monitor,
     bins: null,
     binCount: 1,
     participation,

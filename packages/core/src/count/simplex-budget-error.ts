@@ -16,20 +16,19 @@ export class SimplexBudgetError extends Error {
 
   /**
    * `exact`: simplices counted outside the per-root enumeration (e.g. all vertices and edges up front);
-   * the extrapolation scales only the rest.
+   * the extrapolation scales only the rest. `unit`: what `progress` is a share of, when not root vertices.
    */
-  constructor(budget: number, counted: Float64Array, progress: number, exact = 0) {
+  constructor(budget: number, counted: Float64Array, progress: number, exact = 0, unit = "root vertices") {
     const total = counted.reduce((a, b) => a + b, 0);
     const perDim = Array.from(counted, (c, k) => `dim ${k}: ${c}`).join(", ");
     let done: string;
-    if (progress >= 1)
-      done = "with every root vertex done (the count is complete; only the budget is too small)";
+    if (progress >= 1) done = `with all ${unit} done (the count is complete; only the budget is too small)`;
     else {
       const estimate =
         progress > 0
           ? ` (a rough extrapolation: ${(exact + (total - exact) / progress).toExponential(2)} in all)`
           : "";
-      done = `with ${(progress * 100).toFixed(1)}% of root vertices done${estimate}`;
+      done = `with ${(progress * 100).toFixed(1)}% of ${unit} done${estimate}`;
     }
     super(
       `simplex budget of ${budget} exceeded after ${total} simplices ${done}; ` +

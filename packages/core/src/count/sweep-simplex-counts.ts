@@ -2,6 +2,7 @@ import { edgeBins } from "../filtration/edge-bins.js";
 import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { gridFiltrationValues, type ThresholdGrid } from "../filtration/threshold-grid.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
+import { WorkMonitor } from "../work/work-monitor.js";
 import { enumerateAnnotated } from "./annotated-enumerator.js";
 import { resolveLimits } from "./count-limits.js";
 import { buildEnumerationGraph } from "./enumeration-graph.js";
@@ -25,9 +26,12 @@ export function sweepSimplexCounts(
   if (T === 0) return { thresholds, counts: [], euler: new Float64Array(0), truncated: false };
   const bins = edgeBins(edgeFiltration(graph, grid.semantics), gridF);
   const g = buildEnumerationGraph(graph, bins);
+  const monitor = new WorkMonitor(options);
+  monitor.begin("counting simplices", 0, g.n);
   const r = enumerateAnnotated(g, {
     maxDim,
     budget,
+    monitor,
     bins,
     binCount: T,
     participation: false,

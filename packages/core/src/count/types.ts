@@ -1,5 +1,7 @@
-/** Limits shared by every counting entry point. */
-export interface CountOptions {
+import type { WorkControl } from "../work/work-control.js";
+
+/** Limits shared by every counting entry point (time limit and progress included). */
+export interface CountOptions extends WorkControl {
   /** Highest simplex dimension counted; higher ones are ignored and `truncated` is set. Default: no cap. */
   maxDim?: number;
   /**

@@ -1,9 +1,11 @@
 import type { WeightedGraph } from "../graph/weighted-graph.js";
+import type { WorkMonitor } from "../work/work-monitor.js";
 import { type BinomialTable, binomialTable, decodeSimplex } from "./binomial-table.js";
 import type { CoboundaryModel, SimplexList } from "./coboundary-model.js";
 import type { CofaceSink } from "./coface-sink.js";
 import type { ByteLedger } from "./homology-budget.js";
 import { SimplexListBuilder } from "./simplex-list-builder.js";
+import type { SimplexQuota } from "./simplex-quota.js";
 
 /** How edge values are looked up: an n×n matrix (fast for dense graphs) or the sparse rows. */
 export type CliqueLayout = "dense" | "sparse";
@@ -28,6 +30,8 @@ export class CliqueCoboundaries implements CoboundaryModel {
   private readonly edgeF: Float64Array;
   private readonly lists: (SimplexListBuilder | null)[] = [];
   private readonly ledger: ByteLedger;
+  private readonly monitor: WorkMonitor;
+  private readonly quota: SimplexQuota;
   private readonly s: Int32Array;
   private readonly low: Float64Array;
   private readonly high: Float64Array;
@@ -43,6 +47,8 @@ export class CliqueCoboundaries implements CoboundaryModel {
     maxVertices: number,
     layout: CliqueLayout,
     ledger: ByteLedger,
+    monitor: WorkMonitor,
+    quota: SimplexQuota,
   ) {
     const n = graph.n;
     this.n = n;
@@ -53,6 +59,9 @@ export class CliqueCoboundaries implements CoboundaryModel {
     this.targets = graph.targets;
     this.edgeF = edgeF;
     this.ledger = ledger;
+    this.monitor = monitor;
+    this.quota = quota;
+    quota.charge(0, n, 1, "vertices");
     if (layout === "dense") {
       ledger.reserve(n * n * 8, "building the dense edge-value matrix");
       const m = new Float64Array(n * n).fill(Infinity);
@@ -119,9 +128,19 @@ export class CliqueCoboundaries implements CoboundaryModel {
           if (v > u) out.push(this.edgeF[slot], this.binom.values[2 * this.row + v] + u);
         }
       }
+      this.quota.charge(1, out.count, 1, "edges");
     } else {
       const below = this.listSimplices(dim - 1);
-      for (let i = 0; i < below.count; i++) this.extendUpwards(dim - 1, below.key[i], below.f[i], out);
+      this.monitor.begin("listing simplices", dim, below.count);
+      const unit = `${dim - 1}-simplices`;
+      for (let i = 0; i < below.count; i++) {
+        if ((i & 4095) === 0) {
+          this.monitor.check(i);
+          this.quota.charge(dim, out.count, i / below.count, unit);
+        }
+        this.extendUpwards(dim - 1, below.key[i], below.f[i], out);
+      }
+      this.quota.charge(dim, out.count, 1, unit);
     }
     this.lists[dim] = out;
     return out;

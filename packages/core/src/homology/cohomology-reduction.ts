@@ -1,3 +1,4 @@
+import type { WorkMonitor } from "../work/work-monitor.js";
 import { ChainBuilder } from "./chain-builder.js";
 import type { CoboundaryModel } from "./coboundary-model.js";
 import { ColumnStore } from "./column-store.js";
@@ -43,6 +44,7 @@ export function reduceDimension(
   ledger: ByteLedger,
   sink: PairSink,
   keepZeroLength: boolean,
+  monitor: WorkMonitor,
 ): { pivots: KeyMap; counters: ReductionCounters } {
   const p = field.p;
   const inverse = field.inverse;
@@ -60,7 +62,9 @@ export function reduceDimension(
   ledger.reserve(list.count * 4, `choosing the ${dim}-simplex columns`);
   const todo = new Int32Array(list.count);
   let todoCount = 0;
+  monitor.begin("reducing columns", dim, list.count);
   for (let i = 0; i < list.count; i++) {
+    if ((i & 4095) === 0) monitor.check(0);
     const key = list.key[i];
     const f = list.f[i];
     if (cleared.has(key)) {
@@ -102,7 +106,10 @@ export function reduceDimension(
   sortedF.sort();
   const firstWindow = 64;
 
+  // Progress counts every column: those settled while choosing, then the ones reduced here.
+  const settledUpFront = list.count - todoCount;
   for (let c = 0; c < todoCount; c++) {
+    if ((c & 63) === 0) monitor.check(settledUpFront + c);
     const i = columns[c];
     const key = lk[i];
     const f = lf[i];
@@ -177,6 +184,7 @@ export function reduceDimension(
           model.pushCoboundary(dim, ck[e], cf[e], g, p, work);
           chain.push(ck[e], cf[e], g);
         }
+        if ((counters.additions & 63) === 0) monitor.check(settledUpFront + c);
         if (chain.size > compactAt) {
           chain.compact(p);
           compactAt = Math.max(1024, chain.size * 2);

@@ -1,6 +1,8 @@
 import { edgeFiltration, filtrationStart } from "../filtration/edge-filtration.js";
 import { fromFiltrationValue, type WeightSemantics } from "../filtration/weight-semantics.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
+import type { WorkControl } from "../work/work-control.js";
+import { WorkMonitor } from "../work/work-monitor.js";
 import type { Bar, Barcode } from "./barcode.js";
 import { CliqueCoboundaries, type CliqueLayout } from "./clique-coboundaries.js";
 import type { CoboundaryModel } from "./coboundary-model.js";
@@ -8,15 +10,22 @@ import { reduceDimension } from "./cohomology-reduction.js";
 import { DirectedFlagTables } from "./directed-flag-tables.js";
 import { ByteLedger, type HomologyBudget } from "./homology-budget.js";
 import { primeField } from "./prime-field.js";
+import { SimplexQuota } from "./simplex-quota.js";
 import { type PairSink, unionFindPairs } from "./union-find-pairs.js";
 
-export interface BarcodeOptions {
+export interface BarcodeOptions extends WorkControl {
   readonly semantics: WeightSemantics;
   /** Highest homology dimension computed (0 … maxDim); simplices of dimension maxDim + 1 are used. */
   readonly maxDim: number;
   /** Prime p of the coefficients Z/p (default 2). */
   readonly prime?: number;
   readonly budget?: HomologyBudget;
+  /**
+   * Stop with a SimplexBudgetError once the simplices listed (all dimensions up to maxDim, and maxDim + 1
+   * for directed graphs, whose tables list their cofaces too) pass this number. Default: no limit beyond
+   * the memory budget.
+   */
+  readonly maxSimplices?: number;
   /** Keep bars with birth = death (default false: they carry no topology and are many). */
   readonly keepZeroLength?: boolean;
   /**
@@ -44,17 +53,19 @@ export function computeBarcode(graph: WeightedGraph, options: BarcodeOptions): B
   const field = primeField(options.prime ?? 2);
   const keepZeroLength = options.keepZeroLength ?? false;
   const ledger = new ByteLedger(options.budget);
+  const monitor = new WorkMonitor(options);
+  const quota = new SimplexQuota(options.maxSimplices, maxDim + 1);
   const edgeF = edgeFiltration(graph, semantics);
   const start = filtrationStart(graph, semantics);
 
   let model: CoboundaryModel;
   let representation: Barcode["stats"]["representation"];
   if (graph.directed) {
-    model = new DirectedFlagTables(graph, edgeF, maxDim + 1, ledger);
+    model = new DirectedFlagTables(graph, edgeF, maxDim + 1, ledger, monitor, quota);
     representation = "directed-tables";
   } else {
     const layout = chooseLayout(graph, options.cliqueLayout ?? "auto", ledger.maxBytes);
-    model = new CliqueCoboundaries(graph, edgeF, maxDim + 2, layout, ledger);
+    model = new CliqueCoboundaries(graph, edgeF, maxDim + 2, layout, ledger, monitor, quota);
     representation = layout === "dense" ? "clique-dense" : "clique-sparse";
   }
 
@@ -87,9 +98,18 @@ export function computeBarcode(graph: WeightedGraph, options: BarcodeOptions): B
   };
   stats.simplices[0] = graph.n;
 
-  let cleared = unionFindPairs(model, start, ledger, sink);
+  let cleared = unionFindPairs(model, start, ledger, sink, monitor);
   for (let dim = 1; dim <= maxDim; dim++) {
-    const { pivots, counters } = reduceDimension(model, dim, cleared, field, ledger, sink, keepZeroLength);
+    const { pivots, counters } = reduceDimension(
+      model,
+      dim,
+      cleared,
+      field,
+      ledger,
+      sink,
+      keepZeroLength,
+      monitor,
+    );
     cleared.dispose();
     cleared = pivots;
     if (dim >= 2) model.releaseSimplices(dim - 1);

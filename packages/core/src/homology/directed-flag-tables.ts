@@ -1,7 +1,9 @@
 import type { WeightedGraph } from "../graph/weighted-graph.js";
+import type { WorkMonitor } from "../work/work-monitor.js";
 import type { CoboundaryModel, SimplexList } from "./coboundary-model.js";
 import type { CofaceSink } from "./coface-sink.js";
 import type { ByteLedger } from "./homology-budget.js";
+import type { SimplexQuota } from "./simplex-quota.js";
 import { TupleIndex } from "./tuple-index.js";
 import { TupleTableBuilder } from "./tuple-table-builder.js";
 
@@ -31,10 +33,17 @@ export class DirectedFlagTables implements CoboundaryModel {
   private readonly tables: DimensionTable[];
   private readonly lists: (SimplexList | null)[] = [];
 
-  constructor(graph: WeightedGraph, edgeF: Float64Array, topDim: number, ledger: ByteLedger) {
+  constructor(
+    graph: WeightedGraph,
+    edgeF: Float64Array,
+    topDim: number,
+    ledger: ByteLedger,
+    monitor: WorkMonitor,
+    quota: SimplexQuota,
+  ) {
     this.vertexCount = graph.n;
-    this.tables = enumerateDirectedSimplices(graph, edgeF, topDim, ledger);
-    for (let d = 1; d <= topDim; d++) linkFacets(this.tables[d - 1], this.tables[d], d, ledger);
+    this.tables = enumerateDirectedSimplices(graph, edgeF, topDim, ledger, monitor, quota);
+    for (let d = 1; d <= topDim; d++) linkFacets(this.tables[d - 1], this.tables[d], d, ledger, monitor);
   }
 
   /** Number of simplices of each dimension (for statistics). */
@@ -110,14 +119,21 @@ export class DirectedFlagTables implements CoboundaryModel {
   }
 }
 
-/** Depth-first enumeration of all directed flag simplices up to `topDim`, then a sort per dimension. */
+/**
+ * Depth-first enumeration of all directed flag simplices up to `topDim`, then a sort per dimension. Roots
+ * go up and every candidate list is ascending, so each table is filled in lexicographic tuple order: a
+ * stable sort on f alone gives the (f, tuple) order.
+ */
 function enumerateDirectedSimplices(
   graph: WeightedGraph,
   edgeF: Float64Array,
   topDim: number,
   ledger: ByteLedger,
+  monitor: WorkMonitor,
+  quota: SimplexQuota,
 ): DimensionTable[] {
   const n = graph.n;
+  monitor.begin("building directed tables", topDim, n);
   const { offsets, targets } = graph;
   const built: TupleTableBuilder[] = [];
   for (let d = 0; d <= topDim; d++)
@@ -141,6 +157,7 @@ function enumerateDirectedSimplices(
     const cf = candF[depth];
     const m = candCount[depth];
     for (let c = 0; c < m; c++) {
+      if (depth === 0) monitor.check(tuple[0]);
       const v = cv[c];
       tuple[depth + 1] = v;
       built[depth + 1].push(cf[c], tuple);
@@ -169,6 +186,10 @@ function enumerateDirectedSimplices(
   };
 
   for (let u = 0; u < n; u++) {
+    monitor.check(u);
+    if ((u & 63) === 0) {
+      for (let d = 0; d <= topDim; d++) quota.charge(d, built[d].count, u / n, "root vertices");
+    }
     tuple[0] = u;
     built[0].push(Number.NEGATIVE_INFINITY, tuple);
     let k = 0;
@@ -181,22 +202,20 @@ function enumerateDirectedSimplices(
     extend(0);
   }
 
+  for (let d = 0; d <= topDim; d++) quota.charge(d, built[d].count, 1, "root vertices");
+  // Every simplex value is an edge value (vertices: -∞), so ranks among the sorted edge values sort them.
+  const levels = new Float64Array(edgeF.length + 1);
+  levels[0] = Number.NEGATIVE_INFINITY;
+  levels.set(edgeF, 1);
+  levels.sort();
   const out: DimensionTable[] = [];
   for (let d = 0; d <= topDim; d++) {
     const count = built[d].count;
-    const order = new Int32Array(count);
-    for (let i = 0; i < count; i++) order[i] = i;
     const fd = built[d].f;
     const td = built[d].tuples;
     const w = d + 1;
-    order.sort((a, b) => {
-      if (fd[a] !== fd[b]) return fd[a] < fd[b] ? -1 : 1;
-      for (let i = 0; i < w; i++) {
-        const x = td[a * w + i] - td[b * w + i];
-        if (x !== 0) return x;
-      }
-      return 0;
-    });
+    monitor.begin("building directed tables", d, count);
+    const order = stableOrderByValue(fd, count, levels, monitor);
     const sortedF = new Float64Array(count);
     const sortedT = new Int32Array(count * w);
     for (let i = 0; i < count; i++) {
@@ -216,14 +235,54 @@ function enumerateDirectedSimplices(
   return out;
 }
 
+/**
+ * Positions 0 … count-1 in ascending f, ties kept in position order: a counting sort on the rank of each
+ * f among `levels` (sorted, holding every value of f).
+ */
+function stableOrderByValue(
+  f: Float64Array,
+  count: number,
+  levels: Float64Array,
+  monitor: WorkMonitor,
+): Int32Array {
+  const rank = new Int32Array(count);
+  const start = new Int32Array(levels.length + 1);
+  for (let i = 0; i < count; i++) {
+    if ((i & 65535) === 0) monitor.check(i);
+    const x = f[i];
+    let lo = 0;
+    let hi = levels.length - 1;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (levels[mid] < x) lo = mid + 1;
+      else hi = mid;
+    }
+    rank[i] = lo;
+    start[lo + 1]++;
+  }
+  for (let r = 0; r < levels.length; r++) start[r + 1] += start[r];
+  const order = new Int32Array(count);
+  for (let i = 0; i < count; i++) order[start[rank[i]]++] = i;
+  return order;
+}
+
 /** Fills `upper.facets` and the coboundary rows of `lower` (tuples of `lower` have dim vertices). */
-function linkFacets(lower: DimensionTable, upper: DimensionTable, dim: number, ledger: ByteLedger): void {
+function linkFacets(
+  lower: DimensionTable,
+  upper: DimensionTable,
+  dim: number,
+  ledger: ByteLedger,
+  monitor: WorkMonitor,
+): void {
   const w = dim; // vertices per facet
+  monitor.begin("building directed tables", dim, upper.count);
+  ledger.reserve(upper.count * (dim + 1) * 4 + lower.count * 12 + 64, "linking directed facets");
   const index = new TupleIndex(lower.tuples, w, lower.count);
   const facets = new Int32Array(upper.count * (dim + 1));
   const probe = new Int32Array(w);
   const degree = new Int32Array(lower.count + 1);
   for (let q = 0; q < upper.count; q++) {
+    if ((q & 4095) === 0) monitor.check(q);
     for (let i = 0; i <= dim; i++) {
       let k = 0;
       for (let j = 0; j <= dim; j++) if (j !== i) probe[k++] = upper.tuples[q * (dim + 1) + j];

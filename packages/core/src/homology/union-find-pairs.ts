@@ -1,3 +1,4 @@
+import type { WorkMonitor } from "../work/work-monitor.js";
 import type { CoboundaryModel } from "./coboundary-model.js";
 import type { ByteLedger } from "./homology-budget.js";
 import { KeyMap } from "./key-map.js";
@@ -20,9 +21,11 @@ export function unionFindPairs(
   start: number,
   ledger: ByteLedger,
   sink: PairSink,
+  monitor: WorkMonitor,
 ): KeyMap {
   const n = model.vertexCount;
   const edges = model.listSimplices(1);
+  monitor.begin("pairing components", 0, edges.count);
   const order = new Int32Array(edges.count);
   for (let i = 0; i < order.length; i++) order[i] = i;
   const { f, key } = edges;
@@ -44,6 +47,7 @@ export function unionFindPairs(
   const killers = new KeyMap(ledger, "recording the spanning-forest edges", Math.max(16, n));
   const ends = new Int32Array(2);
   for (let i = 0; i < order.length; i++) {
+    if ((i & 65535) === 0) monitor.check(i);
     const e = order[i];
     model.vertices(1, key[e], ends);
     const a = find(ends[0]);

@@ -205,7 +205,7 @@ describe("extract budgets", () => {
     expect(run.status).toBe(1);
     const errors = readFeatureTable(join(dir, "run", "errors.csv"));
     expect(errors.rows.map((r) => r[0])).toEqual(["dense"]);
-    expect(errors.rows[0][4]).toMatch(/longer than the time limit of 1 s/);
+    expect(errors.rows[0][4]).toMatch(/time limit of 1\.0 s reached while .*raise --time-limit/);
     expect(readFeatureTable(join(dir, "run", "features.csv")).rows.map((r) => r[0])).toEqual([
       "small",
       "last",

@@ -4,6 +4,7 @@ import {
   HomologyBudgetError,
   type WeightedGraph,
   type WeightSemantics,
+  type WorkControl,
 } from "@cliquescape/core";
 import { type ComplexOptions, homologyDimOf } from "./options/complex-options.js";
 
@@ -15,11 +16,13 @@ export function barcodeWithinBudget(
   graph: WeightedGraph,
   semantics: WeightSemantics,
   limits: ComplexOptions,
+  work: WorkControl,
 ): Barcode | null {
   const maxDim = homologyDimOf(limits);
   if (maxDim < 0) return null;
   try {
     return computeBarcode(graph, {
+      ...work,
       semantics,
       maxDim,
       prime: limits.prime,

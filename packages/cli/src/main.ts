@@ -8,6 +8,10 @@ try {
 } catch (error) {
   if (error instanceof CommanderError) process.exit(error.exitCode);
   const message = error instanceof Error ? error.message : String(error);
-  process.stderr.write(`cliquescape: ${message}\n`);
+  const hint =
+    error instanceof Error && error.name === "TimeLimitError"
+      ? "; raise --time-limit (seconds, 0: no limit), lower --top-dim or keep fewer edges"
+      : "";
+  process.stderr.write(`cliquescape: ${message}${hint}\n`);
   process.exit(exitCodeFor(error));
 }

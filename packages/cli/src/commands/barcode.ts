@@ -14,6 +14,7 @@ import { addGraphOptions, graphOptionsOf, nonNegativeInteger, UsageError } from 
 import { addOutputOptions, type OutputFormat } from "../options/output-options.js";
 import { renderBarcodeTable } from "../render/barcode-table.js";
 import { csvDocument } from "../render/csv.js";
+import { startGraphWork } from "../work-progress.js";
 
 /** One bar as `barcode --format json` prints it. Stable: later versions only add fields. */
 export interface BarReport {
@@ -75,13 +76,21 @@ Examples:
     const maxDim = homologyDimOf(limits);
     if (maxDim < 0) throw new UsageError("--top-dim 0 leaves no homology to compute; use 1 or more");
     const { graph } = loadGraph(file, graphOptions);
-    const barcode = computeBarcode(graph, {
-      semantics: graphOptions.weights,
-      maxDim,
-      prime: limits.prime,
-      budget: { maxBytes: limits.memoryBytes },
-      keepZeroLength: Boolean(raw.keepZero),
-    });
+    const work = startGraphWork(file, limits.timeLimitSeconds);
+    let barcode: Barcode;
+    try {
+      barcode = computeBarcode(graph, {
+        ...work.control,
+        semantics: graphOptions.weights,
+        maxDim,
+        prime: limits.prime,
+        budget: { maxBytes: limits.memoryBytes },
+        maxSimplices: limits.budget,
+        keepZeroLength: Boolean(raw.keepZero),
+      });
+    } finally {
+      work.stop();
+    }
     const withCycles = barsWithCycles(
       barcode,
       raw.cycles as number | undefined,

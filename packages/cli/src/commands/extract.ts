@@ -5,6 +5,7 @@ import { InterruptedError } from "../extract/interrupted-error.js";
 import { optionsToSpec } from "../extract/options-to-spec.js";
 import { runExtract } from "../extract/run-extract.js";
 import { EDGE_TRANSFORMS } from "../extract/run-spec.js";
+import { timeLimitOption } from "../options/complex-options.js";
 import { finiteNumber, nonNegativeInteger, numberList, UsageError } from "../options/graph-options.js";
 
 export function extractCommand(): Command {
@@ -92,12 +93,7 @@ export function extractCommand(): Command {
         "barcode up to the grid's end (axis, default) or of the whole filtration",
       ).choices(["axis", "full"]),
     )
-    .addOption(
-      new Option(
-        "--time-limit <s>",
-        "abandon (and record as failed) a graph that takes longer (default: none)",
-      ).argParser(positiveNumber),
-    )
+    .addOption(timeLimitOption(false))
     // Grid.
     .addOption(
       new Option("--threshold <list>", "grid of these weights (comma-separated)").argParser(numberList),
@@ -209,10 +205,4 @@ function quantilePair(text: string): [number, number] {
   const parts = text.split(":");
   if (parts.length !== 2) throw new UsageError(`expected FROM:TO quantiles, got "${text}"`);
   return [finiteNumber(parts[0]), finiteNumber(parts[1])];
-}
-
-function positiveNumber(text: string): number {
-  const value = finiteNumber(text);
-  if (value <= 0) throw new UsageError(`expected a number > 0, got "${text}"`);
-  return value;
 }

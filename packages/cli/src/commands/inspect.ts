@@ -16,6 +16,7 @@ import { addSingleThresholdOptions, gridOf, thresholdChoiceOf } from "../options
 import { csvDocument } from "../render/csv.js";
 import { formatCount, formatWeight } from "../render/format-number.js";
 import { keyValueLines, textTable } from "../render/text-table.js";
+import { startGraphWork } from "../work-progress.js";
 
 /** The JSON object `inspect --format json` prints. Stable: later versions only add fields. */
 export interface InspectReport {
@@ -64,16 +65,28 @@ Examples:
     const limits = complexOptionsOf(raw);
     const thresholded = choice.threshold !== undefined || choice.density !== undefined;
     const threshold = thresholded ? gridOf(graph, graphOptions.weights, choice).thresholds[0] : undefined;
-    const result = countSimplices(graph, {
-      threshold,
-      semantics: graphOptions.weights,
-      maxDim: limits.topDim,
-      budget: limits.budget,
-    });
+    const work = startGraphWork(file, limits.timeLimitSeconds);
+    const { result, barcode } = (() => {
+      try {
+        const counted = countSimplices(graph, {
+          ...work.control,
+          threshold,
+          semantics: graphOptions.weights,
+          maxDim: limits.topDim,
+          budget: limits.budget,
+        });
+        // Homology of the complex at the threshold only: the subgraph keeps the work to what is asked.
+        const kept =
+          threshold === undefined ? graph : thresholdSubgraph(graph, threshold, graphOptions.weights);
+        return {
+          result: counted,
+          barcode: barcodeWithinBudget(kept, graphOptions.weights, limits, work.control),
+        };
+      } finally {
+        work.stop();
+      }
+    })();
     const counts = Array.from(result.counts);
-    // Homology of the complex at the threshold only: the subgraph keeps the work to what is asked.
-    const kept = threshold === undefined ? graph : thresholdSubgraph(graph, threshold, graphOptions.weights);
-    const barcode = barcodeWithinBudget(kept, graphOptions.weights, limits);
     const bettiThreshold = threshold ?? allEdgesGrid(graph, graphOptions.weights).thresholds[0];
     const edges = counts[1] ?? 0;
     const possible = possibleEdgeCount(graph.n, graph.directed);

@@ -9,6 +9,7 @@ import { addGridOptions, gridOf, thresholdChoiceOf } from "../options/threshold-
 import { csvDocument } from "../render/csv.js";
 import { formatCount, formatWeight } from "../render/format-number.js";
 import { textTable } from "../render/text-table.js";
+import { startGraphWork } from "../work-progress.js";
 
 /** The JSON object `sweep --format json` prints. Stable: later versions only add fields. */
 export interface SweepReport {
@@ -56,10 +57,23 @@ Examples:
     const { graph } = loadGraph(file, graphOptions);
     const grid = gridOf(graph, graphOptions.weights, thresholdChoiceOf(raw), DEFAULT_STEPS);
     const limits = complexOptionsOf(raw);
-    const result = sweepSimplexCounts(graph, grid, { maxDim: limits.topDim, budget: limits.budget });
+    const work = startGraphWork(file, limits.timeLimitSeconds);
+    const { result, barcode } = (() => {
+      try {
+        return {
+          result: sweepSimplexCounts(graph, grid, {
+            ...work.control,
+            maxDim: limits.topDim,
+            budget: limits.budget,
+          }),
+          barcode: barcodeWithinBudget(graph, graphOptions.weights, limits, work.control),
+        };
+      } finally {
+        work.stop();
+      }
+    })();
     const possible = possibleEdgeCount(graph.n, graph.directed);
     const counts = result.counts.map((row) => Array.from(row));
-    const barcode = barcodeWithinBudget(graph, graphOptions.weights, limits);
     const report: SweepReport = {
       file,
       directed: graph.directed,

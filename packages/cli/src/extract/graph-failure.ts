@@ -33,6 +33,15 @@ export function graphFailureOf(error: unknown, file: string): GraphFailure {
     location?.row !== undefined && location.col !== undefined
       ? ` (matrix row ${location.row + 1}, column ${location.col + 1})`
       : "";
+  if (name === "TimeLimitError") {
+    return {
+      file,
+      line: null,
+      column: null,
+      reason: `${message}; raise --time-limit (seconds, 0: no limit), lower --top-dim or keep fewer edges`,
+      kind: name,
+    };
+  }
   const known = name.endsWith("BudgetError") || name === "GraphInputError" || name === "RangeError";
   return {
     file,

@@ -8,6 +8,7 @@ import {
   nodeEdgeFeatures,
   nodeFeatureNames,
   type WeightedGraph,
+  type WorkControl,
 } from "@cliquescape/core";
 import {
   type DatasetEntry,
@@ -57,6 +58,7 @@ export function computeGraph(
   relativeFile: string,
   labelCode: number,
   spec: ResolvedRunSpec,
+  work: WorkControl = {},
 ): GraphOutcome {
   let warnings: string[] = [];
   try {
@@ -70,12 +72,13 @@ export function computeGraph(
       semantics,
       countBudget: spec.complex.simplexBudget ?? undefined,
       homologyBudget: { maxBytes: spec.complex.homologyMemoryMiB * 2 ** 20 },
+      work,
     });
     const barcodeJson =
       spec.outputs.barcodes && features.barcode
         ? barcodeDocument(entry.id, relativeFile, graph, features.barcode, features.grid.thresholds, spec)
         : null;
-    const bundle = spec.outputs.bundles ? gnnBundle(graph, labelCode, spec, coordinates) : null;
+    const bundle = spec.outputs.bundles ? gnnBundle(graph, labelCode, spec, coordinates, work) : null;
     return {
       ok: true,
       values: features.values,
@@ -141,6 +144,7 @@ function gnnBundle(
   labelCode: number,
   spec: ResolvedRunSpec,
   coordinates: NodeCoordinates | undefined,
+  work: WorkControl,
 ): Uint8Array {
   const semantics = spec.preparation.weights;
   const threshold = nodeFeatureThreshold(graph, spec);
@@ -150,6 +154,7 @@ function gnnBundle(
       semantics,
       topDim: spec.complex.topDim,
       budget: spec.complex.simplexBudget ?? undefined,
+      work,
     }),
     graph,
     spec,

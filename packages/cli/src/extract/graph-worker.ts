@@ -1,18 +1,19 @@
 import { parentPort } from "node:worker_threads";
+import type { WorkControl } from "@cliquescape/core";
 import { edgeValues } from "./edge-values.js";
 import { graphFailureOf } from "./graph-failure.js";
 import { computeGraph } from "./graph-job.js";
 import { readPreparedGraph } from "./read-prepared-graph.js";
 import { strideSample } from "./weight-quantiles.js";
-import type { WorkerReply, WorkerSetup, WorkerTask } from "./worker-messages.js";
+import type { WorkerProgress, WorkerReply, WorkerSetup, WorkerTask } from "./worker-messages.js";
 
 /*
  * Worker thread entry: computes one graph per message and posts the result back. It writes no files: the
  * main thread writes every output, so an interrupted run never leaves a file half-written by a worker.
  */
 
+if (!parentPort) throw new Error("graph-worker.js runs as a worker thread");
 const port = parentPort;
-if (!port) throw new Error("graph-worker.js runs as a worker thread");
 let setup: WorkerSetup | null = null;
 
 port.on("message", (message: WorkerSetup | WorkerTask) => {
@@ -34,10 +35,18 @@ function handle(task: WorkerTask): WorkerReply {
   if (!setup) throw new Error("a worker got a task before its setup");
   if (task.kind === "extract") {
     if (!setup.spec) throw new Error("an extract task before the grid was fixed");
+    const limit = setup.spec.complex.timeLimitSeconds;
+    const index = task.index;
+    const work: WorkControl = {
+      startedAt: Date.now(),
+      ...(limit === null ? {} : { timeLimitMs: limit * 1000 }),
+      onProgress: (progress) =>
+        port.postMessage({ kind: "progress", index, progress } satisfies WorkerProgress),
+    };
     return {
       kind: "extract",
-      index: task.index,
-      outcome: computeGraph(task.entry, task.relativeFile, task.labelCode, setup.spec),
+      index,
+      outcome: computeGraph(task.entry, task.relativeFile, task.labelCode, setup.spec, work),
     };
   }
   try {

@@ -33,7 +33,7 @@ export function optionsToSpec(raw: Raw, given: (name: string) => boolean): { spe
     simplexBudget: raw.budget,
     homologyMemoryMiB: raw.memory,
     barcodeRange: raw.barcodeRange,
-    timeLimitSeconds: raw.timeLimit,
+    timeLimitSeconds: raw.timeLimit === 0 ? null : raw.timeLimit,
   });
   const gridChanged = gridFromOptions(raw, spec, base);
   nodeThresholdFromOptions(raw, spec);

@@ -2,7 +2,8 @@ import cliProgress from "cli-progress";
 
 /** Progress of one phase (first pass, graphs) on stderr. */
 export interface Progress {
-  update(done: number, failed: number): void;
+  /** `working`: what the longest-running graph in flight is doing, when it has run a while. */
+  update(done: number, failed: number, working?: string): void;
   stop(): void;
 }
 
@@ -25,7 +26,7 @@ function barProgress(phase: string, total: number, stream: NodeJS.WriteStream): 
   const bar = new cliProgress.SingleBar(
     {
       stream,
-      format: `${phase} [{bar}] {value}/{total} | {rate}/s | {eta_formatted} left | failed {failed}`,
+      format: `${phase} [{bar}] {value}/{total} | {rate}/s | {eta_formatted} left | failed {failed}{working}`,
       etaBuffer: 50,
       hideCursor: true,
       clearOnComplete: false,
@@ -33,10 +34,14 @@ function barProgress(phase: string, total: number, stream: NodeJS.WriteStream): 
     cliProgress.Presets.shades_classic,
   );
   const started = Date.now();
-  bar.start(total, 0, { rate: "–", failed: 0 });
+  bar.start(total, 0, { rate: "–", failed: 0, working: "" });
+  const width = Math.max(20, (stream.columns ?? 120) - 90);
   return {
-    update(done, failed) {
-      bar.update(done, { rate: rateOf(done, started), failed });
+    update(done, failed, working) {
+      const text = working
+        ? ` | ${working.length > width ? `${working.slice(0, width - 1)}…` : working}`
+        : "";
+      bar.update(done, { rate: rateOf(done, started), failed, working: text });
     },
     stop() {
       bar.stop();
@@ -48,14 +53,14 @@ function plainProgress(phase: string, total: number, stream: NodeJS.WriteStream)
   const started = Date.now();
   let lastLine = started;
   return {
-    update(done, failed) {
+    update(done, failed, working) {
       const now = Date.now();
       if (now - lastLine < PLAIN_INTERVAL_MS) return;
       lastLine = now;
       const rate = done / ((now - started) / 1000);
       const left = rate > 0 ? formatDuration((total - done) / rate) : "?";
       stream.write(
-        `cliquescape: ${phase}: ${done}/${total} graphs, ${failed} failed, ${rate.toFixed(1)} graphs/s, about ${left} left\n`,
+        `cliquescape: ${phase}: ${done}/${total} graphs, ${failed} failed, ${rate.toFixed(1)} graphs/s, about ${left} left${working ? `; ${working}` : ""}\n`,
       );
     },
     stop() {},

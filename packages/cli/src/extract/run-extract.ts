@@ -1,7 +1,9 @@
 import { existsSync, readFileSync } from "node:fs";
 import { dirname, relative, sep } from "node:path";
+import type { WorkProgress } from "@cliquescape/core";
 import { graphFeatureNames, type OpenDatasetOptions, openDataset, writeFileAtomic } from "@cliquescape/io";
 import { UsageError } from "../options/graph-options.js";
+import { progressLine } from "../work-progress.js";
 import { assembleTables, type ErrorRow, labelCode, problemRow } from "./assemble-tables.js";
 import { featureConfigOf } from "./graph-job.js";
 import { type GraphRecord, readRecord } from "./graph-record.js";
@@ -107,6 +109,14 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
 
   let failed = 0;
   const progress = startProgress("graphs", todo.length);
+  // What each graph in flight is doing; the longest-running one is shown once it has run a while.
+  const inFlight = new Map<number, WorkProgress>();
+  const working = (): string | undefined => {
+    let slowest: [number, WorkProgress] | null = null;
+    for (const entry of inFlight) if (!slowest || entry[1].elapsedMs > slowest[1].elapsedMs) slowest = entry;
+    if (!slowest || slowest[1].elapsedMs < 2000) return undefined;
+    return `${dataset.entries[slowest[0]].id}: ${progressLine(slowest[1])}`;
+  };
   const tasks = todo.map((i) => ({
     kind: "extract" as const,
     index: i,
@@ -118,17 +128,22 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
     tasks,
     (reply) => {
       if (reply.kind !== "extract") return;
+      inFlight.delete(reply.index);
       const entry = dataset.entries[reply.index];
       const record = saveGraph(folder, entry, reply.outcome, hashes[reply.index], fingerprint, relativeFile);
       records.set(entry.id, record);
       if (!record.ok) failed++;
-      progress.update(records.size - skipped, failed);
+      progress.update(records.size - skipped, failed, working());
     },
     {
       size: Math.max(1, Math.min(request.workers, todo.length)),
       setup: { kind: "setup", preparation: spec.preparation, spec },
       signal: request.signal,
       timeLimitSeconds: spec.complex.timeLimitSeconds,
+      onProgress: (index, p) => {
+        inFlight.set(index, p);
+        progress.update(records.size - skipped, failed, working());
+      },
       failedReply: (task, message) => ({
         kind: "extract",
         index: task.index,

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { DEFAULT_TIME_LIMIT_SECONDS } from "../options/complex-options.js";
 
 /**
  * The run spec: every setting of an extract run, the values it resolved (the grid, the label codes), the
@@ -41,10 +42,11 @@ export const ComplexSchema = z
      */
     barcodeRange: z.enum(["axis", "full"]).default("axis"),
     /**
-     * Seconds one graph may take before it is abandoned and recorded as failed; null: no limit. Off by
-     * default because which graphs pass would then depend on the machine.
+     * Seconds one graph may take before it is stopped and recorded as failed, with how far it got; null: no
+     * limit. Which graphs pass can depend on the machine, so a stopped graph is always in errors.csv; the
+     * limit changes no feature value, so a run may be resumed under another one.
      */
-    timeLimitSeconds: z.number().positive().nullable().default(null),
+    timeLimitSeconds: z.number().positive().nullable().default(DEFAULT_TIME_LIMIT_SECONDS),
   })
   .prefault({});
 

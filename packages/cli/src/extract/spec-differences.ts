@@ -22,8 +22,19 @@ const COMPARED_KEYS = [
  */
 export function specDifferences(before: Partial<RunSpec>, now: Partial<RunSpec>): string[] {
   const lines: string[] = [];
-  for (const key of COMPARED_KEYS) collect(key, before[key], now[key], lines);
+  for (const key of COMPARED_KEYS) collect(key, compared(before, key), compared(now, key), lines);
   return lines;
+}
+
+/**
+ * A compared part of the spec without the settings that change no result, so a run may go on under
+ * another value of them (a longer time limit, say).
+ */
+function compared(spec: Partial<RunSpec>, key: (typeof COMPARED_KEYS)[number]): unknown {
+  const value: unknown = spec[key];
+  if (key !== "complex" || !isPlainObject(value)) return value;
+  const { timeLimitSeconds: _, ...rest } = value;
+  return rest;
 }
 
 function collect(path: string, a: unknown, b: unknown, out: string[]): void {
@@ -47,6 +58,6 @@ function isPlainObject(value: unknown): value is Record<string, unknown> {
 
 /** A short hash of the compared settings: per-graph records carry it, so a stray record never mixes in. */
 export function settingsFingerprint(spec: Partial<RunSpec>): string {
-  const picked = COMPARED_KEYS.map((key) => [key, spec[key] ?? null]);
+  const picked = COMPARED_KEYS.map((key) => [key, compared(spec, key) ?? null]);
   return createHash("sha256").update(JSON.stringify(picked)).digest("hex").slice(0, 16);
 }

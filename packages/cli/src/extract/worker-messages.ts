@@ -1,3 +1,4 @@
+import type { WorkProgress } from "@cliquescape/core";
 import type { DatasetEntry } from "@cliquescape/io";
 import type { GraphFailure } from "./graph-failure.js";
 import type { GraphOutcome } from "./graph-job.js";
@@ -15,6 +16,13 @@ export interface WorkerSetup {
 export type WorkerTask =
   | { kind: "sample"; index: number; entry: DatasetEntry; limit: number }
   | { kind: "extract"; index: number; entry: DatasetEntry; relativeFile: string; labelCode: number };
+
+/** Sent by a worker while it computes task `index` (at most once a second). */
+export interface WorkerProgress {
+  kind: "progress";
+  index: number;
+  progress: WorkProgress;
+}
 
 /** A worker's answer to one task, tagged with the task's index. */
 export type WorkerReply =

@@ -1,5 +1,6 @@
 import { Worker } from "node:worker_threads";
-import type { WorkerReply, WorkerSetup, WorkerTask } from "./worker-messages.js";
+import type { WorkProgress } from "@cliquescape/core";
+import type { WorkerProgress, WorkerReply, WorkerSetup, WorkerTask } from "./worker-messages.js";
 
 /** The compiled worker script next to this file in dist/. */
 const WORKER_SCRIPT = new URL("./graph-worker.js", import.meta.url);
@@ -9,8 +10,13 @@ export interface PoolOptions {
   setup: WorkerSetup;
   /** Interrupts the run: no new task starts and the tasks in flight are abandoned at once. */
   signal: AbortSignal;
-  /** A task running longer than this is abandoned (its worker terminated and replaced); none when null. */
+  /**
+   * The per-graph time limit, which the core enforces itself with a message saying how far it got. A task
+   * still running well past it (code that cannot check the clock) has its worker terminated and replaced.
+   */
   timeLimitSeconds: number | null;
+  /** Progress of task `index` while it runs. */
+  onProgress?: (index: number, progress: WorkProgress) => void;
   /** The reply standing for a task whose worker died or ran out of time. */
   failedReply: (task: WorkerTask, message: string) => WorkerReply;
 }
@@ -53,7 +59,8 @@ export async function runOnWorkers(
         task = tasks[next++];
         pending++;
         worker.postMessage(task);
-        if (timeLimitSeconds !== null) timer = setTimeout(overrun, timeLimitSeconds * 1000);
+        // Unreferenced: a finished or stopped run does not wait for the timer of an abandoned task.
+        if (timeLimitSeconds !== null) timer = setTimeout(overrun, hardLimitMs(timeLimitSeconds)).unref();
       };
       // The worker is lost: its task fails with `message`, and a fresh worker takes its place.
       const lose = (message: string) => {
@@ -69,11 +76,17 @@ export async function runOnWorkers(
       };
       const overrun = () => {
         void worker.terminate();
-        lose(`took longer than the time limit of ${timeLimitSeconds} s; the graph was abandoned`);
+        lose(
+          `still running ${Math.round(hardLimitMs(timeLimitSeconds as number) / 1000)} s after it started, past the time limit of ${timeLimitSeconds} s; the graph was abandoned (raise --time-limit, 0: no limit)`,
+        );
       };
       worker.postMessage(setup);
-      worker.on("message", (reply: WorkerReply) => {
+      worker.on("message", (reply: WorkerReply | WorkerProgress) => {
         if (settled) return; // a stopped run writes nothing more
+        if (reply.kind === "progress") {
+          options.onProgress?.(reply.index, reply.progress);
+          return;
+        }
         clearTimeout(timer);
         pending--;
         task = null;
@@ -86,4 +99,9 @@ export async function runOnWorkers(
     signal.addEventListener("abort", () => settle("stopped"), { once: true });
     for (let i = 0; i < Math.min(options.size, tasks.length) && !settled; i++) start();
   });
+}
+
+/** When a task past its time limit is given up: the limit plus a tenth, and at least 30 s more. */
+function hardLimitMs(timeLimitSeconds: number): number {
+  return (timeLimitSeconds + Math.max(30, timeLimitSeconds / 10)) * 1000;
 }

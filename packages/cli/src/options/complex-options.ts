@@ -4,12 +4,20 @@ import { nonNegativeInteger, UsageError } from "./graph-options.js";
 /** Homology goes up to this dimension unless --top-dim says otherwise (H0, H1, H2). */
 export const DEFAULT_HOMOLOGY_DIM = 2;
 
+/**
+ * Seconds one graph may take unless --time-limit says otherwise: long enough for any graph the tool is
+ * meant for on one core, short enough that a runaway input stops the same day.
+ */
+export const DEFAULT_TIME_LIMIT_SECONDS = 600;
+
 /** Limits on the complex: how high to go, in which coefficients, and how much work and memory to allow. */
 export interface ComplexOptions {
   topDim?: number;
   budget?: number;
   prime: number;
   memoryBytes?: number;
+  /** Null: no limit. */
+  timeLimitSeconds: number | null;
 }
 
 export function addComplexOptions(command: Command): Command {
@@ -30,7 +38,35 @@ export function addComplexOptions(command: Command): Command {
       new Option("--memory <MiB>", "memory the homology computation may hold (default 2048)").argParser(
         nonNegativeInteger,
       ),
-    );
+    )
+    .addOption(timeLimitOption());
+}
+
+/**
+ * --time-limit, shared with extract: seconds per graph, 0 for none. Extract takes it without a default, so
+ * the value of a --spec file stands unless the option is given.
+ */
+export function timeLimitOption(withDefault = true): Option {
+  const option = new Option(
+    "--time-limit <s>",
+    `stop a graph that takes longer than this many seconds, saying how far it got (0: no limit; default ${DEFAULT_TIME_LIMIT_SECONDS})`,
+  ).argParser(nonNegativeNumber);
+  return withDefault
+    ? option.default(DEFAULT_TIME_LIMIT_SECONDS, String(DEFAULT_TIME_LIMIT_SECONDS))
+    : option;
+}
+
+/** Null for 0 (no limit). */
+export function timeLimitOf(raw: Record<string, unknown>): number | null {
+  const seconds = raw.timeLimit as number;
+  return seconds === 0 ? null : seconds;
+}
+
+export function nonNegativeNumber(text: string): number {
+  const value = Number(text);
+  if (text.trim() === "" || !(value >= 0) || !Number.isFinite(value))
+    throw new UsageError(`expected a number of seconds ≥ 0, got "${text}"`);
+  return value;
 }
 
 export function complexOptionsOf(raw: Record<string, unknown>): ComplexOptions {
@@ -39,6 +75,7 @@ export function complexOptionsOf(raw: Record<string, unknown>): ComplexOptions {
     budget: raw.budget as number | undefined,
     prime: raw.prime as number,
     memoryBytes: raw.memory === undefined ? undefined : (raw.memory as number) * 2 ** 20,
+    timeLimitSeconds: timeLimitOf(raw),
   };
 }
 

@@ -1,6 +1,7 @@
 import { countSimplices } from "../count/count-simplices.js";
 import { toFiltrationValue, type WeightSemantics } from "../filtration/weight-semantics.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
+import type { WorkControl } from "../work/work-control.js";
 
 export interface NodeEdgeFeatureOptions {
   /** Keep only edges present at this threshold (user units); omitted = every edge. */
@@ -11,6 +12,8 @@ export interface NodeEdgeFeatureOptions {
   readonly topDim: number;
   /** Simplex budget of the enumeration (see CountOptions.budget). */
   readonly budget?: number;
+  /** Time limit and progress of the enumeration. */
+  readonly work?: WorkControl;
 }
 
 /** Node and edge feature tables of one graph at one threshold, shaped for graph neural network libraries. */
@@ -66,6 +69,7 @@ export function nodeEdgeFeatures(graph: WeightedGraph, options: NodeEdgeFeatureO
   }
   const { n, directed, offsets, targets, weights } = graph;
   const counted = countSimplices(graph, {
+    ...options.work,
     threshold,
     semantics,
     maxDim: topDim,

@@ -8,6 +8,7 @@ import type { Barcode } from "../homology/barcode.js";
 import { bettiCurves } from "../homology/betti-curves.js";
 import { computeBarcode } from "../homology/compute-barcode.js";
 import type { HomologyBudget } from "../homology/homology-budget.js";
+import type { WorkControl } from "../work/work-control.js";
 import { summarizeBars } from "./bar-summary.js";
 import { summarizeCurve } from "./curve-summary.js";
 import { axisGrid, type FeatureAxis } from "./feature-axis.js";
@@ -22,6 +23,8 @@ export interface TopologicalFeatureOptions {
   readonly countBudget?: number;
   /** Memory budget of the barcode computation. */
   readonly homologyBudget?: HomologyBudget;
+  /** Time limit and progress, shared by the sweep and the barcode (give it a startedAt). */
+  readonly work?: WorkControl;
 }
 
 export interface TopologicalFeatures {
@@ -58,7 +61,7 @@ export function topologicalFeatures(
   const T = grid.thresholds.length;
 
   const sweep: SweepCounts | null = needsSweep(config)
-    ? sweepSimplexCounts(graph, grid, { maxDim: topDim, budget: options.countBudget })
+    ? sweepSimplexCounts(graph, grid, { ...options.work, maxDim: topDim, budget: options.countBudget })
     : null;
   // The barcode of the filtration up to the axis end (thresholds are in filtration order) unless asked for
   // the whole of it: dense graphs hold most of their simplices beyond the thresholds people read.
@@ -68,6 +71,7 @@ export function topologicalFeatures(
     barcode = computeBarcode(
       upToAxisEnd ? thresholdSubgraph(graph, grid.thresholds[T - 1], semantics) : graph,
       {
+        ...options.work,
         semantics,
         maxDim: topDim - 1,
         prime: config.prime,

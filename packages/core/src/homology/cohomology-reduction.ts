@@ -64,7 +64,7 @@ export function reduceDimension(
   let todoCount = 0;
   monitor.begin("reducing columns", dim, list.count);
   for (let i = 0; i < list.count; i++) {
-    if ((i & 4095) === 0) monitor.check(0);
+    if ((i & 4095) === 0) monitor.check(i - todoCount); // columns settled without work so far
     const key = list.key[i];
     const f = list.f[i];
     if (cleared.has(key)) {

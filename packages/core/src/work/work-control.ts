@@ -26,6 +26,11 @@ export interface WorkProgress {
 export interface WorkControl {
   /** Stop with a TimeLimitError after this many milliseconds (default: no limit). */
   readonly timeLimitMs?: number;
+  /**
+   * Date.now() when the clock started (default: when the computation starts). Several computations given
+   * the same value share one time limit, and report elapsed time from it.
+   */
+  readonly startedAt?: number;
   /** Called at most every `progressIntervalMs` while the computation runs. */
   readonly onProgress?: (progress: WorkProgress) => void;
   /** Default 1000 ms. */

@@ -22,7 +22,7 @@ export class WorkMonitor {
   constructor(control: WorkControl | undefined) {
     const limit = control?.timeLimitMs ?? Number.POSITIVE_INFINITY;
     if (!(limit > 0)) throw new RangeError(`timeLimitMs must be positive, got ${limit}`);
-    this.started = now();
+    this.started = control?.startedAt ?? now();
     this.limitMs = limit;
     this.deadline = this.started + limit;
     this.listener = control?.onProgress;

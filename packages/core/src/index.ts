@@ -4,6 +4,7 @@ export { DEFAULT_SIMPLEX_BUDGET } from "./count/defaults.js";
 export { SimplexBudgetError } from "./count/simplex-budget-error.js";
 export { sweepSimplexCounts } from "./count/sweep-simplex-counts.js";
 export type { CountOptions, NodeParticipation, SimplexCounts, SweepCounts } from "./count/types.js";
+export * from "./distance/index.js";
 export * from "./features/index.js";
 export { edgeBins } from "./filtration/edge-bins.js";
 export { edgeFiltration, filtrationStart } from "./filtration/edge-filtration.js";

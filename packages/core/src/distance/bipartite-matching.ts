@@ -1,8 +1,8 @@
 /**
  * Maximum bipartite matching by the Hopcroft–Karp algorithm (J. E. Hopcroft, R. M. Karp, "An n^{5/2}
  * algorithm for maximum matchings in bipartite graphs", SIAM J. Comput. 2, 1973), on a graph given as
- * compressed rows whose edges are sorted by a cost: only edges of cost ≤ `limit` exist, so one sorted graph
- * serves every threshold of a search. Left vertices with `active[u] = 0` take no part. Work arrays are kept
+ * compressed rows whose edges carry a cost: only edges of cost ≤ `limit` exist, so one graph serves every
+ * threshold of a search. Left vertices with `active[u] = 0` take no part. Work arrays are kept
  * between calls.
  */
 export class BipartiteMatcher {
@@ -37,8 +37,8 @@ export class BipartiteMatcher {
     // Greedy start: most vertices are matched here, leaving few augmenting phases.
     for (let u = 0; u < left; u++) {
       if (!active[u]) continue;
-      for (let e = offsets[u]; e < offsets[u + 1] && costs[e] <= limit; e++) {
-        if (matchRight[targets[e]] < 0) {
+      for (let e = offsets[u]; e < offsets[u + 1]; e++) {
+        if (costs[e] <= limit && matchRight[targets[e]] < 0) {
           matchRight[targets[e]] = u;
           matchLeft[u] = targets[e];
           size++;
@@ -60,7 +60,8 @@ export class BipartiteMatcher {
       let reachedFree = false;
       while (head < tail) {
         const u = queue[head++];
-        for (let e = offsets[u]; e < offsets[u + 1] && costs[e] <= limit; e++) {
+        for (let e = offsets[u]; e < offsets[u + 1]; e++) {
+          if (costs[e] > limit) continue;
           const w = matchRight[targets[e]];
           if (w < 0) reachedFree = true;
           else if (layer[w] === UNSEEN) {
@@ -89,8 +90,10 @@ export class BipartiteMatcher {
     stack[0] = root;
     while (top >= 0) {
       const u = stack[top];
-      const e = cursor[u];
-      if (e < offsets[u + 1] && costs[e] <= limit) {
+      let e = cursor[u];
+      while (e < offsets[u + 1] && costs[e] > limit) e++;
+      cursor[u] = e;
+      if (e < offsets[u + 1]) {
         const w = matchRight[targets[e]];
         if (w < 0) {
           // Flip the path: every vertex on the stack takes the edge its cursor points at.

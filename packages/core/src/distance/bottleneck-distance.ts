@@ -45,8 +45,8 @@ function finiteBottleneck(a: PersistenceDiagram, b: PersistenceDiagram): number 
   candidates.sort();
   const values = candidates.filter((x, i) => i === 0 || x !== candidates[i - 1]);
 
-  const fromA = sortedRows(pairs, n, pairs.left, pairs.right);
-  const fromB = sortedRows(pairs, m, pairs.right, pairs.left);
+  const fromA = rowsOf(pairs, n, pairs.left, pairs.right);
+  const fromB = rowsOf(pairs, m, pairs.right, pairs.left);
   const matchA = new BipartiteMatcher(n, m, fromA.offsets, fromA.targets, fromA.costs);
   const matchB = new BipartiteMatcher(m, n, fromB.offsets, fromB.targets, fromB.costs);
   const farA = new Uint8Array(n);
@@ -70,22 +70,23 @@ function finiteBottleneck(a: PersistenceDiagram, b: PersistenceDiagram): number 
   return values[lo];
 }
 
-/** The pairs as compressed rows from one side, each row sorted by cost. */
-function sortedRows(
+/** The pairs as compressed rows from one side (counting sort by row). */
+function rowsOf(
   pairs: CandidatePairs,
   rows: number,
   from: Int32Array,
   to: Int32Array,
 ): { offsets: Int32Array; targets: Int32Array; costs: Float64Array } {
-  const order = new Int32Array(pairs.count);
-  for (let e = 0; e < pairs.count; e++) order[e] = e;
-  order.sort((x, y) => from[x] - from[y] || pairs.distance[x] - pairs.distance[y]);
   const offsets = new Int32Array(rows + 1);
   for (let e = 0; e < pairs.count; e++) offsets[from[e] + 1]++;
   for (let r = 0; r < rows; r++) offsets[r + 1] += offsets[r];
-  return {
-    offsets,
-    targets: Int32Array.from(order, (e) => to[e]),
-    costs: Float64Array.from(order, (e) => pairs.distance[e]),
-  };
+  const fill = offsets.slice(0, rows);
+  const targets = new Int32Array(pairs.count);
+  const costs = new Float64Array(pairs.count);
+  for (let e = 0; e < pairs.count; e++) {
+    const at = fill[from[e]]++;
+    targets[at] = to[e];
+    costs[at] = pairs.distance[e];
+  }
+  return { offsets, targets, costs };
 }

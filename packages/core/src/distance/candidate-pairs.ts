@@ -1,3 +1,4 @@
+import { DEFAULT_DISTANCE_BYTES, DistanceBudgetError } from "./distance-budget-error.js";
 import type { PersistenceDiagram } from "./persistence-diagram.js";
 
 /** Pairs (a point of one diagram, a point of the other) that an optimal matching may use, with their cost. */
@@ -13,13 +14,15 @@ export interface CandidatePairs {
  * The pairs (i, j) whose L∞ distance c satisfies `keep(i, j, c)`, looking only at points j of `b` whose birth
  * is within `reach[i]` of point i's birth (c ≥ |b_i − b_j|, so pairs beyond that reach cannot be kept).
  * Points of `b` are visited in birth order through a binary search, so short bars far apart are never
- * compared: the diagrams of real barcodes are mostly such bars.
+ * compared: the diagrams of real barcodes are mostly such bars. Throws DistanceBudgetError when the pairs
+ * would take more than `maxBytes`.
  */
 export function candidatePairs(
   a: PersistenceDiagram,
   b: PersistenceDiagram,
   reach: Float64Array,
   keep: (i: number, j: number, c: number) => boolean,
+  maxBytes: number = DEFAULT_DISTANCE_BYTES,
 ): CandidatePairs {
   const m = b.births.length;
   const order = new Int32Array(m);
@@ -39,6 +42,7 @@ export function candidatePairs(
       const c = Math.max(Math.abs(bi - b.births[j]), Math.abs(di - b.deaths[j]));
       if (!keep(i, j, c)) continue;
       if (count === left.length) {
+        if (32 * count > maxBytes) throw new DistanceBudgetError(32 * count, maxBytes);
         left = grow(left, new Int32Array(2 * count));
         right = grow(right, new Int32Array(2 * count));
         distance = grow(distance, new Float64Array(2 * count));

@@ -1,6 +1,5 @@
 export { bottleneckDistance } from "./bottleneck-distance.js";
 export { DEFAULT_DISTANCE_BYTES, DistanceBudgetError } from "./distance-budget-error.js";
-export { minCostAssignment } from "./min-cost-assignment.js";
 export {
   diagramOf,
   type EssentialRule,

@@ -1,10 +1,10 @@
 import { candidatePairs, diagonalDistances } from "./candidate-pairs.js";
-import { DEFAULT_DISTANCE_BYTES, DistanceBudgetError } from "./distance-budget-error.js";
-import { AssignmentScratch, minCostAssignment } from "./min-cost-assignment.js";
+import { DEFAULT_DISTANCE_BYTES } from "./distance-budget-error.js";
 import type { PersistenceDiagram } from "./persistence-diagram.js";
+import { sparseAssignment } from "./sparse-assignment.js";
 
 export interface WassersteinOptions {
-  /** Memory one assignment matrix may take (default 1 GiB); more throws DistanceBudgetError. */
+  /** Memory the candidate pairs may take (default 1 GiB); more throws DistanceBudgetError. */
   readonly maxBytes?: number;
 }
 
@@ -18,10 +18,10 @@ export interface WassersteinOptions {
  * classes are matched among themselves by birth (sorted order is optimal on a line); different numbers of
  * them give Infinity.
  *
- * Exact: a minimum-cost assignment on the diagram-augmented cost matrix. Two reductions keep it small
- * without changing the optimum: a pair whose cost is at least that of sending both points to the diagonal
- * is never needed (the diagonal takes any number of points), and the remaining pairs split the points into
- * independent groups, each solved on its own augmented matrix.
+ * Exact: a minimum-cost assignment with the optimum of the diagram-augmented cost matrix, solved by
+ * shortest augmenting paths over a sparse matrix. A pair whose cost is at least that of sending both points
+ * to the diagonal is never needed (the diagonal takes any number of points) and is left out; in barcodes of
+ * real graphs that leaves a few pairs per point.
  */
 export function wassersteinDistance(
   a: PersistenceDiagram,
@@ -44,92 +44,42 @@ function essentialCost(a: Float64Array, b: Float64Array, p: number): number {
   return sum;
 }
 
-/** min Σ cost^p over matchings of the finite points, the diagonal taking any number of them. */
+/**
+ * min Σ cost^p over matchings of the finite points, the diagonal taking any number of them. Written as a
+ * rectangular assignment: every point of A takes a point j of B (saving B's diagonal cost β_j, so the entry
+ * is c^p − β_j) or its own diagonal slot (α_i); the total adds Σ β_j. This has the same optimum as the
+ * square (n + m) augmented matrix, whose diagonal-to-diagonal block is all zeros.
+ */
 function transportCost(a: PersistenceDiagram, b: PersistenceDiagram, p: number, maxBytes: number): number {
   const n = a.births.length;
   const m = b.births.length;
   const alpha = diagonalDistances(a).map((x) => power(x, p));
   const beta = diagonalDistances(b).map((x) => power(x, p));
-  let betaMax = 0;
-  for (let j = 0; j < m; j++) if (beta[j] > betaMax) betaMax = beta[j];
-  const reach = alpha.map((x) => power(x + betaMax, 1 / p));
-  const pairs = candidatePairs(a, b, reach, (i, j, c) => power(c, p) < alpha[i] + beta[j]);
-
-  // Groups: points joined by a useful pair (union–find over A's points 0..n-1 and B's n..n+m-1).
-  const parent = new Int32Array(n + m);
-  for (let x = 0; x < n + m; x++) parent[x] = x;
-  const find = (x: number): number => {
-    while (parent[x] !== x) {
-      parent[x] = parent[parent[x]];
-      x = parent[x];
-    }
-    return x;
-  };
-  for (let e = 0; e < pairs.count; e++) {
-    const r1 = find(pairs.left[e]);
-    const r2 = find(n + pairs.right[e]);
-    if (r1 !== r2) parent[r1] = r2;
-  }
-
-  // Points of each group, A's first, by counting sort on the root; local index of each point in its group.
-  const group = new Int32Array(n + m);
-  const sizeA = new Int32Array(n + m);
-  const sizeB = new Int32Array(n + m);
-  const local = new Int32Array(n + m);
-  for (let x = 0; x < n + m; x++) {
-    const r = find(x);
-    group[x] = r;
-    local[x] = x < n ? sizeA[r]++ : sizeB[r]++;
-  }
-  const edgeStart = new Int32Array(n + m + 1);
-  for (let e = 0; e < pairs.count; e++) edgeStart[group[pairs.left[e]] + 1]++;
-  for (let r = 0; r < n + m; r++) edgeStart[r + 1] += edgeStart[r];
-  const edgeFill = edgeStart.slice(0, n + m);
-  const edgesByGroup = new Int32Array(pairs.count);
-  for (let e = 0; e < pairs.count; e++) edgesByGroup[edgeFill[group[pairs.left[e]]]++] = e;
-  const membersStart = new Int32Array(n + m + 1);
-  for (let x = 0; x < n + m; x++) membersStart[group[x] + 1]++;
-  for (let r = 0; r < n + m; r++) membersStart[r + 1] += membersStart[r];
-  const memberFill = membersStart.slice(0, n + m);
-  const members = new Int32Array(n + m);
-  for (let x = 0; x < n + m; x++) members[memberFill[group[x]]++] = x;
-
-  const scratch = new AssignmentScratch();
   let total = 0;
-  for (let r = 0; r < n + m; r++) {
-    const nA = sizeA[r];
-    const nB = sizeB[r];
-    if (nA + nB === 0) continue;
-    if (nA === 0 || nB === 0) {
-      // A group without a useful pair: its points go to the diagonal.
-      for (let k = membersStart[r]; k < membersStart[r + 1]; k++) {
-        const x = members[k];
-        total += x < n ? alpha[x] : beta[x - n];
-      }
-      continue;
-    }
-    // Augmented matrix: rows A's points then B's diagonal copies; columns B's points then A's diagonal copies.
-    const N = nA + nB;
-    if (N * N * 8 > maxBytes) throw new DistanceBudgetError(N * N * 8, maxBytes);
-    const cost = new Float64Array(N * N).fill(Infinity);
-    for (let k = membersStart[r]; k < membersStart[r + 1]; k++) {
-      const x = members[k];
-      const l = local[x];
-      if (x < n) cost[l * N + nB + l] = alpha[x];
-      else {
-        const row = (nA + l) * N;
-        cost[row + l] = beta[x - n];
-        cost.fill(0, row + nB, row + N);
-      }
-    }
-    for (let k = edgeStart[r]; k < edgeStart[r + 1]; k++) {
-      const e = edgesByGroup[k];
-      cost[local[pairs.left[e]] * N + local[n + pairs.right[e]]] = power(pairs.distance[e], p);
-    }
-    const columnOf = minCostAssignment(cost, N, scratch);
-    for (let row = 0; row < N; row++) total += cost[row * N + columnOf[row]];
+  let betaMax = 0;
+  for (let j = 0; j < m; j++) {
+    total += beta[j];
+    if (beta[j] > betaMax) betaMax = beta[j];
   }
-  return total;
+  if (n === 0) return total;
+  const reach = alpha.map((x) => power(x + betaMax, 1 / p));
+  // Pairs are found row by row, so they come grouped by A's point, as compressed rows need them.
+  const pairs = candidatePairs(a, b, reach, (i, j, c) => power(c, p) < alpha[i] + beta[j], maxBytes);
+  const offsets = new Int32Array(n + 1);
+  const targets = new Int32Array(pairs.count + n);
+  const costs = new Float64Array(pairs.count + n);
+  let e = 0;
+  for (let i = 0, k = 0; i < n; i++) {
+    for (; k < pairs.count && pairs.left[k] === i; k++, e++) {
+      const j = pairs.right[k];
+      targets[e] = j;
+      costs[e] = power(pairs.distance[k], p) - beta[j];
+    }
+    targets[e] = m + i;
+    costs[e++] = alpha[i];
+    offsets[i + 1] = e;
+  }
+  return total + sparseAssignment(n, m + n, offsets, targets, costs).total;
 }
 
 function power(x: number, p: number): number {

@@ -34,3 +34,4 @@ export { density, edgeCount, nodeLabel, possibleEdgeCount } from "./graph/weight
 export * from "./homology/index.js";
 export { describeProgress, TimeLimitError } from "./work/time-limit-error.js";
 export type { WorkControl, WorkProgress, WorkStage } from "./work/work-control.js";
+export * from "./vectorise/index.js";

@@ -1,4 +1,6 @@
 import { isPrime, MAX_PRIME } from "../homology/prime-field.js";
+import { PERSISTENCE_CURVE_KINDS, type PersistenceCurveKind } from "../vectorise/persistence-curve.js";
+import type { EssentialHandling } from "../vectorise/windowed-diagram.js";
 
 /** Which column families a graph's feature row holds. */
 export interface FeatureFamilies {
@@ -14,7 +16,43 @@ export interface FeatureFamilies {
   readonly barcodeSummaries: boolean;
   /** Plain network statistics; computed outside core (see @cliquescape/io networkStatistics). */
   readonly network: boolean;
+  /** Persistence landscapes, first layers sampled on the axis, per homology dimension (off by default). */
+  readonly landscapes?: boolean;
+  /** Persistence images on a fixed pixel grid over the axis window, per homology dimension (off by default). */
+  readonly images?: boolean;
+  /** Persistence entropy of the bars seen through the axis window, per homology dimension (off by default). */
+  readonly entropy?: boolean;
+  /** Persistence curves (lifespan, normalised lifespan, entropy) on the axis, per dimension (off by default). */
+  readonly persistenceCurves?: boolean;
 }
+
+/**
+ * Settings of the vectorisation families. They read the barcode through the axis window (see
+ * windowedDiagram): bars are clipped to the axis range, so every graph's vectors share one grid.
+ */
+export interface VectorisationConfig {
+  /** Bars that never die: "cut" at the axis's last value, or "drop" them. Default "cut". */
+  readonly essential: EssentialHandling;
+  /** Landscape layers λ_1 … λ_k kept. Default 3. */
+  readonly landscapeLayers: number;
+  /** Pixels along birth and along persistence (a square image). Default 10. */
+  readonly imageResolution: number;
+  /** Gaussian deviation as a fraction of the axis span; null: one pixel (span / resolution). Default null. */
+  readonly imageSigma: number | null;
+  /** Weight of a point: "linear" in persistence (0 on the diagonal, 1 at the full span) or "none". */
+  readonly imageWeighting: "linear" | "none";
+  /** Which persistence curves, in this order. Default all three. */
+  readonly curves: readonly PersistenceCurveKind[];
+}
+
+export const DEFAULT_VECTORISATION: VectorisationConfig = Object.freeze({
+  essential: "cut",
+  landscapeLayers: 3,
+  imageResolution: 10,
+  imageSigma: null,
+  imageWeighting: "linear",
+  curves: PERSISTENCE_CURVE_KINDS,
+});
 
 /**
  * Which filtration the barcode (and so the Betti curves and bar summaries) is taken of: "axis" stops at the
@@ -32,6 +70,13 @@ export interface FeatureConfig {
   readonly prime: number;
   /** Filtration range of the barcode; default "axis". */
   readonly barcodeRange?: BarcodeRange;
+  /** Settings of the vectorisation families; missing fields take DEFAULT_VECTORISATION's. */
+  readonly vectorisation?: Partial<VectorisationConfig>;
+}
+
+/** The vectorisation settings of a configuration, defaults filled in. */
+export function vectorisationOf(config: FeatureConfig): VectorisationConfig {
+  return { ...DEFAULT_VECTORISATION, ...config.vectorisation };
 }
 
 /** A first run: every family on, triangles of triangles (3-simplices) counted, H0..H2 over Z/2. */
@@ -61,12 +106,41 @@ export function checkFeatureConfig(config: FeatureConfig): void {
   if (!isPrime(prime) || prime > MAX_PRIME) {
     throw new RangeError(`prime must be a prime between 2 and ${MAX_PRIME}, got ${prime}`);
   }
+  const v = vectorisationOf(config);
+  if (v.essential !== "cut" && v.essential !== "drop")
+    throw new RangeError(`vectorisation.essential must be "cut" or "drop", got "${v.essential}"`);
+  if (!Number.isInteger(v.landscapeLayers) || v.landscapeLayers < 1 || v.landscapeLayers > 100)
+    throw new RangeError(
+      `vectorisation.landscapeLayers must be an integer in 1..100, got ${v.landscapeLayers}`,
+    );
+  if (!Number.isInteger(v.imageResolution) || v.imageResolution < 1 || v.imageResolution > 200)
+    throw new RangeError(
+      `vectorisation.imageResolution must be an integer in 1..200, got ${v.imageResolution}`,
+    );
+  if (v.imageSigma !== null && !(v.imageSigma > 0 && Number.isFinite(v.imageSigma)))
+    throw new RangeError(`vectorisation.imageSigma must be a positive number or null, got ${v.imageSigma}`);
+  if (v.imageWeighting !== "linear" && v.imageWeighting !== "none")
+    throw new RangeError(
+      `vectorisation.imageWeighting must be "linear" or "none", got "${v.imageWeighting}"`,
+    );
+  for (const kind of v.curves) {
+    if (!(PERSISTENCE_CURVE_KINDS as readonly string[]).includes(kind))
+      throw new RangeError(
+        `unknown persistence curve "${kind}"; choose from ${PERSISTENCE_CURVE_KINDS.join(", ")}`,
+      );
+  }
+}
+
+/** Whether a vectorisation family is on. */
+export function needsVectorisation(config: FeatureConfig): boolean {
+  const f = config.families;
+  return Boolean(f.landscapes || f.images || f.entropy || f.persistenceCurves);
 }
 
 /** Whether the barcode is needed: Betti curves, their summaries and bar summaries all come from it. */
 export function needsBarcode(config: FeatureConfig): boolean {
   const f = config.families;
-  return f.betti || f.curveSummaries || f.barcodeSummaries;
+  return f.betti || f.curveSummaries || f.barcodeSummaries || needsVectorisation(config);
 }
 
 /** Whether the simplex-count sweep is needed. */

@@ -1,6 +1,14 @@
+import type { PersistenceCurveKind } from "../vectorise/persistence-curve.js";
 import { axisLabels } from "./axis-labels.js";
 import type { FeatureAxis } from "./feature-axis.js";
-import type { FeatureConfig } from "./feature-config.js";
+import { type FeatureConfig, vectorisationOf } from "./feature-config.js";
+
+/** The short name of each persistence curve in column names. */
+export const CURVE_KIND_NAMES: Record<PersistenceCurveKind, string> = {
+  lifespan: "lifespan",
+  "normalised-lifespan": "normlife",
+  entropy: "entropy",
+};
 
 /** Statistics read off the bars of each homology dimension, in column order. */
 export const BAR_STATISTICS = [
@@ -41,7 +49,11 @@ export function axisSuffixes(axis: FeatureAxis): string[] {
  * - Euler characteristic: `euler_{axis}`;
  * - Betti numbers: `betti_d{k}_{axis}` for k = 0..topDim−1;
  * - curve summaries: `{curve}_max`, `{curve}_peak_at`, `{curve}_area` for every curve of `curveNames`;
- * - barcode summaries: `bars_d{k}_{count|essential|total_persistence|max_persistence|entropy}`.
+ * - barcode summaries: `bars_d{k}_{count|essential|total_persistence|max_persistence|entropy}`;
+ * - landscapes: `landscape_d{k}_l{j}_{axis}` for layers j = 1..landscapeLayers;
+ * - images: `image_d{k}_b{x}_p{y}`, pixel x along birth and y along persistence, from 0;
+ * - entropy: `entropy_d{k}`;
+ * - persistence curves: `pcurve_{lifespan|normlife|entropy}_d{k}_{axis}`.
  *
  * `{axis}` is `w` or `dens` followed by the axis value (see axisLabels). The network family is not here:
  * its columns come from @cliquescape/io and follow these.
@@ -61,6 +73,21 @@ export function topologicalFeatureNames(config: FeatureConfig, axis: FeatureAxis
   }
   if (families.barcodeSummaries) {
     for (let k = 0; k < topDim; k++) for (const stat of BAR_STATISTICS) names.push(`bars_d${k}_${stat}`);
+  }
+  const v = vectorisationOf(config);
+  if (families.landscapes) {
+    for (let k = 0; k < topDim; k++)
+      for (let j = 1; j <= v.landscapeLayers; j++) curve(`landscape_d${k}_l${j}`);
+  }
+  if (families.images) {
+    const r = v.imageResolution;
+    for (let k = 0; k < topDim; k++)
+      for (let x = 0; x < r; x++) for (let y = 0; y < r; y++) names.push(`image_d${k}_b${x}_p${y}`);
+  }
+  if (families.entropy) for (let k = 0; k < topDim; k++) names.push(`entropy_d${k}`);
+  if (families.persistenceCurves) {
+    for (const kind of v.curves)
+      for (let k = 0; k < topDim; k++) curve(`pcurve_${CURVE_KIND_NAMES[kind]}_d${k}`);
   }
   return names;
 }

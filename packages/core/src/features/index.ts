@@ -6,12 +6,16 @@ export {
   type BarcodeRange,
   checkFeatureConfig,
   DEFAULT_FEATURE_CONFIG,
+  DEFAULT_VECTORISATION,
   type FeatureConfig,
   type FeatureFamilies,
+  type VectorisationConfig,
+  vectorisationOf,
 } from "./feature-config.js";
 export {
   axisSuffixes,
   BAR_STATISTICS,
+  CURVE_KIND_NAMES,
   CURVE_STATISTICS,
   curveNames,
   topologicalFeatureNames,

@@ -13,6 +13,7 @@ import { summarizeBars } from "./bar-summary.js";
 import { summarizeCurve } from "./curve-summary.js";
 import { axisGrid, type FeatureAxis } from "./feature-axis.js";
 import { checkFeatureConfig, type FeatureConfig, needsBarcode, needsSweep } from "./feature-config.js";
+import { vectorisationValues } from "./vectorisation-values.js";
 
 export interface TopologicalFeatureOptions {
   readonly config: FeatureConfig;
@@ -116,6 +117,7 @@ export function topologicalFeatures(
       values.push(s.count, s.essential, s.totalPersistence, s.maxPersistence, s.entropy);
     }
   }
+  if (barcode) vectorisationValues(graph, barcode, options, values);
   return {
     values: Float64Array.from(values),
     grid,

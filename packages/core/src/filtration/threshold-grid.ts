@@ -76,7 +76,7 @@ export function allEdgesGrid(graph: WeightedGraph, semantics: WeightSemantics): 
 }
 
 /** Filtration values of the edges, one per edge (not per stored slot), ascending. */
-function distinctEdgeFiltration(graph: WeightedGraph, semantics: WeightSemantics): Float64Array {
+export function distinctEdgeFiltration(graph: WeightedGraph, semantics: WeightSemantics): Float64Array {
   const f = edgeFiltration(graph, semantics);
   if (graph.directed) return f.sort();
   const once = new Float64Array(edgeCount(graph));

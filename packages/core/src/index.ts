@@ -19,6 +19,7 @@ export {
 export type { WeightSemantics } from "./filtration/weight-semantics.js";
 
 export { fromFiltrationValue, toFiltrationValue } from "./filtration/weight-semantics.js";
+export { type EdgeArrays, edgeArrays } from "./graph/edge-arrays.js";
 export type { DenseMatrixOptions } from "./graph/from-dense-matrix.js";
 export { fromDenseMatrix } from "./graph/from-dense-matrix.js";
 export type { EdgeListInput } from "./graph/from-edge-list.js";
@@ -34,4 +35,5 @@ export { density, edgeCount, nodeLabel, possibleEdgeCount } from "./graph/weight
 export * from "./homology/index.js";
 export { describeProgress, TimeLimitError } from "./work/time-limit-error.js";
 export type { WorkControl, WorkProgress, WorkStage } from "./work/work-control.js";
+export * from "./null-model/index.js";
 export * from "./vectorise/index.js";

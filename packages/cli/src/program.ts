@@ -2,6 +2,7 @@ import { Command } from "commander";
 import { barcodeCommand } from "./commands/barcode.js";
 import { extractCommand } from "./commands/extract.js";
 import { inspectCommand } from "./commands/inspect.js";
+import { nullmodelCommand } from "./commands/nullmodel.js";
 import { sweepCommand } from "./commands/sweep.js";
 import { VERSION } from "./version.js";
 
@@ -16,7 +17,8 @@ export function createProgram(): Command {
     .addCommand(inspectCommand())
     .addCommand(sweepCommand())
     .addCommand(barcodeCommand())
-    .addCommand(extractCommand());
+    .addCommand(extractCommand())
+    .addCommand(nullmodelCommand());
   program.addHelpText(
     "after",
     `

@@ -10,3 +10,4 @@ export {
 export { compareWithNull, type NullComparison } from "./null-statistics.js";
 export { type SampleRandom, sampleRandom } from "./sample-random.js";
 export { shuffleWeights } from "./shuffle-weights.js";
+export { type NullFeatureOptions, nullFeatureNames, nullFeatures } from "./null-features.js";

@@ -1,5 +1,6 @@
 import { Command } from "commander";
 import { barcodeCommand } from "./commands/barcode.js";
+import { distancesCommand } from "./commands/distances.js";
 import { extractCommand } from "./commands/extract.js";
 import { inspectCommand } from "./commands/inspect.js";
 import { nullmodelCommand } from "./commands/nullmodel.js";
@@ -18,7 +19,8 @@ export function createProgram(): Command {
     .addCommand(sweepCommand())
     .addCommand(barcodeCommand())
     .addCommand(extractCommand())
-    .addCommand(nullmodelCommand());
+    .addCommand(nullmodelCommand())
+    .addCommand(distancesCommand());
   program.addHelpText(
     "after",
     `

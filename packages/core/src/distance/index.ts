@@ -1,6 +1,7 @@
 export { bottleneckDistance } from "./bottleneck-distance.js";
 export { DEFAULT_DISTANCE_BYTES, DistanceBudgetError } from "./distance-budget-error.js";
 export {
+  type BarsOf,
   diagramOf,
   type EssentialRule,
   finiteDiagram,

@@ -26,8 +26,14 @@ export type EssentialRule =
   | { readonly kind: "drop" }
   | { readonly kind: "cut"; readonly at: number };
 
+/** The bars a diagram is read from: a Barcode, or a barcode file's bars and weight semantics. */
+export interface BarsOf {
+  readonly semantics: Barcode["semantics"];
+  readonly bars: readonly { readonly dim: number; readonly birth: number; readonly death: number | null }[];
+}
+
 /** The diagram of the bars of dimension `dim`, essential bars handled by `rule`. */
-export function diagramOf(barcode: Barcode, dim: number, rule: EssentialRule): PersistenceDiagram {
+export function diagramOf(barcode: BarsOf, dim: number, rule: EssentialRule): PersistenceDiagram {
   const { semantics } = barcode;
   const births: number[] = [];
   const deaths: number[] = [];

@@ -1,5 +1,6 @@
 export { type RewiredGraph, type RewireOptions, rewireDegreePreserving } from "./degree-preserving-rewire.js";
 export { erdosRenyiSample } from "./erdos-renyi.js";
+export { type NullFeatureOptions, nullFeatureNames, nullFeatures } from "./null-features.js";
 export {
   NULL_MODELS,
   type NullModel,
@@ -10,4 +11,3 @@ export {
 export { compareWithNull, type NullComparison } from "./null-statistics.js";
 export { type SampleRandom, sampleRandom } from "./sample-random.js";
 export { shuffleWeights } from "./shuffle-weights.js";
-export { type NullFeatureOptions, nullFeatureNames, nullFeatures } from "./null-features.js";

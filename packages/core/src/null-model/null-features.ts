@@ -53,10 +53,7 @@ export function nullFeatures(graph: WeightedGraph, options: NullFeatureOptions):
   });
   const values = new Float64Array(3 * topDim + 1);
   for (let k = 0; k <= topDim; k++) values[k] = k < counts.counts.length ? counts.counts[k] : 0;
-  const betti =
-    threshold === undefined
-      ? bettiOfAll(barcode, topDim)
-      : bettiFromBarcode(barcode, threshold);
+  const betti = threshold === undefined ? bettiOfAll(barcode, topDim) : bettiFromBarcode(barcode, threshold);
   for (let k = 0; k < topDim; k++) values[topDim + 1 + k] = betti[k];
   const curves = bettiCurves(barcode, grid);
   const T = curves.length;

@@ -128,7 +128,7 @@ export function extractCommand(): Command {
     .addOption(
       new Option(
         "--families <list>",
-        "feature families to include, comma-separated (default: all)",
+        "feature families, comma-separated (default: simplexCounts,euler,betti,curveSummaries,barcodeSummaries,network; also landscapes,images,entropy,persistenceCurves)",
       ).argParser((text) => text.split(",").map((s) => s.trim())),
     )
     .addOption(new Option("--no-bundles", "do not write GNN bundles"))

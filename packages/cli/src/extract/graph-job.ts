@@ -46,6 +46,7 @@ export function featureConfigOf(spec: ResolvedRunSpec): FeatureConfig {
     topDim: spec.complex.topDim,
     prime: spec.complex.prime,
     barcodeRange: spec.complex.barcodeRange,
+    vectorisation: spec.vectorisation,
   };
 }
 

@@ -86,6 +86,10 @@ const FAMILIES = [
   "curveSummaries",
   "barcodeSummaries",
   "network",
+  "landscapes",
+  "images",
+  "entropy",
+  "persistenceCurves",
 ] as const;
 
 function familiesFromList(list: string[]): Raw {

@@ -90,6 +90,25 @@ export const FamiliesSchema = z
     curveSummaries: z.boolean().default(true),
     barcodeSummaries: z.boolean().default(true),
     network: z.boolean().default(true),
+    /** Vectorisations of the barcode (off by default): see docs/features.md. */
+    landscapes: z.boolean().default(false),
+    images: z.boolean().default(false),
+    entropy: z.boolean().default(false),
+    persistenceCurves: z.boolean().default(false),
+  })
+  .prefault({});
+
+/** Settings of the vectorisation families (DEFAULT_VECTORISATION in core). */
+export const VectorisationSchema = z
+  .strictObject({
+    essential: z.enum(["cut", "drop"]).default("cut"),
+    landscapeLayers: z.number().int().min(1).max(100).default(3),
+    imageResolution: z.number().int().min(1).max(200).default(10),
+    imageSigma: z.number().positive().nullable().default(null),
+    imageWeighting: z.enum(["linear", "none"]).default("linear"),
+    curves: z
+      .array(z.enum(["lifespan", "normalised-lifespan", "entropy"]))
+      .default(["lifespan", "normalised-lifespan", "entropy"]),
   })
   .prefault({});
 
@@ -118,6 +137,7 @@ export const RunSpecSchema = z.strictObject({
   resolvedGrid: ResolvedGridSchema.optional(),
   nodeFeatures: z.strictObject({ threshold: NodeThresholdSchema }).prefault({}),
   families: FamiliesSchema,
+  vectorisation: VectorisationSchema,
   outputs: OutputsSchema,
   /** Label names in code order (y = index); resolved from the dataset when absent. */
   labelNames: z.array(z.string()).optional(),

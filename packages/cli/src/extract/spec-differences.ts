@@ -11,6 +11,7 @@ const COMPARED_KEYS = [
   "resolvedGrid",
   "nodeFeatures",
   "families",
+  "vectorisation",
   "outputs",
   "labelNames",
   "nodeLayout",

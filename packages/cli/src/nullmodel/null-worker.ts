@@ -42,7 +42,7 @@ export function nullBlock(setup: NullSetup, task: NullTask): NullReply {
   }
   const width = rows[0]?.length ?? 0;
   const values = new Float64Array(rows.length * width);
-  rows.forEach((row, i) => values.set(row, i * width));
+  for (let i = 0; i < rows.length; i++) values.set(rows[i], i * width);
   return { from: task.from, values, swaps, refused };
 }
 

@@ -54,7 +54,7 @@ describe("time limits", () => {
     ).toThrow(TimeLimitError);
   });
 
-  it("stop a barcode of a complete 160-vertex graph to H2 while listing or reducing", () => {
+  it("stop a barcode of a complete 160-vertex graph to H2 with the stage it was in", () => {
     let error: unknown;
     const started = Date.now();
     try {
@@ -64,8 +64,8 @@ describe("time limits", () => {
     }
     expect(error).toBeInstanceOf(TimeLimitError);
     const { progress } = error as TimeLimitError;
+    // Where it stops depends on the machine's speed; that it stops soon with a stage does not.
     expect(["listing simplices", "reducing columns", "pairing components"]).toContain(progress.stage);
-    expect(progress.dim).toBeGreaterThanOrEqual(1);
     expect((error as Error).message).toMatch(/^time limit of 0\.1 s reached while .* of dimension \d/);
     expect(Date.now() - started).toBeLessThan(10_000);
   });

@@ -1,4 +1,5 @@
 import { CommanderError } from "commander";
+import { cliMessage } from "./cli-message.js";
 import { exitCodeFor } from "./exit-codes.js";
 import { createProgram } from "./program.js";
 
@@ -16,6 +17,6 @@ try {
     error instanceof Error && error.name === "TimeLimitError"
       ? "; raise --time-limit (seconds, 0: no limit), lower --top-dim or keep fewer edges"
       : "";
-  process.stderr.write(`cliquescape: ${message}${hint}\n`);
+  process.stderr.write(`cliquescape: ${cliMessage(message)}${hint}\n`);
   process.exit(exitCodeFor(error));
 }

@@ -57,6 +57,8 @@ export {
   DEFAULT_MAX_CELLS,
   DEFAULT_MAX_NPY_BYTES,
   DEFAULT_MAX_TEXT_BYTES,
+  nanIsNoEdge,
+  negativePolicy,
   zeroIsEdge,
 } from "./read-options.js";
 export type { Delimiter, TextRow } from "./text-rows.js";

@@ -1,12 +1,13 @@
 import { availableParallelism } from "node:os";
 import { Command, Option } from "commander";
+import { cliMessage } from "../cli-message.js";
 import { exitCodeFor } from "../exit-codes.js";
 import { InterruptedError } from "../extract/interrupted-error.js";
 import { optionsToSpec } from "../extract/options-to-spec.js";
 import { runExtract } from "../extract/run-extract.js";
 import { EDGE_TRANSFORMS } from "../extract/run-spec.js";
 import { timeLimitOption } from "../options/complex-options.js";
-import { finiteNumber, nonNegativeInteger, numberList, UsageError } from "../options/graph-options.js";
+import { finiteNumber, numberList, positiveInteger, UsageError } from "../options/graph-options.js";
 
 export function extractCommand(): Command {
   const command = new Command("extract")
@@ -50,20 +51,39 @@ export function extractCommand(): Command {
     .addOption(
       new Option(
         "--symmetrize <how>",
-        "merge a_ij and a_ji of asymmetric matrices read as undirected",
+        "merge a_ij and a_ji of a matrix read as undirected when they differ by more than a relative 1e-9 (closer values are one weight, their mean); default error: refuse the graph",
       ).choices(["error", "max", "min", "mean"]),
     )
     .addOption(
       new Option(
         "--negatives <how>",
-        "negative weights: refuse, absolute value, drop the edge, or keep",
-      ).choices(["error", "abs", "drop", "keep"]),
+        "negative weights: auto (default) drops negative similarities, as 0 is no edge, and refuses negative distances; or refuse, absolute value, drop the edge, keep",
+      ).choices(["auto", "error", "abs", "drop", "keep"]),
     )
     .addOption(
       new Option(
-        "--zero-edges <rule>",
-        "is a 0 read from a file an edge (auto: no for similarities)",
-      ).choices(["auto", "edge", "no-edge"]),
+        "--zero-edges [rule]",
+        "is a 0 read from a file an edge? auto (default): not for similarities, yes for distances; the option alone: edge",
+      )
+        .choices(["auto", "edge", "no-edge"])
+        .preset("edge"),
+    )
+    .addOption(
+      new Option(
+        "--nan-cells <rule>",
+        "NaN weights (corrcoef of a constant signal): no edge (default), or refuse the graph",
+      ).choices(["no-edge", "error"]),
+    )
+    .addOption(
+      new Option("--max-nodes <n>", "largest matrix read, in nodes (default 8192)").argParser(
+        positiveInteger,
+      ),
+    )
+    .addOption(
+      new Option(
+        "--max-file <MiB>",
+        "largest graph file read (default: 256 for text, 2048 for .npy .npz .mat)",
+      ).argParser(positiveInteger),
     )
     .addOption(
       new Option("--transform <f>", "edge-value transform before the semantics: 1−w, −log w, 1/w").choices([
@@ -188,17 +208,11 @@ async function extractAction(
       return;
     }
     const message = error instanceof Error ? error.message : String(error);
-    process.stderr.write(`cliquescape: ${message}\n`);
+    process.stderr.write(`cliquescape: ${cliMessage(message)}\n`);
     process.exitCode = exitCodeFor(error);
   } finally {
     process.off("SIGINT", onInterrupt);
   }
-}
-
-function positiveInteger(text: string): number {
-  const value = nonNegativeInteger(text);
-  if (value < 1) throw new UsageError(`expected a whole number ≥ 1, got "${text}"`);
-  return value;
 }
 
 function quantilePair(text: string): [number, number] {

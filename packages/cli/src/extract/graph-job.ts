@@ -17,6 +17,7 @@ import {
   type NodeCoordinates,
   type NpzArray,
 } from "@cliquescape/io";
+import { cliMessage } from "../cli-message.js";
 import { type BarcodeReport, renderBarcode } from "../commands/barcode.js";
 import { type GraphFailure, graphFailureOf } from "./graph-failure.js";
 import { readPreparedGraph } from "./read-prepared-graph.js";
@@ -64,7 +65,7 @@ export function computeGraph(
   let warnings: string[] = [];
   try {
     const read = readPreparedGraph(entry, spec.preparation);
-    warnings = read.warnings;
+    warnings = read.warnings.map(cliMessage);
     const { graph, coordinates } = read;
     const semantics = spec.preparation.weights;
     const features = graphFeatures(graph, {

@@ -48,7 +48,11 @@ export interface ExtractResult {
  */
 export async function runExtract(request: ExtractRequest): Promise<ExtractResult> {
   const requested = validateSpec(request.spec, request.specSource);
-  const dataset = openDataset(request.dataset, request.datasetOptions);
+  const maxFileMiB = requested.preparation.maxFileMiB;
+  const dataset = openDataset(request.dataset, {
+    ...request.datasetOptions,
+    ...(maxFileMiB === null ? {} : { maxBytes: maxFileMiB * 2 ** 20 }),
+  });
   // Files are named relative to the dataset's folder, so records and tables do not depend on where it sits.
   const base = dataset.kind === "folder" ? dataset.root : dirname(dataset.root);
   const relativeFile = (file: string) => relative(base, file).split(sep).join("/");

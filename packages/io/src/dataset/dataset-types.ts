@@ -44,6 +44,8 @@ export interface OpenDatasetOptions {
   coordinatesFile?: string;
   /** For a .npz or .mat stack: the array or variable to use. Default: the only 2-D/3-D numeric one. */
   variable?: string;
+  /** For a stack: refuse a file larger than this many bytes (default as for readGraphFile). */
+  maxBytes?: number;
 }
 
 /** "file:12:3: reason" — a problem in the form editors and compilers use. */

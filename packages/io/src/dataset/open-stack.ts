@@ -10,8 +10,13 @@ import { loadStack } from "./stack-source.js";
  * One entry per graph of a stack file (3-D .npy, .npz or .mat): ids `<stem>-<k>`, k zero-padded to the
  * width of the last index so that ids sort in slice order. Labels come from an optional labels file.
  */
-export function openStackDataset(file: string, labelsFile?: string, variable?: string): Dataset {
-  const source = loadStack(file, variable);
+export function openStackDataset(
+  file: string,
+  labelsFile?: string,
+  variable?: string,
+  maxBytes?: number,
+): Dataset {
+  const source = loadStack(file, variable, maxBytes);
   const { shape } = source.array;
   if (shape.length !== 2 && shape.length !== 3) {
     throw new InputFileError(

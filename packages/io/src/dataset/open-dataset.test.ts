@@ -84,6 +84,26 @@ describe("a folder", () => {
   });
 });
 
+describe("a folder holding a manifest", () => {
+  it("is read through its manifest (the layout of demo-data/), not as a folder of graphs", () => {
+    put("with-manifest/graphs/g1.csv", TRIANGLE);
+    put("with-manifest/manifest.csv", "id,file,label\ng1,graphs/g1.csv,x\n");
+    put("with-manifest/edges.csv", "source,target,weight\na,b,1\n");
+    const dataset = openDataset(join(root, "with-manifest"));
+    expect(dataset.kind).toBe("manifest");
+    expect(dataset.root).toBe(join(root, "with-manifest", "manifest.csv"));
+    expect(dataset.entries.map((e) => [e.id, e.label])).toEqual([["g1", "x"]]);
+  });
+
+  it("with several manifests, asks which one", () => {
+    put("two-manifests/train.csv", "ID,File\n");
+    put("two-manifests/test.tsv", "id\tfile\tlabel\n");
+    expect(errorOf(() => openDataset(join(root, "two-manifests"))).message).toBe(
+      `${join(root, "two-manifests")}: the folder holds 2 manifests (test.tsv, train.csv); pass the one to use`,
+    );
+  });
+});
+
 describe("a manifest", () => {
   put("m/graphs/g1.csv", TRIANGLE);
   put("m/graphs/g2.txt", PATH);

@@ -9,6 +9,7 @@ const REMEDIES: readonly [RegExp, string][] = [
   [/raise maxCells if you have the memory/, "raise --max-nodes if you have the memory"],
   [/raise maxBytes if you have the memory/, "raise --max-file (MiB) if you have the memory"],
   [/set zeroIsEdge to keep them/, "pass --zero-edges to keep them"],
+  [/with the labelsColumn option/, "with --labels-column"],
   [
     /read it as directed or choose a symmetri[sz]e policy \(max, min, mean\)/,
     "read it with --directed, or merge the two values with --symmetrize max|min|mean",

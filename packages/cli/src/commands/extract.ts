@@ -27,7 +27,15 @@ export function extractCommand(): Command {
     )
     .requiredOption("--out <dir>", "run folder to write (created; an existing one is resumed)")
     .addOption(new Option("--spec <file>", "run spec JSON: a partial one, or a previous run's spec.json"))
-    .addOption(new Option("--labels <file>", "for a stack: one label per slice (or a CSV with id,label)"))
+    .addOption(
+      new Option(
+        "--labels <file>",
+        "for a stack: one label per line in slice order, or a table with a header (id,label, or a participants table): the stack's ids, or your own ids naming the slices in order",
+      ),
+    )
+    .addOption(
+      new Option("--labels-column <name>", "the column of --labels holding the labels (default: label)"),
+    )
     .addOption(
       new Option("--coordinates <file>", "node coordinates CSV (node,x,y[,z]) for graphs without their own"),
     )
@@ -195,6 +203,7 @@ async function extractAction(
       specSource: source,
       datasetOptions: {
         labelsFile: raw.labels as string | undefined,
+        labelsColumn: raw.labelsColumn as string | undefined,
         coordinatesFile: raw.coordinates as string | undefined,
         variable: raw.variable as string | undefined,
       },

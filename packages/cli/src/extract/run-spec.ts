@@ -163,6 +163,7 @@ export const RunSpecSchema = z.strictObject({
   datasetOptions: z
     .strictObject({
       labelsFile: z.string().optional(),
+      labelsColumn: z.string().optional(),
       coordinatesFile: z.string().optional(),
       variable: z.string().optional(),
     })

@@ -295,6 +295,37 @@ describe("a stack", () => {
     );
   });
 
+  it("a table of the user's own ids names the slices in order: ids, labels, split and metadata", () => {
+    const own = put("s/own.csv", "id,label,split\nsub-01,ring,train\nsub-02,,test\nsub-03,islands,train\n");
+    const dataset = openDataset(npy, { labelsFile: own });
+    expect(dataset.entries.map((e) => [e.id, e.slice, e.label, e.split])).toEqual([
+      ["sub-01", 0, "ring", "train"],
+      ["sub-02", 1, null, "test"],
+      ["sub-03", 2, "islands", "train"],
+    ]);
+    expect(dataset.problems).toEqual([]);
+    const tooFew = put("s/own-short.csv", "id,label\nsub-01,ring\nsub-02,ring\n");
+    expect(errorOf(() => openDataset(npy, { labelsFile: tooFew })).reason).toBe(
+      '2 rows for a stack of 3 graphs: ids such as "sub-01" are not the stack\'s (subjects-0 … subjects-2), so the rows must name the slices in order, one row per slice',
+    );
+  });
+
+  it("a participants table (BIDS participants.tsv: participant_id, then any columns) with the labels column named", () => {
+    const tsv = put(
+      "s/participants.tsv",
+      "participant_id\tage\tgroup\nsub-01\t34\tcontrol\nsub-02\t51\tpatient\nsub-03\t29\tcontrol\n",
+    );
+    const dataset = openDataset(npy, { labelsFile: tsv, labelsColumn: "group" });
+    expect(dataset.entries.map((e) => [e.id, e.label, e.metadata])).toEqual([
+      ["sub-01", "control", { age: "34" }],
+      ["sub-02", "patient", { age: "51" }],
+      ["sub-03", "control", { age: "29" }],
+    ]);
+    expect(errorOf(() => openDataset(npy, { labelsFile: tsv })).message).toBe(
+      `${tsv}:1: the header has no "label" column (it has participant_id, age, group); name the column of labels with the labelsColumn option`,
+    );
+  });
+
   it("an error in one slice names the slice and its element", () => {
     const bad = values.slice();
     bad[2 * 9 + 1] = Number.NaN;

@@ -35,6 +35,7 @@ export function openDataset(path: string, options: OpenDatasetOptions = {}): Dat
       options.labelsFile && resolve(options.labelsFile),
       options.variable,
       options.maxBytes,
+      options.labelsColumn,
     );
   } else {
     throw new InputFileError(

@@ -60,26 +60,28 @@ print(json.dumps({
   "y_dtype": str(z["y"].dtype), "y": z["y"].tolist(),
   "ids": z["ids"].tolist(), "ids_kind": z["ids"].dtype.kind,
   "feature_names": z["feature_names"].tolist(), "label_names": z["label_names"].tolist(),
-  "splits": z["splits"].tolist(),
+  "splits": z["splits"].tolist(), "truncated": z["truncated"].tolist(),
 }))`,
       [join(dir, "run", "features.npz")],
     ) as Record<string, never>;
     const rows = table.rows;
-    const F = table.header.length - 3;
-    expect(loaded.keys).toEqual(["X", "feature_names", "ids", "label_names", "splits", "y"]);
+    const F = table.header.length - 4;
+    expect(loaded.keys).toEqual(["X", "feature_names", "ids", "label_names", "splits", "truncated", "y"]);
+    expect(table.header.slice(0, 4)).toEqual(["id", "label", "split", "truncated"]);
+    expect(loaded.truncated).toEqual(rows.map((r) => (r[3] === "true" ? 1 : 0)));
     expect(loaded.X_dtype).toBe("float64");
     expect(loaded.X_shape).toEqual([rows.length, F]);
     expect(loaded.y_dtype).toBe("int64");
     expect(loaded.ids_kind).toBe("U");
     expect(loaded.ids).toEqual(rows.map((r) => r[0]));
-    expect(loaded.feature_names).toEqual(table.header.slice(3));
+    expect(loaded.feature_names).toEqual(table.header.slice(4));
     expect(loaded.label_names).toEqual(["alpha", "beta", "gamma"]);
     expect(loaded.y).toEqual(rows.map((r) => ["alpha", "beta", "gamma"].indexOf(r[1])));
     expect(loaded.splits).toEqual(rows.map((r) => r[2]));
     // Exact: the CSV holds the shortest round-trip text of each double; Python's repr is the same kind of text.
     (loaded.X as string[][]).forEach((row, i) => {
       row.forEach((text, j) => {
-        expect(Number(text), `${rows[i][0]} ${table.header[3 + j]}`).toBe(Number(rows[i][3 + j]));
+        expect(Number(text), `${rows[i][0]} ${table.header[4 + j]}`).toBe(Number(rows[i][4 + j]));
       });
     });
   });

@@ -37,7 +37,8 @@ export function readLabelsFile(path: string, labelsColumn?: string): StackLabels
   const rows = textRows(text, delimiter === "whitespace" ? "," : delimiter, path);
   const header = rows.next();
   const names = header.done ? [] : header.value.cells.map((c) => c.trim().toLowerCase());
-  const idColumn = names.findIndex((name) => name === ID_COLUMNS.find((id) => names.includes(id)));
+  const idName = ID_COLUMNS.find((id) => names.includes(id));
+  const idColumn = idName === undefined ? -1 : names.indexOf(idName);
   if (header.done || idColumn < 0) {
     if (labelsColumn !== undefined) {
       throw new InputFileError(

@@ -19,11 +19,12 @@ export function extractCommand(): Command {
         "barcodes and GNN bundles, errors.csv and spec.json. Graphs run in parallel on worker threads. Running " +
         "the same command again skips finished graphs; Ctrl-C keeps every finished graph. Settings come from " +
         "--spec (a JSON file, e.g. a previous run's spec.json) with the options below laid over it; see " +
-        "docs/extract.md.",
+        "docs/extract.md. Graph files read: dense matrices and edge lists (.csv .tsv .txt), NumPy (.npy .npz), " +
+        "MATLAB (.mat), GraphML (.graphml) and GEXF (.gexf).",
     )
     .argument(
       "<dataset>",
-      "manifest CSV/TSV (id,file[,label,split,directed,coords,…]), folder of graph files, or stack (.npy .npz .mat)",
+      "manifest CSV/TSV (id,file[,label,split,directed,coords,…]), folder of graph files (or holding one manifest), or stack (.npy .npz .mat)",
     )
     .requiredOption("--out <dir>", "run folder to write (created; an existing one is resumed)")
     .addOption(new Option("--spec <file>", "run spec JSON: a partial one, or a previous run's spec.json"))
@@ -168,8 +169,13 @@ Examples:
   cliquescape extract demo-data/manifest.csv --out out/demo
   cliquescape extract scans/ --out runs/a --weights distance --transform one-minus --top-dim 2
   cliquescape extract new-subjects.csv --out runs/b --spec runs/a/spec.json
-Exit codes: 0 all graphs done; 1 some graph left out (see errors.csv); 2 bad command line or spec, or the
-run folder holds other settings; 130 interrupted (finished graphs kept).`,
+  cliquescape extract cohort.npy --labels participants.tsv --labels-column group --out runs/c
+
+Exit codes:
+  0    every graph is in the tables
+  1    some graph was left out (see errors.csv), or no graph could be read
+  2    bad command line or spec, or the run folder holds results made under other settings
+  130  interrupted (finished graphs kept)`,
   );
   command.action((dataset: string, raw: Record<string, unknown>, self: Command) => {
     const given = (name: string) => self.getOptionValueSource(name) === "cli";

@@ -1,6 +1,6 @@
 import { type Command, Option } from "commander";
 import type { RunSpec } from "../extract/run-spec.js";
-import { type Given, nonNegativeInteger, UsageError } from "./graph-options.js";
+import { type Given, nonNegativeInteger, positiveInteger, UsageError } from "./graph-options.js";
 
 /** Homology goes up to this dimension unless --top-dim says otherwise (H0, H1, H2). */
 export const DEFAULT_HOMOLOGY_DIM = 2;
@@ -39,7 +39,7 @@ export function addComplexOptions(command: Command): Command {
     )
     .addOption(
       new Option("--memory <MiB>", "memory the homology computation may hold (default 2048)").argParser(
-        nonNegativeInteger,
+        positiveInteger,
       ),
     )
     .addOption(timeLimitOption());

@@ -1,10 +1,11 @@
 """Correlation matrices written the way users write them, for test/cli/numpy-inputs.test.ts.
 
 Reads JSON on stdin: {"dir": folder, "files": [{"name", "nodes", "samples", "seed", "constant": [rows],
-"perturb": [i, j, delta] (optional), "format": "npy" | "txt"}], "stack": {"name", "graphs", "nodes",
+"perturb": delta (optional), "format": "npy" | "txt"}], "stack": {"name", "graphs", "nodes",
 "samples", "seed"} (optional)}. Each matrix is numpy.corrcoef of seeded Gaussian time series (rows =
 nodes); rows listed in "constant" are constant signals, whose correlations numpy returns as NaN (with a
-RuntimeWarning). "npy" files are written by numpy.save, "txt" by numpy.savetxt with its defaults (format
+RuntimeWarning). "perturb" adds delta to the first cell (i, j), i < j, holding a correlation above 0.1 (an
+edge under every default) and reports i, j and both cells as Python prints them. "npy" files are written by numpy.save, "txt" by numpy.savetxt with its defaults (format
 %.18e, space-separated, NaN as "nan"); a stack is numpy.save of numpy.stack of such matrices.
 
 Writes JSON, per file (and per stack slice): facts computed by numpy on the matrix as saved: pairs whose
@@ -53,9 +54,9 @@ out = {}
 for f in spec["files"]:
     c = corrcoef(f["nodes"], f["samples"], f["seed"], f.get("constant", []))
     if "perturb" in f:
-        i, j, delta = f["perturb"]
-        c[i, j] += delta
-        out[f["name"] + ":perturbed"] = [repr(float(c[i, j])), repr(float(c[j, i]))]
+        i, j = [int(x[0]) for x in np.nonzero(np.triu(c > 0.1, 1))]
+        c[i, j] += f["perturb"]
+        out[f["name"] + ":perturbed"] = [i, j, repr(float(c[i, j])), repr(float(c[j, i]))]
     path = os.path.join(spec["dir"], f["name"])
     if f.get("format", "npy") == "npy":
         np.save(path, c)

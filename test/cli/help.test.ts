@@ -30,7 +30,7 @@ describe("cliquescape COMMAND --help", () => {
       const help = wideHelp(command);
       for (const option of command.options)
         expect(help).toMatch(
-          new RegExp(`${option.flags.replace(/[[\]|]/g, "\\$&")} +${escape(option.description)}`),
+          new RegExp(`${option.flags.replace(/[[\]|]/g, "\\$&")} +${literal(option.description)}`),
         );
     },
   );
@@ -49,6 +49,6 @@ describe("cliquescape COMMAND --help", () => {
   });
 });
 
-function escape(text: string): string {
+function literal(text: string): string {
   return text.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
 }

@@ -14,18 +14,9 @@ import { spawnSync } from "node:child_process";
 import { writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
+import { missingPythonModules, PYTHON } from "../support/python.js";
 import { readFeatureTable, SMALL_DATASET, similarityDataset } from "./extract-fixtures.js";
 import { runCli } from "./run-cli.js";
-
-const PYTHON = "/usr/bin/python3";
-
-function probe(module: string): string | null {
-  const run = spawnSync(PYTHON, ["-c", `import ${module}`], { encoding: "utf8" });
-  if (run.error) return `${PYTHON} not found`;
-  return run.status === 0
-    ? null
-    : `python3-${module} is not installed (apt-get install -y python3-${module})`;
-}
 
 function python(script: string, args: string[]): unknown {
   const run = spawnSync(PYTHON, ["-c", script, ...args], { encoding: "utf8" });
@@ -33,12 +24,8 @@ function python(script: string, args: string[]): unknown {
   return JSON.parse(run.stdout);
 }
 
-const numpyMissing = probe("numpy");
-const torchMissing = numpyMissing ?? probe("torch");
-if (torchMissing) {
-  // Loud on purpose: the GNN check is one of the job's acceptance checks.
-  console.warn(`\n*** SKIPPING the torch forward-pass check of extract bundles: ${torchMissing} ***\n`);
-}
+const numpyMissing = missingPythonModules(["numpy"]);
+const torchMissing = missingPythonModules(["numpy", "torch"]);
 
 describe.skipIf(numpyMissing !== null)(`extract outputs in numpy ${numpyMissing ?? ""}`, () => {
   let dir: string;

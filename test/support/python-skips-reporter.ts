@@ -50,14 +50,13 @@ export function pythonSkipsLine(
     if (count === 0) continue;
     skipped += count;
     files.push(`${relative(process.cwd(), module.moduleId)} (${count})`);
+    for (const m of modulesOf.get(module.moduleId) ?? []) packages.add(debianPackage(m));
   }
   if (skipped === 0) return null;
-  const packages = [
-    ...new Set(["python3", ...[...modulesOf.values()].flatMap((s) => [...s].map(debianPackage))]),
-  ];
+  const list = [...packages];
   return (
-    `SKIPPED ${skipped} reference check${skipped === 1 ? "" : "s"} that need Debian's ${packages.join(", ")}: ` +
-    `${files.join(", ")}. Install them with: sudo apt-get install -y ${packages.join(" ")}`
+    `SKIPPED ${skipped} reference check${skipped === 1 ? "" : "s"} that need Debian's ${list.join(", ")}: ` +
+    `${files.join(", ")}. Install them with: sudo apt-get install -y ${list.join(" ")}`
   );
 }
 

@@ -5,6 +5,7 @@ export type {
   OpenDatasetOptions,
 } from "./dataset/dataset-types.js";
 export { formatDatasetProblem } from "./dataset/dataset-types.js";
+export { findManifests } from "./dataset/find-manifests.js";
 export { GRAPH_FILE_EXTENSIONS, isGraphFileName } from "./dataset/graph-file-extensions.js";
 export { hashFile } from "./dataset/hash-file.js";
 export { openDataset } from "./dataset/open-dataset.js";

@@ -223,20 +223,6 @@ describe.skipIf(missing !== null)(`numpy's corrcoef files, default options ${mis
     });
 
     it("undirected bundles have one degree column (no simplices_d1), equal to numpy's positive degree", () => {
-      const out = spawnSync(
-        PYTHON,
-        [
-          "-c",
-          "import json,sys,numpy as np; b=np.load(sys.argv[1]); print(json.dumps({'names': b['node_feature_names'].tolist(), 'x': b['x'].tolist()}))",
-          file("run-folder/bundles/c01.npz"),
-        ],
-        { encoding: "utf8" },
-      );
-      const bundle = JSON.parse(out.stdout) as { names: string[]; x: number[][] };
-      expect(bundle.names.slice(0, 3)).toEqual(["degree", "strength", "simplices_d2"]);
-      expect(bundle.names).not.toContain("simplices_d1");
-      expect(new Set(bundle.names).size).toBe(bundle.names.length);
-      // The run read node features at density 0.1: compare with --node-all-edges instead.
       const all = runCli([
         "extract",
         file("cohort/manifest.csv"),
@@ -245,18 +231,22 @@ describe.skipIf(missing !== null)(`numpy's corrcoef files, default options ${mis
         "--node-all-edges",
       ]);
       expect(all.status).toBe(0);
-      const whole = JSON.parse(
-        spawnSync(
-          PYTHON,
-          [
-            "-c",
-            "import json,sys,numpy as np; print(json.dumps(np.load(sys.argv[1])['x'][:, 0].tolist()))",
-            file("run-all/bundles/c01.npz"),
-          ],
-          { encoding: "utf8" },
-        ).stdout,
+      const read = spawnSync(
+        PYTHON,
+        [
+          "-c",
+          "import json,sys,numpy as np; print(json.dumps([{'names': b['node_feature_names'].tolist(), 'degree': b['x'][:, 0].tolist()} for b in map(np.load, sys.argv[1:])]))",
+          ...COHORT.map((id) => file(`run-all/bundles/${id}.npz`)),
+        ],
+        { encoding: "utf8" },
       );
-      expect(whole).toEqual((facts["cohort/c01.npy"] as Facts).degree);
+      const bundles = JSON.parse(read.stdout) as { names: string[]; degree: number[] }[];
+      bundles.forEach((bundle, i) => {
+        expect(bundle.names.slice(0, 3)).toEqual(["degree", "strength", "simplices_d2"]);
+        expect(bundle.names).not.toContain("simplices_d1");
+        expect(new Set(bundle.names).size).toBe(bundle.names.length);
+        expect(bundle.degree).toEqual((facts[`cohort/${COHORT[i]}.npy`] as Facts).degree);
+      });
     });
 
     it("sweep and barcode --spec RUN/spec.json reproduce a graph's row of features.csv and its barcode file", () => {

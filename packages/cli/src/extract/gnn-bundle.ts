@@ -2,6 +2,7 @@ import {
   densityGrid,
   type NodeEdgeFeatures,
   nodeEdgeFeatures,
+  nodeFeatureNames,
   type WeightedGraph,
   type WorkControl,
 } from "@cliquescape/core";
@@ -68,15 +69,7 @@ export function gnnBundle(
  * as sink the in-degree), so a column of it would repeat one already there.
  */
 export function bundleNodeColumns(directed: boolean, topDim: number): string[] {
-  const names = directed
-    ? ["in_degree", "out_degree", "in_strength", "out_strength"]
-    : ["degree", "strength"];
-  for (let k = 2; k <= topDim; k++) names.push(`simplices_d${k}`);
-  if (directed) {
-    for (let k = 2; k <= topDim; k++) names.push(`simplices_d${k}_as_source`);
-    for (let k = 2; k <= topDim; k++) names.push(`simplices_d${k}_as_sink`);
-  }
-  return names;
+  return nodeFeatureNames(directed, topDim).filter((name) => !/^simplices_d1(_|$)/.test(name));
 }
 
 /**

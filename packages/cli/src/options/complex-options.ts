@@ -75,8 +75,8 @@ export function nonNegativeNumber(text: string): number {
 /** The limits as typed, or, for each one not typed, those of `spec` (a run's spec.json) when one is given. */
 export function complexOptionsOf(
   raw: Record<string, unknown>,
-  spec: RunSpec | null,
-  given: Given,
+  spec: RunSpec | null = null,
+  given: Given = () => true,
 ): ComplexOptions {
   const pick = <T>(option: string, typed: T, fromSpec: T): T => (spec && !given(option) ? fromSpec : typed);
   const memory = raw.memory as number | undefined;

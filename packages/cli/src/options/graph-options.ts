@@ -88,8 +88,8 @@ export function addGraphOptions(command: Command): Command {
  */
 export function graphOptionsOf(
   raw: Record<string, unknown>,
-  spec: RunSpec | null,
-  given: Given,
+  spec: RunSpec | null = null,
+  given: Given = () => true,
 ): GraphOptions {
   if (raw.directed && raw.undirected) throw new UsageError("--directed and --undirected exclude each other");
   const typed: Preparation = {

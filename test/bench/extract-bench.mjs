@@ -148,7 +148,7 @@ const spec = JSON.parse(readFileSync(join(base, `out-w${results[0].workers}`, "s
 const features =
   readFileSync(join(base, `out-w${results[0].workers}`, "features.csv"), "utf8")
     .split("\n")[0]
-    .split(",").length - 3;
+    .split(",").length - 4;
 
 const section = [
   "<!-- extract-bench:start -->",

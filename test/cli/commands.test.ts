@@ -180,6 +180,28 @@ describe("errors and exit codes", () => {
     expect(run.stderr).toMatch(/budget of 10 exceeded/);
   });
 
+  it.each([
+    ["an unknown option", ["inspect", "square.csv", "--bogus"], /unknown option '--bogus'/],
+    ["an invalid choice", ["sweep", "square.csv", "--weights", "strong"], /Allowed choices are/],
+    [
+      "--threshold with --density",
+      ["inspect", "square.csv", "--threshold", "1", "--density", "0.5"],
+      /cannot be used with/,
+    ],
+    ["a missing argument", ["barcode"], /missing required argument 'file'/],
+    ["a missing --out", ["extract", "square.csv"], /--out <dir>' not specified/],
+    ["an unknown command", ["bogus"], /unknown command 'bogus'/],
+  ])("exits with 2 on a bad command line: %s (docs/cli.md, exit codes)", (_, args, message) => {
+    const run = runCli(args.map((a) => (a === "square.csv" ? file(a) : a)));
+    expect(run.status).toBe(2);
+    expect(run.stderr).toMatch(message);
+  });
+
+  it("exits with 0 for --help and --version", () => {
+    expect(runCli(["inspect", "--help"]).status).toBe(0);
+    expect(runCli(["--version"]).status).toBe(0);
+  });
+
   it("shows examples in every command's help", () => {
     for (const command of ["inspect", "sweep", "barcode"]) {
       const run = runCli([command, "--help"]);

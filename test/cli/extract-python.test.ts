@@ -14,18 +14,9 @@ import { spawnSync } from "node:child_process";
 import { writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
+import { missingPythonModules, PYTHON } from "../support/python.js";
 import { readFeatureTable, SMALL_DATASET, similarityDataset } from "./extract-fixtures.js";
 import { runCli } from "./run-cli.js";
-
-const PYTHON = "/usr/bin/python3";
-
-function probe(module: string): string | null {
-  const run = spawnSync(PYTHON, ["-c", `import ${module}`], { encoding: "utf8" });
-  if (run.error) return `${PYTHON} not found`;
-  return run.status === 0
-    ? null
-    : `python3-${module} is not installed (apt-get install -y python3-${module})`;
-}
 
 function python(script: string, args: string[]): unknown {
   const run = spawnSync(PYTHON, ["-c", script, ...args], { encoding: "utf8" });
@@ -33,12 +24,8 @@ function python(script: string, args: string[]): unknown {
   return JSON.parse(run.stdout);
 }
 
-const numpyMissing = probe("numpy");
-const torchMissing = numpyMissing ?? probe("torch");
-if (torchMissing) {
-  // Loud on purpose: the GNN check is one of the job's acceptance checks.
-  console.warn(`\n*** SKIPPING the torch forward-pass check of extract bundles: ${torchMissing} ***\n`);
-}
+const numpyMissing = missingPythonModules(["numpy"]);
+const torchMissing = missingPythonModules(["numpy", "torch"]);
 
 describe.skipIf(numpyMissing !== null)(`extract outputs in numpy ${numpyMissing ?? ""}`, () => {
   let dir: string;
@@ -60,26 +47,28 @@ print(json.dumps({
   "y_dtype": str(z["y"].dtype), "y": z["y"].tolist(),
   "ids": z["ids"].tolist(), "ids_kind": z["ids"].dtype.kind,
   "feature_names": z["feature_names"].tolist(), "label_names": z["label_names"].tolist(),
-  "splits": z["splits"].tolist(),
+  "splits": z["splits"].tolist(), "truncated": z["truncated"].tolist(),
 }))`,
       [join(dir, "run", "features.npz")],
     ) as Record<string, never>;
     const rows = table.rows;
-    const F = table.header.length - 3;
-    expect(loaded.keys).toEqual(["X", "feature_names", "ids", "label_names", "splits", "y"]);
+    const F = table.header.length - 4;
+    expect(loaded.keys).toEqual(["X", "feature_names", "ids", "label_names", "splits", "truncated", "y"]);
+    expect(table.header.slice(0, 4)).toEqual(["id", "label", "split", "truncated"]);
+    expect(loaded.truncated).toEqual(rows.map((r) => (r[3] === "true" ? 1 : 0)));
     expect(loaded.X_dtype).toBe("float64");
     expect(loaded.X_shape).toEqual([rows.length, F]);
     expect(loaded.y_dtype).toBe("int64");
     expect(loaded.ids_kind).toBe("U");
     expect(loaded.ids).toEqual(rows.map((r) => r[0]));
-    expect(loaded.feature_names).toEqual(table.header.slice(3));
+    expect(loaded.feature_names).toEqual(table.header.slice(4));
     expect(loaded.label_names).toEqual(["alpha", "beta", "gamma"]);
     expect(loaded.y).toEqual(rows.map((r) => ["alpha", "beta", "gamma"].indexOf(r[1])));
     expect(loaded.splits).toEqual(rows.map((r) => r[2]));
     // Exact: the CSV holds the shortest round-trip text of each double; Python's repr is the same kind of text.
     (loaded.X as string[][]).forEach((row, i) => {
       row.forEach((text, j) => {
-        expect(Number(text), `${rows[i][0]} ${table.header[3 + j]}`).toBe(Number(rows[i][3 + j]));
+        expect(Number(text), `${rows[i][0]} ${table.header[4 + j]}`).toBe(Number(rows[i][4 + j]));
       });
     });
   });

@@ -9,11 +9,11 @@ import { readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { encodeNpy } from "@cliquescape/io";
 import { beforeAll, describe, expect, it } from "vitest";
+import { missingPythonModules, PYTHON } from "../support/python.js";
 import { readFeatureTable, SMALL_DATASET, similarityDataset, similarityMatrix } from "./extract-fixtures.js";
 import { runCli } from "./run-cli.js";
 
 const GRID = [0.9, 0.75, 0.6, 0.45, 0.3, 0.15];
-const PYTHON = "/usr/bin/python3";
 
 describe("extract equals the single-graph commands", () => {
   let dir: string;
@@ -95,7 +95,7 @@ describe("extract equals the single-graph commands", () => {
 });
 
 describe("the quantile grid equals numpy.quantile over the dataset's edges", () => {
-  const missing = missingNumpy();
+  const missing = missingPythonModules(["numpy"]);
   it.skipIf(missing !== null)(
     `default grid: 20 weights between the 5 % and 95 % quantiles ${missing ?? ""}`,
     () => {
@@ -135,12 +135,6 @@ print(json.dumps({"lo": lo, "hi": hi, "grid": np.linspace(hi, lo, 20).tolist(), 
 });
 
 /** null when Debian's python3 imports numpy, else why not. */
-function missingNumpy(): string | null {
-  const run = spawnSync(PYTHON, ["-c", "import numpy"], { encoding: "utf8" });
-  if (run.error) return `(${PYTHON} not found)`;
-  return run.status === 0 ? null : "(python3-numpy is not installed: apt-get install -y python3-numpy)";
-}
-
 describe("a stack dataset", () => {
   it("gives the same feature rows as the same matrices written as CSV files", () => {
     const graphs = SMALL_DATASET.filter((g) => !g.directed).map((g) => ({ ...g, n: 12 }));

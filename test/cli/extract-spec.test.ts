@@ -76,7 +76,7 @@ describe("extract --spec", () => {
     expect(spec.complex).toMatchObject({ topDim: 2, prime: 3 });
     expect(spec.resolvedGrid).toEqual({ kind: "density", values: [0.1, 0.2, 0.3] });
     const { header } = readFeatureTable(join(dir, "run", "features.csv"));
-    expect(header.slice(3)).toEqual([
+    expect(header.slice(4)).toEqual([
       "euler_dens0.1",
       "euler_dens0.2",
       "euler_dens0.3",

@@ -4,13 +4,18 @@
  * under CI, which installs them: there a missing module is a failure, so a reference check never goes quiet.
  */
 import { spawnSync } from "node:child_process";
-import { existsSync } from "node:fs";
+import { appendFileSync, existsSync } from "node:fs";
 import { fileURLToPath } from "node:url";
+import { expect } from "vitest";
 
 // Debian's interpreter sees Debian's python3-* packages; a `python3` earlier on PATH (pyenv, venv) may not.
 export const PYTHON = process.env.PYTHON ?? (existsSync("/usr/bin/python3") ? "/usr/bin/python3" : "python3");
 
-/** null when every module imports, otherwise a message saying what is missing and how to get it. */
+/**
+ * null when every module imports, otherwise a message saying what is missing and how to get it. A miss is
+ * also logged for the line that ends `npm test` (test/support/python-skips-reporter.ts), so call this from
+ * the test file whose checks it skips.
+ */
 export function missingPythonModules(modules: string[]): string | null {
   const probe = spawnSync(PYTHON, ["-c", modules.map((m) => `import ${m}`).join("; ")], { encoding: "utf8" });
   const missing = probe.error
@@ -20,6 +25,9 @@ export function missingPythonModules(modules: string[]): string | null {
       : null;
   if (missing && process.env.CI)
     throw new Error(`${missing}; .ci/run installs it, so this is a CI setup fault`);
+  const log = process.env.CLIQUESCAPE_PYTHON_SKIPS;
+  if (missing && log)
+    appendFileSync(log, `${JSON.stringify({ file: expect.getState().testPath, modules })}\n`);
   return missing;
 }
 

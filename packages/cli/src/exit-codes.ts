@@ -7,7 +7,7 @@ import { UsageError } from "./options/graph-options.js";
 export function exitCodeFor(error: unknown): number {
   if (error instanceof UsageError) return 2;
   const name = error instanceof Error ? error.name : "";
-  if (name === "InputFileError" || name === "GraphInputError") return 1;
+  if (name === "InputFileError" || name === "GraphInputError" || name === "NoEdgeError") return 1;
   if (name.endsWith("BudgetError") || name === "TimeLimitError") return 3;
   return 70;
 }

@@ -21,7 +21,7 @@ export type { WeightSemantics } from "./filtration/weight-semantics.js";
 export { fromFiltrationValue, toFiltrationValue } from "./filtration/weight-semantics.js";
 export { type EdgeArrays, edgeArrays } from "./graph/edge-arrays.js";
 export type { DenseMatrixOptions } from "./graph/from-dense-matrix.js";
-export { fromDenseMatrix } from "./graph/from-dense-matrix.js";
+export { asymmetryNote, DEFAULT_SYMMETRY_TOLERANCE, fromDenseMatrix } from "./graph/from-dense-matrix.js";
 export type { EdgeListInput } from "./graph/from-edge-list.js";
 export { fromEdgeList } from "./graph/from-edge-list.js";
 export type { GraphologyOptions } from "./graph/from-graphology.js";

@@ -5,6 +5,7 @@ export type {
   OpenDatasetOptions,
 } from "./dataset/dataset-types.js";
 export { formatDatasetProblem } from "./dataset/dataset-types.js";
+export { findManifests } from "./dataset/find-manifests.js";
 export { GRAPH_FILE_EXTENSIONS, isGraphFileName } from "./dataset/graph-file-extensions.js";
 export { hashFile } from "./dataset/hash-file.js";
 export { openDataset } from "./dataset/open-dataset.js";
@@ -57,6 +58,8 @@ export {
   DEFAULT_MAX_CELLS,
   DEFAULT_MAX_NPY_BYTES,
   DEFAULT_MAX_TEXT_BYTES,
+  nanIsNoEdge,
+  negativePolicy,
   zeroIsEdge,
 } from "./read-options.js";
 export type { Delimiter, TextRow } from "./text-rows.js";

@@ -1,9 +1,11 @@
 import { fromDenseMatrix, GraphInputError, type WeightedGraph } from "@cliquescape/core";
+import { asymmetryReason } from "./asymmetry-reason.js";
 import { checkMatrixSize } from "./check-matrix-size.js";
 import { InputFileError } from "./input-file-error.js";
+import { nanCellsNote } from "./nan-cells-note.js";
 import { readElement } from "./npy-dtype.js";
 import { type NpyArray, npyElementOffset, npyStrides } from "./parse-npy.js";
-import { type GraphReadOptions, zeroIsEdge } from "./read-options.js";
+import { type GraphReadOptions, nanIsNoEdge, negativePolicy, zeroIsEdge } from "./read-options.js";
 
 /** Graphs read from one file: one for a matrix, k for a stack. */
 export interface GraphsReadResult {
@@ -15,7 +17,7 @@ export interface GraphsReadResult {
 /**
  * Turns a .npy array into graphs: shape (n, n) gives one graph, (k, n, n) a stack of k graphs. The diagonal
  * is ignored; boolean arrays give weight-1 edges where true; a 0 is an edge only for distance-like weights
- * or with `zeroIsEdge`; NaN is an error unless `nanIsNoEdge`.
+ * or with `zeroIsEdge`; NaN is no edge (counted in a warning) unless `nanIsNoEdge` is false.
  */
 export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOptions = {}): GraphsReadResult {
   const { shape, dtype } = array;
@@ -42,6 +44,7 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
     );
   }
   const zeroEdge = zeroIsEdge(options) && dtype.kind !== "b";
+  const nanNoEdge = nanIsNoEdge(options);
   const view = new DataView(array.bytes.buffer, array.bytes.byteOffset, array.bytes.byteLength);
   const warnings: string[] = [];
   if (array.trailingBytes > 0) {
@@ -53,6 +56,7 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
   const strides = npyStrides(array);
   const [rowStride, colStride] = strides.slice(-2).map((s) => s * dtype.size);
   for (let g = 0; g < k; g++) {
+    let nans = 0;
     const indexOf = (i: number, j: number) => (stacked ? [g, i, j] : [i, j]);
     const base = array.dataOffset + (stacked ? g * strides[0] * dtype.size : 0);
     for (let i = 0; i < n; i++) {
@@ -60,16 +64,16 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
         const offset = base + i * rowStride + j * colStride;
         let w = i === j ? Number.NaN : readElement(view, offset, dtype);
         if (w === 0 && !zeroEdge) w = Number.NaN;
-        else if (Number.isNaN(w) && i !== j && !options.nanIsNoEdge) {
-          throw new InputFileError(
-            file,
-            "not-finite",
-            'NaN is not a finite weight (set nanIsNoEdge to read NaN as "no edge")',
-            {
-              element: indexOf(i, j),
-              byteOffset: offset,
-            },
-          );
+        else if (Number.isNaN(w) && i !== j) {
+          if (!nanNoEdge) {
+            throw new InputFileError(
+              file,
+              "not-finite",
+              'NaN is not a finite weight (set nanIsNoEdge to read NaN as "no edge")',
+              { element: indexOf(i, j), byteOffset: offset },
+            );
+          }
+          nans++;
         } else if (dtype.size === 8 && dtype.kind !== "f" && !Number.isSafeInteger(w) && !Number.isNaN(w)) {
           rounded++;
         }
@@ -77,12 +81,14 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
       }
     }
     const where = stacked ? `graph ${g} of the stack: ` : "";
+    if (nans > 0) warnings.push(`${where}${nanCellsNote(nans)}`);
     try {
       graphs.push(
         fromDenseMatrix(n, values, {
           directed: options.directed ?? false,
           symmetrize: options.symmetrize,
-          negative: options.negative,
+          symmetryTolerance: options.symmetryTolerance,
+          negative: negativePolicy(options),
           labels: options.labels,
           onWarning: (message) => warnings.push(`${where}${message}`),
         }),
@@ -93,12 +99,15 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
       if (row === undefined || col === undefined) throw error;
       const position = { element: indexOf(row, col), byteOffset: npyElementOffset(array, indexOf(row, col)) };
       if (error.problem === "asymmetric") {
-        const describe = (w: number) => (Number.isNaN(w) ? "no edge" : String(w));
         throw new InputFileError(
           file,
           "asymmetric",
-          `matrix is not symmetric: ${describe(values[row * n + col])} here but ${describe(values[col * n + row])} ` +
-            `at element (${indexOf(col, row).join(", ")}); read it as directed or choose a symmetrize policy (max, min, mean)`,
+          asymmetryReason(
+            values[row * n + col],
+            values[col * n + row],
+            `element (${indexOf(col, row).join(", ")})`,
+            options.symmetryTolerance,
+          ),
           position,
           { cause: error },
         );

@@ -55,8 +55,34 @@ describe("parseDenseMatrixText: what is an edge", () => {
     expect(edges("0,-1\n-1,0\n", { negative: "abs" })).toEqual(["0-1:1"]);
   });
 
-  it("reads NaN as no edge when asked", () => {
-    expect(edges("0,NaN,1\nNaN,0,2\n1,2,0\n", { nanIsNoEdge: true })).toEqual(["0-2:1", "1-2:2"]);
+  it("reads NaN as no edge by default, saying how many cells, and refuses it when asked", () => {
+    const text = "0,NaN,1\nNaN,0,2\n1,2,0\n";
+    expect(edges(text)).toEqual(["0-2:1", "1-2:2"]);
+    expect(parseDenseMatrixText(text, "m.csv").warnings).toEqual(["read 2 NaN cells as no edge"]);
+    expect(() => parseDenseMatrixText(text, "m.csv", { nanIsNoEdge: false })).toThrow(
+      'm.csv:1:2: "NaN" is not a finite weight; leave the cell empty for "no edge"',
+    );
+  });
+
+  it("drops negative similarities by default (as it drops 0) and refuses negative distances", () => {
+    const text = "0,-0.5,1\n-0.5,0,2\n1,2,0\n";
+    expect(edges(text)).toEqual(["0-2:1", "1-2:2"]);
+    expect(parseDenseMatrixText(text, "m.csv").warnings).toEqual(["dropped 1 edge with a negative weight"]);
+    expect(() => parseDenseMatrixText(text, "m.csv", { semantics: "distance" })).toThrow(
+      /negative weight -0.5/,
+    );
+    expect(parseDenseMatrixText(text, "m.csv", { negative: "abs" }).warnings).toEqual([
+      "took the absolute value of the negative weight of 1 edge",
+    ]);
+  });
+
+  it("reads a_ij and a_ji differing in the last bits as one weight, their mean", () => {
+    // 0.1 + 0.2 and 0.3 differ in the last bit of a float64 (IEEE 754 binary64; common practice).
+    const a = 0.1 + 0.2;
+    expect(edges(`0,${a}\n0.3,0\n`)).toEqual([`0-1:${(a + 0.3) / 2}`]);
+    expect(() => parseDenseMatrixText(`0,${a}\n0.3,0\n`, "m.csv", { symmetryTolerance: 0 })).toThrow(
+      /not symmetric: 0.30000000000000004 here but 0.3 at line 2, column 1 \(relative difference 1.9e-16, above the tolerance 0\)/,
+    );
   });
 });
 
@@ -143,7 +169,7 @@ describe("parseDenseMatrixText: errors name the file, line and cell", () => {
   });
 
   it("NaN and infinity off the diagonal", () => {
-    expect(failure("0,1\nNaN,0\n").message).toBe(
+    expect(failure("0,1\nNaN,0\n", { nanIsNoEdge: false }).message).toBe(
       'm.csv:2:1: "NaN" is not a finite weight; leave the cell empty for "no edge"',
     );
     expect(failure("0,-Infinity\n1,0\n").problem).toBe("not-finite");
@@ -164,7 +190,7 @@ describe("parseDenseMatrixText: errors name the file, line and cell", () => {
   it("asymmetric matrix read as undirected names both cells", () => {
     const error = failure("# c\n,a,b,c\na,0,1,2\nb,1,0,3\nc,2,5,0\n");
     expect(error.message).toBe(
-      "m.csv:4:4: matrix is not symmetric: 3 here but 5 at line 5, column 3; read it as directed or choose a symmetrize policy (max, min, mean)",
+      "m.csv:4:4: matrix is not symmetric: 3 here but 5 at line 5, column 3 (relative difference 0.4, above the tolerance 1e-9); read it as directed or choose a symmetrize policy (max, min, mean)",
     );
     expect(error.problem).toBe("asymmetric");
   });
@@ -176,7 +202,7 @@ describe("parseDenseMatrixText: errors name the file, line and cell", () => {
   });
 
   it("negative weight without a policy", () => {
-    const error = failure("a,b\n0,-0.5\n-0.5,0\n");
+    const error = failure("a,b\n0,-0.5\n-0.5,0\n", { negative: "error" });
     expect(error.message).toBe(
       "m.csv:2:2: negative weight -0.5; choose a negative-weight policy (abs, drop or keep) to accept it",
     );

@@ -1,8 +1,10 @@
 import { fromDenseMatrix, GraphInputError, type WeightedGraph } from "@cliquescape/core";
+import { asymmetryReason } from "./asymmetry-reason.js";
 import { checkMatrixSize } from "./check-matrix-size.js";
 import { describePosition, InputFileError, type InputFilePosition } from "./input-file-error.js";
+import { nanCellsNote } from "./nan-cells-note.js";
 import { classifyCell, looksNumeric } from "./parse-number.js";
-import { type GraphReadOptions, zeroIsEdge } from "./read-options.js";
+import { type GraphReadOptions, nanIsNoEdge, negativePolicy, zeroIsEdge } from "./read-options.js";
 import { type Delimiter, detectDelimiter, type TextRow, textRows } from "./text-rows.js";
 
 export interface DenseMatrixTextOptions extends GraphReadOptions {
@@ -27,7 +29,7 @@ export interface GraphReadResult {
 /**
  * Reads an n×n matrix written as text: CSV, TSV, semicolon- or whitespace-separated. An empty cell means
  * no edge; the diagonal is ignored (it must still be a number or empty); a 0 is an edge only for
- * distance-like weights or with `zeroIsEdge`. Node names come from a label row and/or label column.
+ * distance-like weights or with `zeroIsEdge`; NaN is no edge unless `nanIsNoEdge` is false. Node names come from a label row and/or label column.
  */
 export function parseDenseMatrixText(
   text: string,
@@ -62,6 +64,8 @@ export function parseDenseMatrixText(
   checkMatrixSize(n, options, file, { line: first.line });
 
   const zeroEdge = zeroIsEdge(options);
+  const nanNoEdge = nanIsNoEdge(options);
+  let nans = 0;
   const values = new Float64Array(n * n);
   const lineOfRow = new Int32Array(n);
   const rowLabels: string[] = [];
@@ -100,13 +104,16 @@ export function parseDenseMatrixText(
       if (i !== j) {
         if (cell.kind === "number") {
           w = cell.value === 0 && !zeroEdge ? Number.NaN : cell.value;
-        } else if (cell.kind === "not-finite" && !(Number.isNaN(cell.value) && options.nanIsNoEdge)) {
-          throw new InputFileError(
-            file,
-            "not-finite",
-            `${JSON.stringify(raw)} is not a finite weight; leave the cell empty for "no edge"`,
-            at(),
-          );
+        } else if (cell.kind === "not-finite") {
+          if (!(Number.isNaN(cell.value) && nanNoEdge)) {
+            throw new InputFileError(
+              file,
+              "not-finite",
+              `${JSON.stringify(raw)} is not a finite weight; leave the cell empty for "no edge"`,
+              at(),
+            );
+          }
+          nans++;
         }
       }
       values[i * n + j] = w;
@@ -122,7 +129,7 @@ export function parseDenseMatrixText(
   }
 
   const labels = resolveLabels(file, n, header, labelColumn, rowLabels, lineOfRow, options.labels);
-  const warnings: string[] = [];
+  const warnings: string[] = nans > 0 ? [nanCellsNote(nans)] : [];
   const cellAt = (row: number, col: number): InputFilePosition => ({
     line: lineOfRow[row],
     column: col + skip + 1,
@@ -131,7 +138,8 @@ export function parseDenseMatrixText(
     const graph = fromDenseMatrix(n, values, {
       directed: options.directed ?? false,
       symmetrize: options.symmetrize,
-      negative: options.negative,
+      symmetryTolerance: options.symmetryTolerance,
+      negative: negativePolicy(options),
       labels,
       onWarning: (message) => warnings.push(message),
     });
@@ -142,13 +150,15 @@ export function parseDenseMatrixText(
     if (row === undefined || col === undefined)
       throw new InputFileError(file, "not-square", error.message, {}, { cause: error });
     if (error.problem === "asymmetric") {
-      const here = values[row * n + col];
-      const there = values[col * n + row];
       throw new InputFileError(
         file,
         "asymmetric",
-        `matrix is not symmetric: ${describeWeight(here)} here but ${describeWeight(there)} at ` +
-          `${describePosition(cellAt(col, row))}; read it as directed or choose a symmetrize policy (max, min, mean)`,
+        asymmetryReason(
+          values[row * n + col],
+          values[col * n + row],
+          describePosition(cellAt(col, row)),
+          options.symmetryTolerance,
+        ),
         cellAt(row, col),
         { cause: error },
       );
@@ -156,10 +166,6 @@ export function parseDenseMatrixText(
     const problem = error.problem === "negative-weight" ? "negative-weight" : "not-finite";
     throw new InputFileError(file, problem, error.message, cellAt(row, col), { cause: error });
   }
-}
-
-function describeWeight(w: number): string {
-  return Number.isNaN(w) ? "no edge" : String(w);
 }
 
 /** A label row names nodes: every cell after the first (which may be a corner cell) is non-numeric text. */

@@ -84,11 +84,15 @@ describe("parseEdgeListText", () => {
     expect(read('source,target,weight\n"Smith, J.","Doe, A.",2\n').labels).toEqual(["Smith, J.", "Doe, A."]);
   });
 
-  it("skips NaN-weighted rows when asked, keeping their nodes", () => {
-    expect(read("source,target,weight\na,b,nan\nb,c,1\n", { nanIsNoEdge: true })).toMatchObject({
+  it("skips NaN-weighted rows by default, keeping their nodes, and refuses them when asked", () => {
+    expect(read("source,target,weight\na,b,nan\nb,c,1\n")).toMatchObject({
       labels: ["a", "b", "c"],
       edges: ["b-c:1"],
+      warnings: ["left out 1 edge whose weight is NaN"],
     });
+    expect(failure("source,target,weight\na,b,nan\n", { nanIsNoEdge: false }).message).toBe(
+      'e.csv:2:3: "nan" is not a finite weight',
+    );
   });
 
   it("drops self-loops with a warning from the core", () => {
@@ -147,10 +151,10 @@ describe("parseEdgeListText: errors", () => {
   });
 
   it("negative weight without a policy, keeping the core's error as the cause", () => {
-    expect(failure("source,target,weight\na,b,1\nb,c,-2\n").cause).toMatchObject({
+    expect(failure("source,target,weight\na,b,1\nb,c,-2\n", { negative: "error" }).cause).toMatchObject({
       problem: "negative-weight",
     });
-    expect(failure("source,target,weight\na,b,1\nb,c,-2\n").message).toBe(
+    expect(failure("source,target,weight\na,b,1\nb,c,-2\n", { negative: "error" }).message).toBe(
       "e.csv:3:3: negative weight -2; choose a negative-weight policy (abs, drop or keep) to accept it",
     );
   });

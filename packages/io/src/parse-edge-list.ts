@@ -3,7 +3,7 @@ import { type EdgeColumnNames, type EdgeColumns, findEdgeColumns } from "./edge-
 import { InputFileError } from "./input-file-error.js";
 import type { GraphReadResult } from "./parse-dense-matrix.js";
 import { classifyCell } from "./parse-number.js";
-import { type GraphReadOptions, zeroIsEdge } from "./read-options.js";
+import { type GraphReadOptions, nanIsNoEdge, negativePolicy, zeroIsEdge } from "./read-options.js";
 import { type Delimiter, detectDelimiter, textRows } from "./text-rows.js";
 
 export interface EdgeListTextOptions extends Omit<GraphReadOptions, "labels" | "maxCells">, EdgeColumnNames {
@@ -77,6 +77,7 @@ export function parseEdgeListText(
   const weights: number[] = [];
   const lines: number[] = [];
   let zeros = 0;
+  let nans = 0;
 
   const nodeOf = (name: string, line: number, column: number): number => {
     if (name === "") throw new InputFileError(file, "unknown-node", "empty node name", { line, column });
@@ -124,7 +125,10 @@ export function parseEdgeListText(
         throw new InputFileError(file, "not-a-number", `${JSON.stringify(raw)} is not a number`, at);
       }
       if (cell.kind === "not-finite") {
-        if (Number.isNaN(cell.value) && options.nanIsNoEdge) continue;
+        if (Number.isNaN(cell.value) && nanIsNoEdge(options)) {
+          nans++;
+          continue;
+        }
         throw new InputFileError(file, "not-finite", `${JSON.stringify(raw)} is not a finite weight`, at);
       }
       w = cell.value;
@@ -144,6 +148,7 @@ export function parseEdgeListText(
     );
   }
 
+  if (nans > 0) warnings.push(`left out ${nans} edge${nans === 1 ? "" : "s"} whose weight is NaN`);
   const directed = options.directed ?? false;
   try {
     const graph = fromEdgeList({
@@ -153,7 +158,7 @@ export function parseEdgeListText(
       weights,
       directed,
       labels: names,
-      negative: options.negative,
+      negative: negativePolicy(options),
       onWarning: (message) => warnings.push(message),
     });
     return { graph, warnings };

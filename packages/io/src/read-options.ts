@@ -12,11 +12,22 @@ export interface GraphReadOptions {
   semantics?: WeightSemantics;
   /** Override the zero rule: true keeps 0 as an edge, false drops it, whatever the semantics. */
   zeroIsEdge?: boolean;
-  /** Treat NaN weights as "no edge" instead of an error (numpy writes missing values as NaN). Default false. */
+  /**
+   * Read NaN weights as "no edge" (default true: numpy's corrcoef gives NaN rows for constant signals, and
+   * the count is reported as a warning); false refuses them. Infinity is always refused.
+   */
   nanIsNoEdge?: boolean;
   /** Undirected only: how to merge a_ij and a_ji when they differ. Default "error". */
   symmetrize?: SymmetrizePolicy;
-  /** Default "error". */
+  /**
+   * Undirected matrices: a_ij and a_ji within this relative difference are one weight (their mean).
+   * Default 1e-9 (see DEFAULT_SYMMETRY_TOLERANCE in core).
+   */
+  symmetryTolerance?: number;
+  /**
+   * Negative weights. Default by semantics: "drop" for similarity-like weights (a negative similarity is
+   * no edge, as 0 is; the count is reported as a warning), "error" for distance-like ones.
+   */
   negative?: NegativePolicy;
   /** Node names when the file carries none (a label row/column or node names in an edge list win). */
   labels?: readonly string[];
@@ -36,6 +47,16 @@ export const DEFAULT_MAX_CELLS = 2 ** 26;
 /** Whether a weight of exactly 0 is an edge under these options. */
 export function zeroIsEdge(options: GraphReadOptions): boolean {
   return options.zeroIsEdge ?? (options.semantics ?? "similarity") === "distance";
+}
+
+/** The negative-weight policy under these options (see `negative`). */
+export function negativePolicy(options: GraphReadOptions): NegativePolicy {
+  return options.negative ?? ((options.semantics ?? "similarity") === "similarity" ? "drop" : "error");
+}
+
+/** Whether NaN weights are read as "no edge" under these options. */
+export function nanIsNoEdge(options: GraphReadOptions): boolean {
+  return options.nanIsNoEdge ?? true;
 }
 
 /** "1.5 MiB": sizes in messages people read. */

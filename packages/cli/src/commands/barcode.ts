@@ -1,17 +1,27 @@
 import {
   allEdgesGrid,
+  axisGrid,
   type Barcode,
   computeBarcode,
   mostPersistentBars,
   nodeLabel,
   representativeCycle,
+  thresholdSubgraph,
   type WeightedGraph,
 } from "@cliquescape/core";
 import { Command, Option } from "commander";
 import { loadGraph } from "../load-graph.js";
 import { addComplexOptions, complexOptionsOf, homologyDimOf } from "../options/complex-options.js";
-import { addGraphOptions, graphOptionsOf, nonNegativeInteger, UsageError } from "../options/graph-options.js";
+import {
+  addGraphOptions,
+  GRAPH_FILE_HELP,
+  graphOptionsOf,
+  nonNegativeInteger,
+  UsageError,
+} from "../options/graph-options.js";
 import { addOutputOptions, type OutputFormat } from "../options/output-options.js";
+import { addSpecOption, specOf } from "../options/spec-option.js";
+import { specAxis } from "../options/threshold-options.js";
 import { renderBarcodeTable } from "../render/barcode-table.js";
 import { csvDocument } from "../render/csv.js";
 import { startGraphWork } from "../work-progress.js";
@@ -42,11 +52,14 @@ export function barcodeCommand(): Command {
   const command = new Command("barcode")
     .summary("persistence barcode of the weight filtration, with representative loops")
     .description(
-      "Computes the persistence barcode of the clique complex (or directed flag complex) as edges enter by\n" +
-        "weight, in dimensions 0 .. top-dim − 1, over Z/p. Bars are in weight units; essential bars have no death.",
+      "Computes the persistence barcode of the clique complex (or directed flag complex) as edges enter by " +
+        "weight, in dimensions 0 .. top-dim − 1, over Z/p. Bars are in weight units; essential bars have no " +
+        "death. With --spec, the barcode an extract run wrote for the graph (up to the grid's end when the run's " +
+        "barcodeRange is axis).",
     )
-    .argument("<file>", "graph file: dense matrix (.csv .tsv .txt), edge list (.csv with a header) or .npy");
+    .argument("<file>", GRAPH_FILE_HELP);
   addGraphOptions(command);
+  addSpecOption(command);
   addComplexOptions(command);
   command
     .addOption(
@@ -70,18 +83,25 @@ Examples:
   cliquescape barcode demo-data/graphs/ring01u.csv --top-dim 2 --cycles 3 --format json
   cliquescape barcode distances.csv --weights distance --prime 3`,
   );
-  command.action((file: string, raw: Record<string, unknown>) => {
-    const graphOptions = graphOptionsOf(raw);
-    const limits = complexOptionsOf(raw);
+  command.action((file: string, raw: Record<string, unknown>, self: Command) => {
+    const given = (name: string) => self.getOptionValueSource(name) === "cli";
+    const spec = specOf(raw);
+    const graphOptions = graphOptionsOf(raw, spec, given);
+    const weights = graphOptions.preparation.weights;
+    const limits = complexOptionsOf(raw, spec, given);
     const maxDim = homologyDimOf(limits);
     if (maxDim < 0) throw new UsageError("--top-dim 0 leaves no homology to compute; use 1 or more");
-    const { graph } = loadGraph(file, graphOptions);
+    const { graph: whole } = loadGraph(file, graphOptions);
+    // An extract run's barcode with barcodeRange "axis" covers the filtration up to the grid's end.
+    const axis = spec && limits.barcodeRange === "axis" ? specAxis(spec) : undefined;
+    const end = axis ? axisGrid(whole, axis, weights).thresholds.at(-1) : undefined;
+    const graph = end === undefined ? whole : thresholdSubgraph(whole, end, weights);
     const work = startGraphWork(file, limits.timeLimitSeconds);
     let barcode: Barcode;
     try {
       barcode = computeBarcode(graph, {
         ...work.control,
-        semantics: graphOptions.weights,
+        semantics: weights,
         maxDim,
         prime: limits.prime,
         budget: { maxBytes: limits.memoryBytes },
@@ -99,10 +119,10 @@ Examples:
     const report: BarcodeReport = {
       file,
       directed: graph.directed,
-      weights: graphOptions.weights,
+      weights,
       prime: barcode.prime,
       start: barcode.start,
-      end: allEdgesGrid(graph, graphOptions.weights).thresholds[0],
+      end: end ?? allEdgesGrid(graph, weights).thresholds[0],
       bars: barcode.bars.map((bar, i) => ({
         dim: bar.dim,
         birth: bar.birth,

@@ -19,8 +19,8 @@ export function distancesCommand(): Command {
   const command = new Command("distances")
     .summary("pairwise bottleneck or Wasserstein distances between the barcodes of an extract run")
     .description(
-      "Reads the barcodes of a finished `extract` run folder and writes the matrix of distances between every\n" +
-        "two graphs' persistence diagrams of one homology dimension, as CSV (ids in the header and first column)\n" +
+      "Reads the barcodes of a finished `extract` run folder and writes the matrix of distances between every " +
+        "two graphs' persistence diagrams of one homology dimension, as CSV (ids in the header and first column) " +
         "and NumPy .npy (float64, rows in the order of features.csv). Exact; computed on worker threads.",
     )
     .argument("<run-dir>", "an extract run folder (with features.csv and barcodes/)")

@@ -1,12 +1,13 @@
 import { availableParallelism } from "node:os";
 import { Command, Option } from "commander";
+import { cliMessage } from "../cli-message.js";
 import { exitCodeFor } from "../exit-codes.js";
 import { InterruptedError } from "../extract/interrupted-error.js";
 import { optionsToSpec } from "../extract/options-to-spec.js";
 import { runExtract } from "../extract/run-extract.js";
 import { EDGE_TRANSFORMS } from "../extract/run-spec.js";
 import { timeLimitOption } from "../options/complex-options.js";
-import { finiteNumber, nonNegativeInteger, numberList, UsageError } from "../options/graph-options.js";
+import { finiteNumber, numberList, positiveInteger, UsageError } from "../options/graph-options.js";
 
 export function extractCommand(): Command {
   const command = new Command("extract")
@@ -18,15 +19,24 @@ export function extractCommand(): Command {
         "barcodes and GNN bundles, errors.csv and spec.json. Graphs run in parallel on worker threads. Running " +
         "the same command again skips finished graphs; Ctrl-C keeps every finished graph. Settings come from " +
         "--spec (a JSON file, e.g. a previous run's spec.json) with the options below laid over it; see " +
-        "docs/extract.md.",
+        "docs/extract.md. Graph files read: dense matrices and edge lists (.csv .tsv .txt), NumPy (.npy .npz), " +
+        "MATLAB (.mat), GraphML (.graphml) and GEXF (.gexf).",
     )
     .argument(
       "<dataset>",
-      "manifest CSV/TSV (id,file[,label,split,directed,coords,…]), folder of graph files, or stack (.npy .npz .mat)",
+      "manifest CSV/TSV (id,file[,label,split,directed,coords,…]), folder of graph files (or holding one manifest), or stack (.npy .npz .mat)",
     )
     .requiredOption("--out <dir>", "run folder to write (created; an existing one is resumed)")
     .addOption(new Option("--spec <file>", "run spec JSON: a partial one, or a previous run's spec.json"))
-    .addOption(new Option("--labels <file>", "for a stack: one label per slice (or a CSV with id,label)"))
+    .addOption(
+      new Option(
+        "--labels <file>",
+        "for a stack: one label per line in slice order, or a table with a header (id,label, or a participants table): the stack's ids, or your own ids naming the slices in order",
+      ),
+    )
+    .addOption(
+      new Option("--labels-column <name>", "the column of --labels holding the labels (default: label)"),
+    )
     .addOption(
       new Option("--coordinates <file>", "node coordinates CSV (node,x,y[,z]) for graphs without their own"),
     )
@@ -50,20 +60,39 @@ export function extractCommand(): Command {
     .addOption(
       new Option(
         "--symmetrize <how>",
-        "merge a_ij and a_ji of asymmetric matrices read as undirected",
+        "merge a_ij and a_ji of a matrix read as undirected when they differ by more than a relative 1e-9 (closer values are one weight, their mean); default error: refuse the graph",
       ).choices(["error", "max", "min", "mean"]),
     )
     .addOption(
       new Option(
         "--negatives <how>",
-        "negative weights: refuse, absolute value, drop the edge, or keep",
-      ).choices(["error", "abs", "drop", "keep"]),
+        "negative weights: auto (default) drops negative similarities, as 0 is no edge, and refuses negative distances; or refuse, absolute value, drop the edge, keep",
+      ).choices(["auto", "error", "abs", "drop", "keep"]),
     )
     .addOption(
       new Option(
-        "--zero-edges <rule>",
-        "is a 0 read from a file an edge (auto: no for similarities)",
-      ).choices(["auto", "edge", "no-edge"]),
+        "--zero-edges [rule]",
+        "is a 0 read from a file an edge? auto (default): not for similarities, yes for distances; the option alone: edge",
+      )
+        .choices(["auto", "edge", "no-edge"])
+        .preset("edge"),
+    )
+    .addOption(
+      new Option(
+        "--nan-cells <rule>",
+        "NaN weights (corrcoef of a constant signal): no edge (default), or refuse the graph",
+      ).choices(["no-edge", "error"]),
+    )
+    .addOption(
+      new Option("--max-nodes <n>", "largest matrix read, in nodes (default 8192)").argParser(
+        positiveInteger,
+      ),
+    )
+    .addOption(
+      new Option(
+        "--max-file <MiB>",
+        "largest graph file read (default: 256 for text, 2048 for .npy .npz .mat)",
+      ).argParser(positiveInteger),
     )
     .addOption(
       new Option("--transform <f>", "edge-value transform before the semantics: 1−w, −log w, 1/w").choices([
@@ -140,8 +169,13 @@ Examples:
   cliquescape extract demo-data/manifest.csv --out out/demo
   cliquescape extract scans/ --out runs/a --weights distance --transform one-minus --top-dim 2
   cliquescape extract new-subjects.csv --out runs/b --spec runs/a/spec.json
-Exit codes: 0 all graphs done; 1 some graph left out (see errors.csv); 2 bad command line or spec, or the
-run folder holds other settings; 130 interrupted (finished graphs kept).`,
+  cliquescape extract cohort.npy --labels participants.tsv --labels-column group --out runs/c
+
+Exit codes:
+  0    every graph is in the tables
+  1    some graph was left out (see errors.csv), or no graph could be read
+  2    bad command line or spec, or the run folder holds results made under other settings
+  130  interrupted (finished graphs kept)`,
   );
   command.action((dataset: string, raw: Record<string, unknown>, self: Command) => {
     const given = (name: string) => self.getOptionValueSource(name) === "cli";
@@ -175,6 +209,7 @@ async function extractAction(
       specSource: source,
       datasetOptions: {
         labelsFile: raw.labels as string | undefined,
+        labelsColumn: raw.labelsColumn as string | undefined,
         coordinatesFile: raw.coordinates as string | undefined,
         variable: raw.variable as string | undefined,
       },
@@ -188,17 +223,11 @@ async function extractAction(
       return;
     }
     const message = error instanceof Error ? error.message : String(error);
-    process.stderr.write(`cliquescape: ${message}\n`);
+    process.stderr.write(`cliquescape: ${cliMessage(message)}\n`);
     process.exitCode = exitCodeFor(error);
   } finally {
     process.off("SIGINT", onInterrupt);
   }
-}
-
-function positiveInteger(text: string): number {
-  const value = nonNegativeInteger(text);
-  if (value < 1) throw new UsageError(`expected a whole number ≥ 1, got "${text}"`);
-  return value;
 }
 
 function quantilePair(text: string): [number, number] {

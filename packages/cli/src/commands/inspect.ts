@@ -3,15 +3,16 @@ import {
   bettiFromBarcode,
   countSimplices,
   density,
-  possibleEdgeCount,
+  edgeCount,
   thresholdSubgraph,
 } from "@cliquescape/core";
 import { Command } from "commander";
 import { barcodeWithinBudget } from "../barcode-within-budget.js";
 import { loadGraph } from "../load-graph.js";
 import { addComplexOptions, complexOptionsOf } from "../options/complex-options.js";
-import { addGraphOptions, graphOptionsOf } from "../options/graph-options.js";
+import { addGraphOptions, GRAPH_FILE_HELP, graphOptionsOf } from "../options/graph-options.js";
 import { addOutputOptions, type OutputFormat } from "../options/output-options.js";
+import { addSpecOption, specOf } from "../options/spec-option.js";
 import { addSingleThresholdOptions, gridOf, thresholdChoiceOf } from "../options/threshold-options.js";
 import { csvDocument } from "../render/csv.js";
 import { formatCount, formatWeight } from "../render/format-number.js";
@@ -40,13 +41,15 @@ export interface InspectReport {
 
 export function inspectCommand(): Command {
   const command = new Command("inspect")
-    .summary("one graph at one threshold: size, simplex counts, Euler characteristic")
+    .summary("one graph at one threshold: size, simplex counts, Euler characteristic, Betti numbers")
     .description(
-      "Reads one graph, keeps the edges present at the threshold (all edges if none is given) and counts the\n" +
-        "simplices of its clique complex (undirected) or directed flag complex (--directed), per dimension.",
+      "Reads one graph, keeps the edges present at the threshold (all edges if none is given), counts the " +
+        "simplices of its clique complex (undirected) or directed flag complex (--directed) per dimension, and " +
+        "prints the Euler characteristic and the Betti numbers over Z/p.",
     )
-    .argument("<file>", "graph file: dense matrix (.csv .tsv .txt), edge list (.csv with a header) or .npy");
+    .argument("<file>", GRAPH_FILE_HELP);
   addGraphOptions(command);
+  addSpecOption(command);
   addSingleThresholdOptions(command);
   addComplexOptions(command);
   addOutputOptions(command);
@@ -58,46 +61,44 @@ Examples:
   cliquescape inspect subject07.csv --threshold 0.4 --top-dim 3
   cliquescape inspect net.npy --directed --density 0.1 --format json`,
   );
-  command.action((file: string, raw: Record<string, unknown>) => {
-    const graphOptions = graphOptionsOf(raw);
+  command.action((file: string, raw: Record<string, unknown>, self: Command) => {
+    const given = (name: string) => self.getOptionValueSource(name) === "cli";
+    const spec = specOf(raw);
+    const graphOptions = graphOptionsOf(raw, spec, given);
+    const weights = graphOptions.preparation.weights;
     const choice = thresholdChoiceOf(raw);
     const { graph } = loadGraph(file, graphOptions);
-    const limits = complexOptionsOf(raw);
+    const limits = complexOptionsOf(raw, spec, given);
     const thresholded = choice.threshold !== undefined || choice.density !== undefined;
-    const threshold = thresholded ? gridOf(graph, graphOptions.weights, choice).thresholds[0] : undefined;
+    const threshold = thresholded ? gridOf(graph, weights, choice).thresholds[0] : undefined;
+    // Homology of the complex at the threshold only: the subgraph keeps the work to what is asked.
+    const kept = threshold === undefined ? graph : thresholdSubgraph(graph, threshold, weights);
     const work = startGraphWork(file, limits.timeLimitSeconds);
     const { result, barcode } = (() => {
       try {
         const counted = countSimplices(graph, {
           ...work.control,
           threshold,
-          semantics: graphOptions.weights,
+          semantics: weights,
           maxDim: limits.topDim,
           budget: limits.budget,
         });
-        // Homology of the complex at the threshold only: the subgraph keeps the work to what is asked.
-        const kept =
-          threshold === undefined ? graph : thresholdSubgraph(graph, threshold, graphOptions.weights);
-        return {
-          result: counted,
-          barcode: barcodeWithinBudget(kept, graphOptions.weights, limits, work.control),
-        };
+        return { result: counted, barcode: barcodeWithinBudget(kept, weights, limits, work.control) };
       } finally {
         work.stop();
       }
     })();
     const counts = Array.from(result.counts);
-    const bettiThreshold = threshold ?? allEdgesGrid(graph, graphOptions.weights).thresholds[0];
-    const edges = counts[1] ?? 0;
-    const possible = possibleEdgeCount(graph.n, graph.directed);
+    const bettiThreshold = threshold ?? allEdgesGrid(graph, weights).thresholds[0];
     const report: InspectReport = {
       file,
       directed: graph.directed,
-      weights: graphOptions.weights,
+      weights,
       threshold: threshold ?? null,
       nodes: graph.n,
-      edges,
-      density: threshold === undefined ? density(graph) : possible === 0 ? 0 : edges / possible,
+      // From the graph, not from the counts: --top-dim 0 counts no edges.
+      edges: edgeCount(kept),
+      density: density(kept),
       counts,
       euler: result.euler,
       truncated: result.truncated,

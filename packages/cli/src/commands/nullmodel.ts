@@ -19,6 +19,7 @@ import { addComplexOptions, complexOptionsOf } from "../options/complex-options.
 import {
   addGraphOptions,
   finiteNumber,
+  GRAPH_FILE_HELP,
   graphOptionsOf,
   nonNegativeInteger,
   UsageError,
@@ -60,13 +61,10 @@ export function nullmodelCommand(): Command {
   const command = new Command("nullmodel")
     .summary("compare a graph's counts and Betti numbers with a null model: z-scores and p-values")
     .description(
-      "Draws N seeded samples of a null model of one graph and compares simplex counts and Betti numbers at a\n" +
-        "threshold, and the areas under the Betti curves, with them: null mean, sd, z-score, empirical p-values.\n" +
-        "  er       Erdős–Rényi: same nodes and density, weights drawn from the graph's\n" +
-        "  rewire   degree-preserving edge swaps (directed: in- and out-degrees kept), degrees kept at every threshold\n" +
-        "  shuffle  the same edges with their weights permuted",
+      "Draws N seeded samples of a null model of one graph and compares simplex counts and Betti numbers at a " +
+        "threshold, and the areas under the Betti curves, with them: null mean, sd, z-score, empirical p-values.",
     )
-    .argument("<file>", "graph file: dense matrix (.csv .tsv .txt), edge list (.csv with a header) or .npy");
+    .argument("<file>", GRAPH_FILE_HELP);
   addGraphOptions(command);
   addSingleThresholdOptions(command);
   addComplexOptions(command);
@@ -96,6 +94,11 @@ export function nullmodelCommand(): Command {
   command.addHelpText(
     "after",
     `
+Models (--model):
+  er       Erdős–Rényi: same nodes and density, weights drawn from the graph's
+  rewire   degree-preserving edge swaps (directed: in- and out-degrees kept), degrees kept at every threshold
+  shuffle  the same edges with their weights permuted
+
 Examples:
   cliquescape nullmodel demo-data/graphs/ring01u.csv --model rewire --samples 200 --density 0.1
   cliquescape nullmodel subject07.csv --model er --samples 500 --threshold 0.4 --format csv
@@ -110,7 +113,7 @@ Examples:
 async function nullmodelAction(file: string, raw: Record<string, unknown>): Promise<void> {
   {
     const graphOptions = graphOptionsOf(raw);
-    const semantics = graphOptions.weights;
+    const semantics = graphOptions.preparation.weights;
     const limits = complexOptionsOf(raw);
     const topDim = limits.topDim ?? DEFAULT_TOP_DIM;
     if (topDim < 1) throw new UsageError("--top-dim must be at least 1");

@@ -1,11 +1,22 @@
-import { bettiCurves, possibleEdgeCount, sweepSimplexCounts } from "@cliquescape/core";
+import {
+  bettiCurves,
+  edgeBins,
+  edgeFiltration,
+  gridFiltrationValues,
+  possibleEdgeCount,
+  sweepSimplexCounts,
+  type ThresholdGrid,
+  thresholdSubgraph,
+  type WeightedGraph,
+} from "@cliquescape/core";
 import { Command } from "commander";
 import { barcodeWithinBudget } from "../barcode-within-budget.js";
 import { loadGraph } from "../load-graph.js";
 import { addComplexOptions, complexOptionsOf } from "../options/complex-options.js";
-import { addGraphOptions, graphOptionsOf } from "../options/graph-options.js";
+import { addGraphOptions, GRAPH_FILE_HELP, graphOptionsOf } from "../options/graph-options.js";
 import { addOutputOptions, type OutputFormat } from "../options/output-options.js";
-import { addGridOptions, gridOf, thresholdChoiceOf } from "../options/threshold-options.js";
+import { addSpecOption, specOf } from "../options/spec-option.js";
+import { addGridOptions, gridChoiceOf, gridOf } from "../options/threshold-options.js";
 import { csvDocument } from "../render/csv.js";
 import { formatCount, formatWeight } from "../render/format-number.js";
 import { textTable } from "../render/text-table.js";
@@ -34,13 +45,16 @@ const DEFAULT_STEPS = 20;
 
 export function sweepCommand(): Command {
   const command = new Command("sweep")
-    .summary("simplex counts and Euler characteristic across a grid of thresholds")
+    .summary("simplex counts, Euler characteristic and Betti numbers across a grid of thresholds")
     .description(
-      "Counts the simplices of one graph's complex at every threshold of a grid in a single enumeration.\n" +
-        `Default grid: ${DEFAULT_STEPS} evenly spaced weights from the first edge to enter to the last.`,
+      "Counts the simplices of one graph's complex at every threshold of a grid in a single enumeration, and " +
+        "prints the Euler characteristic and the Betti numbers over Z/p (from the barcode) at each threshold. " +
+        `Default grid: ${DEFAULT_STEPS} evenly spaced weights from the first edge to enter to the last; with ` +
+        "--spec, the grid of that extract run, so the output equals the graph's row of its features.csv.",
     )
-    .argument("<file>", "graph file: dense matrix (.csv .tsv .txt), edge list (.csv with a header) or .npy");
+    .argument("<file>", GRAPH_FILE_HELP);
   addGraphOptions(command);
+  addSpecOption(command);
   addGridOptions(command);
   addComplexOptions(command);
   addOutputOptions(command);
@@ -52,11 +66,18 @@ Examples:
   cliquescape sweep subject07.csv --density 0.05,0.1,0.15,0.2 --format csv > s07-sweep.csv
   cliquescape sweep distances.tsv --weights distance --range 0:2.5 --steps 50 --format json`,
   );
-  command.action((file: string, raw: Record<string, unknown>) => {
-    const graphOptions = graphOptionsOf(raw);
+  command.action((file: string, raw: Record<string, unknown>, self: Command) => {
+    const given = (name: string) => self.getOptionValueSource(name) === "cli";
+    const spec = specOf(raw);
+    const graphOptions = graphOptionsOf(raw, spec, given);
+    const weights = graphOptions.preparation.weights;
     const { graph } = loadGraph(file, graphOptions);
-    const grid = gridOf(graph, graphOptions.weights, thresholdChoiceOf(raw), DEFAULT_STEPS);
-    const limits = complexOptionsOf(raw);
+    const grid = gridOf(graph, weights, gridChoiceOf(raw, spec, given), DEFAULT_STEPS);
+    const limits = complexOptionsOf(raw, spec, given);
+    // Betti numbers at the grid's thresholds need only the filtration up to its end (far less work on dense
+    // graphs, and what an extract run with barcodeRange "axis" computes).
+    const last = grid.thresholds[grid.thresholds.length - 1];
+    const upToGridEnd = grid.thresholds.length > 0 ? thresholdSubgraph(graph, last, weights) : graph;
     const work = startGraphWork(file, limits.timeLimitSeconds);
     const { result, barcode } = (() => {
       try {
@@ -66,7 +87,7 @@ Examples:
             maxDim: limits.topDim,
             budget: limits.budget,
           }),
-          barcode: barcodeWithinBudget(graph, graphOptions.weights, limits, work.control),
+          barcode: barcodeWithinBudget(upToGridEnd, weights, limits, work.control),
         };
       } finally {
         work.stop();
@@ -77,12 +98,13 @@ Examples:
     const report: SweepReport = {
       file,
       directed: graph.directed,
-      weights: graphOptions.weights,
+      weights,
       nodes: graph.n,
       thresholds: Array.from(result.thresholds),
       counts,
       euler: Array.from(result.euler),
-      density: counts.map((row) => (possible === 0 ? 0 : (row[1] ?? 0) / possible)),
+      // From the graph, not from the counts: --top-dim 0 counts no edges.
+      density: edgesAt(graph, grid).map((edges) => (possible === 0 ? 0 : edges / possible)),
       truncated: result.truncated,
       betti: barcode && bettiCurves(barcode, grid).map((row) => Array.from(row)),
       prime: limits.prime,
@@ -101,12 +123,19 @@ export function renderSweep(report: SweepReport, format: OutputFormat): string {
   const bettiDims = betti ? Array.from({ length: betti[0]?.length ?? 0 }, (_, k) => k) : [];
   if (format === "csv") {
     return csvDocument(
-      ["threshold", "density", ...dims.map((k) => `simplices_${k}`), "euler"],
+      [
+        "threshold",
+        "density",
+        ...dims.map((k) => `simplices_${k}`),
+        "euler",
+        ...bettiDims.map((k) => `betti_${k}`),
+      ],
       report.thresholds.map((t, i) => [
         t,
         report.density[i],
         ...dims.map((k) => cell(report.counts[i], k)),
         report.euler[i],
+        ...bettiDims.map((k) => betti![i][k]),
       ]),
     );
   }
@@ -127,4 +156,18 @@ export function renderSweep(report: SweepReport, format: OutputFormat): string {
   ];
   const note = `\n${notes.join("\n")}`;
   return `${table}${note}\n`;
+}
+
+/** Edges present at each threshold of the grid (arcs for a directed graph). */
+function edgesAt(graph: WeightedGraph, grid: ThresholdGrid): number[] {
+  const bins = edgeBins(edgeFiltration(graph, grid.semantics), gridFiltrationValues(grid));
+  const entering = new Array<number>(grid.thresholds.length).fill(0);
+  for (const bin of bins) if (bin >= 0) entering[bin]++;
+  // Undirected edges are stored in both rows.
+  const slotsPerEdge = graph.directed ? 1 : 2;
+  let total = 0;
+  return entering.map((count) => {
+    total += count;
+    return total / slotsPerEdge;
+  });
 }

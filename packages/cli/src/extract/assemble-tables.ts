@@ -50,12 +50,15 @@ export function assembleTables(
     X.set(values, i * F);
   });
   const codes = done.map((record) => labelCode(record.label, labelNames));
+  // Whether the graph has simplices above topDim: its Euler columns are then partial sums (see docs).
+  const truncated = done.map((record) => record.truncated ?? null);
   const featuresCsv = csvDocument(
-    ["id", "label", "split", ...featureNames],
+    ["id", "label", "split", "truncated", ...featureNames],
     done.map((record, i) => [
       record.id,
       record.label ?? "",
       record.split ?? "",
+      truncated[i] === null ? "" : String(truncated[i]),
       ...Array.from(X.subarray(i * F, (i + 1) * F)),
     ]),
   );
@@ -66,6 +69,13 @@ export function assembleTables(
     { name: "feature_names", dtype: "unicode", shape: [F], values: featureNames },
     { name: "label_names", dtype: "unicode", shape: [labelNames.length], values: labelNames },
     { name: "splits", dtype: "unicode", shape: [done.length], values: done.map((r) => r.split ?? "") },
+    // 1: Euler columns are partial sums; 0: exact; −1: no count sweep was made (its families were off).
+    {
+      name: "truncated",
+      dtype: "int64",
+      shape: [done.length],
+      values: truncated.map((t) => (t === null ? -1 : t ? 1 : 0)),
+    },
   ]);
   const errorsCsv = csvDocument(
     ["id", "file", "line", "column", "reason"],

@@ -1,5 +1,7 @@
 import type { Dataset } from "@cliquescape/io";
+import type { GraphFailure } from "./graph-failure.js";
 import { InterruptedError } from "./interrupted-error.js";
+import { noEdgeError } from "./no-edge-error.js";
 import { startProgress } from "./progress.js";
 import type { RunSpec } from "./run-spec.js";
 import { runOnWorkers } from "./worker-pool.js";
@@ -12,7 +14,10 @@ export interface PassOptions {
   signal: AbortSignal;
 }
 
-/** Reads every graph once (on the workers) and returns a bounded sample of all their edge values. */
+/**
+ * Reads every graph once (on the workers) and returns a bounded sample of all their edge values. When no
+ * graph gives an edge, fails with the graphs' own reasons (a NoEdgeError).
+ */
 export async function firstPass(
   spec: RunSpec,
   dataset: Dataset,
@@ -21,6 +26,7 @@ export async function firstPass(
   const entries = dataset.entries;
   const limit = Math.max(1, Math.floor(FIRST_PASS_VALUES / Math.max(1, entries.length)));
   const parts: Float64Array[] = [];
+  const failures: (GraphFailure | null)[] = entries.map(() => null);
   let failed = 0;
   let done = 0;
   const progress = startProgress("first pass (weight quantiles)", entries.length);
@@ -30,7 +36,10 @@ export async function firstPass(
       if (reply.kind !== "sample") return;
       done++;
       if (reply.values) parts[reply.index] = reply.values;
-      else failed++;
+      else {
+        failed++;
+        failures[reply.index] = reply.failure;
+      }
       progress.update(done, failed);
     },
     {
@@ -39,7 +48,12 @@ export async function firstPass(
       signal: request.signal,
       timeLimitSeconds: spec.complex.timeLimitSeconds,
       // A graph that cannot be read here fails again, with its reason, when it is computed.
-      failedReply: (task) => ({ kind: "sample", index: task.index, values: null, failure: null }),
+      failedReply: (task, message) => ({
+        kind: "sample",
+        index: task.index,
+        values: null,
+        failure: { file: task.entry.file, line: null, column: null, reason: message, kind: "WorkerError" },
+      }),
     },
   );
   progress.stop();
@@ -47,6 +61,7 @@ export async function firstPass(
     throw new InterruptedError("interrupted during the first pass; nothing was computed");
   // Dataset order, whatever order the workers answered in: the quantiles do not depend on scheduling.
   const total = parts.reduce((sum, part) => sum + (part?.length ?? 0), 0);
+  if (total === 0) throw noEdgeError(entries, failures);
   const sample = new Float64Array(total);
   let at = 0;
   for (const part of parts) {

@@ -1,4 +1,5 @@
 import { formatPosition, InputFileError } from "@cliquescape/io";
+import { cliMessage } from "../cli-message.js";
 
 /** Why one graph was left out of the tables, with the place to look; one row of errors.csv. */
 export interface GraphFailure {
@@ -22,7 +23,9 @@ export function graphFailureOf(error: unknown, file: string): GraphFailure {
       file: error.file,
       line: line ?? null,
       column: column ?? null,
-      reason: binary ? `${error.reason} (${formatPosition(error.position).slice(2)})` : error.reason,
+      reason: cliMessage(
+        binary ? `${error.reason} (${formatPosition(error.position).slice(2)})` : error.reason,
+      ),
       kind: error.name,
     };
   }
@@ -47,7 +50,7 @@ export function graphFailureOf(error: unknown, file: string): GraphFailure {
     file,
     line: null,
     column: null,
-    reason: known ? `${message}${cell}` : `unexpected ${name}: ${message} (please report this)`,
+    reason: known ? cliMessage(`${message}${cell}`) : `unexpected ${name}: ${message} (please report this)`,
     kind: name,
   };
 }

@@ -1,23 +1,15 @@
 import {
   allEdgesGrid,
   type Barcode,
-  densityGrid,
   edgeCount,
   type FeatureConfig,
-  type NodeEdgeFeatures,
-  nodeEdgeFeatures,
-  nodeFeatureNames,
   type WeightedGraph,
   type WorkControl,
 } from "@cliquescape/core";
-import {
-  type DatasetEntry,
-  encodeNpz,
-  graphFeatures,
-  type NodeCoordinates,
-  type NpzArray,
-} from "@cliquescape/io";
+import { type DatasetEntry, graphFeatures } from "@cliquescape/io";
+import { cliMessage } from "../cli-message.js";
 import { type BarcodeReport, renderBarcode } from "../commands/barcode.js";
+import { gnnBundle } from "./gnn-bundle.js";
 import { type GraphFailure, graphFailureOf } from "./graph-failure.js";
 import { readPreparedGraph } from "./read-prepared-graph.js";
 import type { ResolvedRunSpec } from "./run-spec.js";
@@ -64,7 +56,7 @@ export function computeGraph(
   let warnings: string[] = [];
   try {
     const read = readPreparedGraph(entry, spec.preparation);
-    warnings = read.warnings;
+    warnings = read.warnings.map(cliMessage);
     const { graph, coordinates } = read;
     const semantics = spec.preparation.weights;
     const features = graphFeatures(graph, {
@@ -125,88 +117,4 @@ function barcodeDocument(
     bars: barcode.bars.map((bar) => ({ dim: bar.dim, birth: bar.birth, death: bar.death })),
   };
   return renderBarcode(report, "json");
-}
-
-/** The weight at which node and edge features are read, or undefined for every edge. */
-export function nodeFeatureThreshold(graph: WeightedGraph, spec: ResolvedRunSpec): number | undefined {
-  const choice = spec.nodeFeatures.threshold;
-  if (choice.kind === "all") return undefined;
-  if (choice.kind === "weight") return choice.value;
-  return densityGrid(graph, [choice.value], spec.preparation.weights).thresholds[0];
-}
-
-/**
- * The GNN bundle of one graph: arrays named and shaped as graph-learning libraries take them (x, edge_index
- * 2×E, edge_attr, y), with the column names, node labels, the threshold they were read at and, when the
- * dataset gives node coordinates, their positions (pos).
- */
-function gnnBundle(
-  graph: WeightedGraph,
-  labelCode: number,
-  spec: ResolvedRunSpec,
-  coordinates: NodeCoordinates | undefined,
-  work: WorkControl,
-): Uint8Array {
-  const semantics = spec.preparation.weights;
-  const threshold = nodeFeatureThreshold(graph, spec);
-  const f = inNodeLayout(
-    nodeEdgeFeatures(graph, {
-      threshold,
-      semantics,
-      topDim: spec.complex.topDim,
-      budget: spec.complex.simplexBudget ?? undefined,
-      work,
-    }),
-    graph,
-    spec,
-  );
-  const F = f.nodeFeatureNames.length;
-  const G = f.edgeFeatureNames.length;
-  const E = f.edgeIndex.length / 2;
-  const labels = Array.from({ length: graph.n }, (_, v) => (graph.labels ? graph.labels[v] : String(v)));
-  const arrays: NpzArray[] = [
-    { name: "x", dtype: "float32", shape: [graph.n, F], values: f.x },
-    { name: "edge_index", dtype: "int64", shape: [2, E], values: f.edgeIndex },
-    { name: "edge_attr", dtype: "float32", shape: [E, G], values: f.edgeAttr },
-    { name: "y", dtype: "int64", shape: [1], values: [labelCode] },
-    { name: "directed", dtype: "int64", shape: [1], values: [graph.directed ? 1 : 0] },
-    { name: "node_feature_names", dtype: "unicode", shape: [F], values: f.nodeFeatureNames },
-    { name: "edge_feature_names", dtype: "unicode", shape: [G], values: f.edgeFeatureNames },
-    { name: "node_labels", dtype: "unicode", shape: [graph.n], values: labels },
-    // NaN when every edge is kept.
-    { name: "threshold", dtype: "float64", shape: [1], values: [threshold ?? Number.NaN] },
-  ];
-  if (coordinates) {
-    const pos = Float32Array.from(coordinates.values);
-    arrays.push({ name: "pos", dtype: "float32", shape: [graph.n, coordinates.dims], values: pos });
-  }
-  return encodeNpz(arrays);
-}
-
-/**
- * The node table in the dataset's layout, so every bundle has the same columns. An undirected graph in the
- * directed layout: in- and out-degree are its degree, in- and out-strength its strength, and participation
- * as source or sink is 0 (its simplices have no orientation; the bundle's `directed` flag says so).
- */
-function inNodeLayout(f: NodeEdgeFeatures, graph: WeightedGraph, spec: ResolvedRunSpec): NodeEdgeFeatures {
-  if (spec.nodeLayout === (graph.directed ? "directed" : "undirected")) return f;
-  if (graph.directed) {
-    throw new RangeError(
-      "the graph is directed but the spec's nodeLayout is undirected (made for a dataset without directed graphs)",
-    );
-  }
-  const topDim = spec.complex.topDim;
-  const names = nodeFeatureNames(true, topDim);
-  const from = f.nodeFeatureNames.length;
-  const to = names.length;
-  const x = new Float32Array(graph.n * to);
-  for (let v = 0; v < graph.n; v++) {
-    const row = f.x.subarray(v * from, (v + 1) * from);
-    x[v * to] = row[0]; // in_degree
-    x[v * to + 1] = row[0]; // out_degree
-    x[v * to + 2] = row[1]; // in_strength
-    x[v * to + 3] = row[1]; // out_strength
-    for (let k = 1; k <= topDim; k++) x[v * to + 3 + k] = row[1 + k]; // simplices_d{k}; source/sink stay 0
-  }
-  return { ...f, nodeFeatureNames: names, x };
 }

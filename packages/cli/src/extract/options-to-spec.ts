@@ -25,6 +25,9 @@ export function optionsToSpec(raw: Raw, given: (name: string) => boolean): { spe
     symmetrize: raw.symmetrize,
     negatives: raw.negatives,
     zeroEdges: raw.zeroEdges,
+    nanCells: raw.nanCells,
+    maxNodes: raw.maxNodes,
+    maxFileMiB: raw.maxFile,
     transform: raw.transform,
   });
   section("complex", {

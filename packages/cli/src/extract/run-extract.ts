@@ -1,5 +1,5 @@
 import { existsSync, readFileSync } from "node:fs";
-import { dirname, relative, sep } from "node:path";
+import { dirname, relative, resolve, sep } from "node:path";
 import type { WorkProgress } from "@cliquescape/core";
 import { graphFeatureNames, type OpenDatasetOptions, openDataset, writeFileAtomic } from "@cliquescape/io";
 import { UsageError } from "../options/graph-options.js";
@@ -48,7 +48,16 @@ export interface ExtractResult {
  */
 export async function runExtract(request: ExtractRequest): Promise<ExtractResult> {
   const requested = validateSpec(request.spec, request.specSource);
-  const dataset = openDataset(request.dataset, request.datasetOptions);
+  const maxFileMiB = requested.preparation.maxFileMiB;
+  const dataset = openDataset(request.dataset, {
+    ...request.datasetOptions,
+    ...(maxFileMiB === null ? {} : { maxBytes: maxFileMiB * 2 ** 20 }),
+  });
+  if (dataset.kind === "manifest" && resolve(request.dataset) !== dataset.root) {
+    process.stderr.write(
+      `cliquescape: ${request.dataset} holds a manifest: reading the dataset from ${dataset.root}\n`,
+    );
+  }
   // Files are named relative to the dataset's folder, so records and tables do not depend on where it sits.
   const base = dataset.kind === "folder" ? dataset.root : dirname(dataset.root);
   const relativeFile = (file: string) => relative(base, file).split(sep).join("/");
@@ -85,7 +94,7 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
       request.dataset,
       dataset,
       hashes,
-      dataset.kind === "manifest" ? hashOrNote(request.dataset) : "",
+      dataset.kind === "manifest" ? hashOrNote(dataset.root) : "",
       relativeFile,
       request.datasetOptions,
     ),

@@ -18,10 +18,21 @@ export const PreparationSchema = z
     directed: z.enum(["auto", "directed", "undirected"]).default("auto"),
     /** What the weights mean after the transform: similarity (large = strong) or distance (small = close). */
     weights: z.enum(["similarity", "distance"]).default("similarity"),
+    /**
+     * How to merge a_ij and a_ji of a matrix read as undirected when they differ; "error" refuses it. Values
+     * within a relative 1e-9 of each other are one weight (their mean) whatever this says.
+     */
     symmetrize: z.enum(["error", "max", "min", "mean"]).default("error"),
-    negatives: z.enum(["error", "abs", "drop", "keep"]).default("error"),
+    /** auto: a negative similarity is no edge (as 0 is), a negative distance is refused. */
+    negatives: z.enum(["auto", "error", "abs", "drop", "keep"]).default("auto"),
     /** Whether a 0 read from a file is an edge; auto: no for similarity weights, yes for distances. */
     zeroEdges: z.enum(["auto", "edge", "no-edge"]).default("auto"),
+    /** NaN cells (numpy's corrcoef of a constant signal): no edge, or refuse the graph. */
+    nanCells: z.enum(["no-edge", "error"]).default("no-edge"),
+    /** Largest matrix read, in nodes (n × n cells of 8 bytes are held while a matrix is read). */
+    maxNodes: positiveInt.default(8192),
+    /** Largest file read, in MiB; null: 256 for text, 2048 for .npy, .npz and .mat. */
+    maxFileMiB: positiveInt.nullable().default(null),
     /** Applied to every edge value as read, before the weight semantics: 1−w, −log w, 1/w. */
     transform: z.enum(EDGE_TRANSFORMS).default("none"),
   })
@@ -152,6 +163,7 @@ export const RunSpecSchema = z.strictObject({
   datasetOptions: z
     .strictObject({
       labelsFile: z.string().optional(),
+      labelsColumn: z.string().optional(),
       coordinatesFile: z.string().optional(),
       variable: z.string().optional(),
     })
@@ -167,6 +179,7 @@ export type GridRequest = RunSpec["grid"];
 export type ResolvedGrid = z.output<typeof ResolvedGridSchema>;
 export type NodeThreshold = RunSpec["nodeFeatures"]["threshold"];
 export type EdgeTransform = (typeof EDGE_TRANSFORMS)[number];
+export type Preparation = RunSpec["preparation"];
 
 /** A spec after the first pass: the grid and the label codes are fixed. */
 export type ResolvedRunSpec = RunSpec & {

@@ -1,4 +1,5 @@
 import { isAbsolute, relative, resolve } from "node:path";
+import { negativePolicy } from "@cliquescape/io";
 import { formatWeight } from "../render/format-number.js";
 import { textTable } from "../render/text-table.js";
 import type { ErrorRow } from "./assemble-tables.js";
@@ -42,6 +43,7 @@ export function renderSummary(input: SummaryInput): string {
     `grid: ${axis.values.length} ${axis.kind === "weight" ? `${spec.preparation.weights} thresholds` : "edge densities"} ${range}; ` +
       `${input.featureNames.length} features per graph`,
   );
+  lines.push(negativesLine(spec, records));
   lines.push("");
   lines.push("outputs:");
   const outputs: [string, string][] = [
@@ -89,6 +91,26 @@ export function renderSummary(input: SummaryInput): string {
   }
   if (input.interrupted) lines.push("\nrun the same command again to finish: finished graphs are kept");
   return `${lines.join("\n")}\n`;
+}
+
+/**
+ * What became of negative weights, always printed: the default drops negative similarities, which changes
+ * the topology of correlation matrices, so a reader of the log must see it.
+ */
+function negativesLine(spec: ResolvedRunSpec, records: readonly GraphRecord[]): string {
+  const { negatives, transform, weights } = spec.preparation;
+  // Under "auto" the values as read decide: those are similarities whenever there is a transform.
+  const semantics = transform === "none" ? weights : "similarity";
+  const policy = negativePolicy({ negative: negatives === "auto" ? undefined : negatives, semantics });
+  const changed = records.filter((r) => r.warnings.some((w) => / negative weight/.test(w))).length;
+  const what = {
+    drop: `dropped (no edge) in ${changed} of ${records.length} graphs`,
+    abs: `replaced by their absolute value in ${changed} of ${records.length} graphs`,
+    keep: "kept as they are",
+    error: "refused (a graph with one is left out)",
+  }[policy];
+  const why = negatives === "auto" ? `--negatives auto, for ${semantics} values` : `--negatives ${negatives}`;
+  return `negative weights: ${what} (${why}); NaN cells: ${spec.preparation.nanCells === "no-edge" ? "no edge" : "refused"}`;
 }
 
 function formatMean(x: number): string {

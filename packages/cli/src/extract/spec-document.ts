@@ -32,7 +32,7 @@ export function specDocument(
         ? [
             {
               id: "(manifest)",
-              file: relativeFile(datasetArgument),
+              file: relativeFile(dataset.root),
               sha256: manifestHash,
             },
           ]

@@ -1,5 +1,6 @@
 import { type Command, Option } from "commander";
-import { nonNegativeInteger, UsageError } from "./graph-options.js";
+import type { RunSpec } from "../extract/run-spec.js";
+import { type Given, nonNegativeInteger, positiveInteger, UsageError } from "./graph-options.js";
 
 /** Homology goes up to this dimension unless --top-dim says otherwise (H0, H1, H2). */
 export const DEFAULT_HOMOLOGY_DIM = 2;
@@ -18,6 +19,8 @@ export interface ComplexOptions {
   memoryBytes?: number;
   /** Null: no limit. */
   timeLimitSeconds: number | null;
+  /** With --spec: the barcode covers the filtration up to the grid's end ("axis") or all of it ("full"). */
+  barcodeRange: "axis" | "full";
 }
 
 export function addComplexOptions(command: Command): Command {
@@ -36,7 +39,7 @@ export function addComplexOptions(command: Command): Command {
     )
     .addOption(
       new Option("--memory <MiB>", "memory the homology computation may hold (default 2048)").argParser(
-        nonNegativeInteger,
+        positiveInteger,
       ),
     )
     .addOption(timeLimitOption());
@@ -69,12 +72,24 @@ export function nonNegativeNumber(text: string): number {
   return value;
 }
 
-export function complexOptionsOf(raw: Record<string, unknown>): ComplexOptions {
+/** The limits as typed, or, for each one not typed, those of `spec` (a run's spec.json) when one is given. */
+export function complexOptionsOf(
+  raw: Record<string, unknown>,
+  spec: RunSpec | null = null,
+  given: Given = () => true,
+): ComplexOptions {
+  const pick = <T>(option: string, typed: T, fromSpec: T): T => (spec && !given(option) ? fromSpec : typed);
+  const memory = raw.memory as number | undefined;
   return {
-    topDim: raw.topDim as number | undefined,
-    budget: raw.budget as number | undefined,
-    prime: raw.prime as number,
-    memoryBytes: raw.memory === undefined ? undefined : (raw.memory as number) * 2 ** 20,
+    topDim: pick("topDim", raw.topDim as number | undefined, spec?.complex.topDim),
+    budget: pick("budget", raw.budget as number | undefined, spec?.complex.simplexBudget ?? undefined),
+    prime: pick("prime", raw.prime as number, spec?.complex.prime ?? 2),
+    memoryBytes: pick(
+      "memory",
+      memory === undefined ? undefined : memory * 2 ** 20,
+      (spec?.complex.homologyMemoryMiB ?? 0) * 2 ** 20,
+    ),
+    barcodeRange: spec?.complex.barcodeRange ?? "full",
     timeLimitSeconds: timeLimitOf(raw),
   };
 }

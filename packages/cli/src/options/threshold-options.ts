@@ -1,21 +1,27 @@
 import {
   allEdgesGrid,
+  axisGrid,
   densityGrid,
   evenGrid,
   explicitGrid,
+  type FeatureAxis,
   type ThresholdGrid,
   type WeightedGraph,
   type WeightSemantics,
 } from "@cliquescape/core";
 import { type Command, Option } from "commander";
-import { finiteNumber, nonNegativeInteger, numberList, UsageError } from "./graph-options.js";
+import { resolveGrid } from "../extract/resolve-grid.js";
+import type { RunSpec } from "../extract/run-spec.js";
+import { finiteNumber, type Given, nonNegativeInteger, numberList, UsageError } from "./graph-options.js";
 
-/** Where to read the filtration: given weights, given edge densities, or evenly spaced weights. */
+/** Where to read the filtration: given weights, given edge densities, evenly spaced weights, or a run's axis. */
 export interface ThresholdChoice {
   threshold?: number[];
   density?: number[];
   steps?: number;
   range?: [number, number];
+  /** The axis of an extract run (--spec): the graph is read exactly where the run read it. */
+  axis?: FeatureAxis;
 }
 
 /** One threshold (inspect, barcode cycles). Neither option: every edge is in. */
@@ -61,6 +67,28 @@ export function thresholdChoiceOf(raw: Record<string, unknown>): ThresholdChoice
   return choice;
 }
 
+/** A sweep's grid: the options typed, or, with none typed, the grid of `spec` (a run's spec.json). */
+export function gridChoiceOf(
+  raw: Record<string, unknown>,
+  spec: RunSpec | null,
+  typed: Given,
+): ThresholdChoice {
+  const choice = thresholdChoiceOf(raw);
+  if (!spec || ["threshold", "density", "steps", "range"].some(typed)) return choice;
+  return { axis: specAxis(spec) };
+}
+
+/** The axis an extract run reads every graph on: the spec's resolved grid, or its explicit grid. */
+export function specAxis(spec: RunSpec): FeatureAxis {
+  if (spec.resolvedGrid) return spec.resolvedGrid;
+  if (spec.grid.kind === "quantiles") {
+    throw new UsageError(
+      "the spec's grid is a quantile grid, which only an extract run can resolve (from all the dataset's weights): pass the spec.json of a finished run, or give --threshold or --density",
+    );
+  }
+  return resolveGrid(spec.grid, spec.preparation.weights);
+}
+
 /**
  * Resolves the user's choice to a grid on this graph. With no choice at all, a sweep uses `defaultSteps`
  * evenly spaced thresholds and a single-threshold command keeps every edge.
@@ -71,6 +99,7 @@ export function gridOf(
   choice: ThresholdChoice,
   defaultSteps?: number,
 ): ThresholdGrid {
+  if (choice.axis) return axisGrid(graph, choice.axis, semantics);
   if (choice.threshold) return explicitGrid(choice.threshold, semantics);
   if (choice.density) {
     for (const d of choice.density)

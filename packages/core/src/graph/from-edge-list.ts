@@ -1,6 +1,6 @@
 import { checkWeight } from "./check-weight.js";
 import { GraphInputError } from "./graph-input-error.js";
-import type { NegativePolicy, WarningSink } from "./policies.js";
+import { type NegativePolicy, noteNegatives, type WarningSink } from "./policies.js";
 import type { WeightedGraph } from "./weighted-graph.js";
 
 export interface EdgeListInput {
@@ -38,6 +38,7 @@ export function fromEdgeList(input: EdgeListInput): WeightedGraph {
   const kept = new Float64Array(m);
   const degree = new Int32Array(n + 1);
   let selfLoops = 0;
+  let negatives = 0;
   for (let e = 0; e < m; e++) {
     const u = sources[e];
     const v = targets[e];
@@ -47,6 +48,7 @@ export function fromEdgeList(input: EdgeListInput): WeightedGraph {
       }
     }
     const w = checkWeight(weights[e], negative, () => ({ edge: e }));
+    if (weights[e] < 0 && u !== v) negatives++;
     if (u === v) {
       selfLoops++;
       kept[e] = Number.NaN;
@@ -57,6 +59,7 @@ export function fromEdgeList(input: EdgeListInput): WeightedGraph {
     degree[u + 1]++;
     if (!directed) degree[v + 1]++;
   }
+  noteNegatives(negatives, negative, input.onWarning);
   if (selfLoops > 0) input.onWarning?.(`dropped ${selfLoops} self-loop${selfLoops === 1 ? "" : "s"}`);
 
   const offsets = new Int32Array(n + 1);

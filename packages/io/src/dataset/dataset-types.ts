@@ -38,12 +38,20 @@ export interface Dataset {
 }
 
 export interface OpenDatasetOptions {
-  /** For a stack: labels, one per line in slice order, or a CSV with columns id,label. */
+  /**
+   * For a stack: labels, one per line in slice order, or a table with a header naming an id column (`id`,
+   * `participant_id`, `subject_id`, `subject`) and a label column: the stack's own ids, or the user's ids
+   * naming the slices in order (then they become the graphs' ids).
+   */
   labelsFile?: string;
+  /** The labels table's column of labels. Default `label`. */
+  labelsColumn?: string;
   /** A coordinates CSV (node,x,y[,z]) for every graph that has none of its own. */
   coordinatesFile?: string;
   /** For a .npz or .mat stack: the array or variable to use. Default: the only 2-D/3-D numeric one. */
   variable?: string;
+  /** For a stack: refuse a file larger than this many bytes (default as for readGraphFile). */
+  maxBytes?: number;
 }
 
 /** "file:12:3: reason" — a problem in the form editors and compilers use. */

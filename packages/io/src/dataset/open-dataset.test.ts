@@ -84,6 +84,26 @@ describe("a folder", () => {
   });
 });
 
+describe("a folder holding a manifest", () => {
+  it("is read through its manifest (the layout of demo-data/), not as a folder of graphs", () => {
+    put("with-manifest/graphs/g1.csv", TRIANGLE);
+    put("with-manifest/manifest.csv", "id,file,label\ng1,graphs/g1.csv,x\n");
+    put("with-manifest/edges.csv", "source,target,weight\na,b,1\n");
+    const dataset = openDataset(join(root, "with-manifest"));
+    expect(dataset.kind).toBe("manifest");
+    expect(dataset.root).toBe(join(root, "with-manifest", "manifest.csv"));
+    expect(dataset.entries.map((e) => [e.id, e.label])).toEqual([["g1", "x"]]);
+  });
+
+  it("with several manifests, asks which one", () => {
+    put("two-manifests/train.csv", "ID,File\n");
+    put("two-manifests/test.tsv", "id\tfile\tlabel\n");
+    expect(errorOf(() => openDataset(join(root, "two-manifests"))).message).toBe(
+      `${join(root, "two-manifests")}: the folder holds 2 manifests (test.tsv, train.csv); pass the one to use`,
+    );
+  });
+});
+
 describe("a manifest", () => {
   put("m/graphs/g1.csv", TRIANGLE);
   put("m/graphs/g2.txt", PATH);
@@ -275,13 +295,44 @@ describe("a stack", () => {
     );
   });
 
+  it("a table of the user's own ids names the slices in order: ids, labels, split and metadata", () => {
+    const own = put("s/own.csv", "id,label,split\nsub-01,ring,train\nsub-02,,test\nsub-03,islands,train\n");
+    const dataset = openDataset(npy, { labelsFile: own });
+    expect(dataset.entries.map((e) => [e.id, e.slice, e.label, e.split])).toEqual([
+      ["sub-01", 0, "ring", "train"],
+      ["sub-02", 1, null, "test"],
+      ["sub-03", 2, "islands", "train"],
+    ]);
+    expect(dataset.problems).toEqual([]);
+    const tooFew = put("s/own-short.csv", "id,label\nsub-01,ring\nsub-02,ring\n");
+    expect(errorOf(() => openDataset(npy, { labelsFile: tooFew })).reason).toBe(
+      '2 rows for a stack of 3 graphs: ids such as "sub-01" are not the stack\'s (subjects-0 … subjects-2), so the rows must name the slices in order, one row per slice',
+    );
+  });
+
+  it("a participants table (BIDS participants.tsv: participant_id, then any columns) with the labels column named", () => {
+    const tsv = put(
+      "s/participants.tsv",
+      "participant_id\tage\tgroup\nsub-01\t34\tcontrol\nsub-02\t51\tpatient\nsub-03\t29\tcontrol\n",
+    );
+    const dataset = openDataset(npy, { labelsFile: tsv, labelsColumn: "group" });
+    expect(dataset.entries.map((e) => [e.id, e.label, e.metadata])).toEqual([
+      ["sub-01", "control", { age: "34" }],
+      ["sub-02", "patient", { age: "51" }],
+      ["sub-03", "control", { age: "29" }],
+    ]);
+    expect(errorOf(() => openDataset(npy, { labelsFile: tsv })).message).toBe(
+      `${tsv}:1: the header has no "label" column (it has participant_id, age, group); name the column of labels with the labelsColumn option`,
+    );
+  });
+
   it("an error in one slice names the slice and its element", () => {
     const bad = values.slice();
     bad[2 * 9 + 1] = Number.NaN;
     const file = put("s/bad.npy", encodeNpy(bad, [3, 3, 3]));
     const dataset = openDataset(file);
     expect(readDatasetGraph(dataset.entries[0], {}).graph.n).toBe(3);
-    const e = errorOf(() => readDatasetGraph(dataset.entries[2], {}));
+    const e = errorOf(() => readDatasetGraph(dataset.entries[2], { nanIsNoEdge: false }));
     expect(e.position.element).toEqual([2, 0, 1]);
     expect(e.message).toMatch(
       /bad\.npy: element \(2, 0, 1\) at byte \d+: graph 2 of the stack: NaN is not a finite weight/,

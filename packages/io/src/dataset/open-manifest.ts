@@ -49,6 +49,12 @@ export function openManifestDataset(manifest: string): Dataset {
   return { root: manifest, kind: "manifest", entries, problems };
 }
 
+/** Whether a header line names the two columns a manifest needs, `id` and `file` (any case). */
+export function isManifestHeader(cells: readonly string[]): boolean {
+  const names = cells.map((cell) => cell.trim().toLowerCase());
+  return names.includes("id") && names.includes("file");
+}
+
 interface Columns {
   names: string[];
   known: Partial<Record<KnownColumn, number>>;

@@ -3,15 +3,22 @@ import { graphCount } from "../formats/matrix-stack.js";
 import { InputFileError } from "../input-file-error.js";
 import type { Dataset, DatasetEntry, DatasetProblem } from "./dataset-types.js";
 import { fileStem } from "./graph-file-extensions.js";
-import { readLabelsFile } from "./read-labels-file.js";
+import { type LabelRow, readLabelsFile } from "./read-labels-file.js";
 import { loadStack } from "./stack-source.js";
 
 /**
  * One entry per graph of a stack file (3-D .npy, .npz or .mat): ids `<stem>-<k>`, k zero-padded to the
- * width of the last index so that ids sort in slice order. Labels come from an optional labels file.
+ * width of the last index so that ids sort in slice order. Labels (and split and metadata) come from an
+ * optional labels file; a labels table of the user's own ids gives the slices those ids, in order.
  */
-export function openStackDataset(file: string, labelsFile?: string, variable?: string): Dataset {
-  const source = loadStack(file, variable);
+export function openStackDataset(
+  file: string,
+  labelsFile?: string,
+  variable?: string,
+  maxBytes?: number,
+  labelsColumn?: string,
+): Dataset {
+  const source = loadStack(file, variable, maxBytes);
   const { shape } = source.array;
   if (shape.length !== 2 && shape.length !== 3) {
     throw new InputFileError(
@@ -38,12 +45,17 @@ export function openStackDataset(file: string, labelsFile?: string, variable?: s
     entries.push(entry);
   }
   const problems: DatasetProblem[] = [];
-  if (labelsFile !== undefined) applyLabels(entries, labelsFile, problems);
+  if (labelsFile !== undefined) applyLabels(entries, labelsFile, labelsColumn, problems);
   return { root: file, kind: "stack", entries, problems };
 }
 
-function applyLabels(entries: DatasetEntry[], labelsFile: string, problems: DatasetProblem[]): void {
-  const labels = readLabelsFile(labelsFile);
+function applyLabels(
+  entries: DatasetEntry[],
+  labelsFile: string,
+  labelsColumn: string | undefined,
+  problems: DatasetProblem[],
+): void {
+  const labels = readLabelsFile(labelsFile, labelsColumn);
   if (labels.kind === "by-position") {
     if (labels.labels.length !== entries.length) {
       throw new InputFileError(
@@ -59,19 +71,42 @@ function applyLabels(entries: DatasetEntry[], labelsFile: string, problems: Data
     return;
   }
   const byId = new Map(entries.map((entry) => [entry.id, entry]));
-  for (const [id, { label, line, column }] of labels.labels) {
-    const entry = byId.get(id);
+  const range = `${entries[0]?.id} … ${entries[entries.length - 1]?.id}`;
+  // Rows naming the stack's own ids label those slices; a table of the user's own ids names the slices in order.
+  if (!labels.rows.some((row) => byId.has(row.id))) {
+    if (labels.rows.length !== entries.length) {
+      throw new InputFileError(
+        labelsFile,
+        "bad-labels",
+        `${labels.rows.length} rows for a stack of ${entries.length} graphs: ids such as "${labels.rows[0]?.id}" are not the stack's (${range}), so the rows must name the slices in order, one row per slice`,
+      );
+    }
+    labels.rows.forEach((row, k) => {
+      const entry = entries[k];
+      entry.id = row.id;
+      label(entry, row, labelsFile);
+    });
+    return;
+  }
+  for (const row of labels.rows) {
+    const entry = byId.get(row.id);
     if (!entry) {
       problems.push({
-        id,
+        id: row.id,
         file: labelsFile,
-        line,
-        column,
-        reason: `no graph "${id}" in the stack (ids run ${entries[0]?.id} … ${entries[entries.length - 1]?.id})`,
+        line: row.line,
+        column: row.column,
+        reason: `no graph "${row.id}" in the stack (ids run ${range})`,
       });
       continue;
     }
-    entry.label = label;
-    entry.declaredAt = { file: labelsFile, line };
+    label(entry, row, labelsFile);
   }
+}
+
+function label(entry: DatasetEntry, row: LabelRow, labelsFile: string): void {
+  entry.label = row.label;
+  entry.split = row.split;
+  entry.metadata = row.metadata;
+  entry.declaredAt = { file: labelsFile, line: row.line };
 }

@@ -5,8 +5,13 @@ import graphml from "graphology-graphml";
 import { InputFileError } from "../input-file-error.js";
 import type { GraphsReadResult } from "../npy-graphs.js";
 import { decodeText, readFileBytes } from "../read-file-bytes.js";
-import { DEFAULT_MAX_TEXT_BYTES, type GraphReadOptions, zeroIsEdge } from "../read-options.js";
-import { checkXml } from "./xml-document.js";
+import {
+  DEFAULT_MAX_TEXT_BYTES,
+  type GraphReadOptions,
+  negativePolicy,
+  zeroIsEdge,
+} from "../read-options.js";
+import { checkXml, type XmlDocument } from "./xml-document.js";
 
 type ParsedGraph = ReturnType<typeof graphml.parse>;
 
@@ -23,7 +28,7 @@ const ROOTS: Record<XmlGraphFormat, string> = { graphml: "graphml", gexf: "gexf"
  * Reads a GraphML or GEXF file with graphology's parsers, then builds our graph with fromGraphology: node
  * ids become labels in file order, weights come from `weightAttribute`. Edges are directed or undirected
  * as the file declares. As for matrices, a weight of 0 is no edge unless zeros are edges under the
- * options, and NaN is an error unless `nanIsNoEdge`.
+ * options; NaN (which is also what graphology makes of unreadable text) is refused unless `nanIsNoEdge`.
  */
 export function readXmlGraphFile(
   path: string,
@@ -31,7 +36,7 @@ export function readXmlGraphFile(
   options: XmlGraphReadOptions = {},
 ): GraphsReadResult {
   const text = decodeText(readFileBytes(path, options.maxBytes ?? DEFAULT_MAX_TEXT_BYTES), path);
-  const { root, counts } = checkXml(text, path, ["graph"]);
+  const { document, root, counts } = checkXml(text, path, ["graph"]);
   if (root !== ROOTS[format]) {
     throw new InputFileError(
       path,
@@ -51,6 +56,8 @@ export function readXmlGraphFile(
     // A multigraph keeps repeated edges, so that they are reported as duplicates rather than merged.
     parsed = format === "graphml" ? graphml.parse(MultiGraph, text) : gexf.parse(MultiGraph, text);
   } catch (error) {
+    const ghost = edgeToUndeclaredNode(document);
+    if (ghost) throw new InputFileError(path, "unknown-node", ghost.reason, ghost.position);
     const message = (error as Error).message.replace(/^graphology-\w+\/parser: /, "");
     throw new InputFileError(
       path,
@@ -73,7 +80,7 @@ export function readXmlGraphFile(
   try {
     graph = fromGraphology(parsed, {
       weightAttribute: attribute,
-      negative: options.negative,
+      negative: negativePolicy(options),
       onWarning: (message) => warnings.push(message),
     });
   } catch (error) {
@@ -93,7 +100,11 @@ export function readXmlGraphFile(
   return { graphs: [graph], warnings };
 }
 
-// Zero and NaN weights mean what they mean in a matrix: no edge (unless the options say otherwise).
+/**
+ * Zero weights mean what they mean in a matrix: no edge unless zeros are edges under the options. NaN is
+ * refused unless `nanIsNoEdge` is set explicitly: graphology's parsers turn any unreadable weight ("heavy")
+ * into NaN, so the default of numeric files (NaN is no edge) would hide typing mistakes here.
+ */
 function dropNonEdges(
   graph: ParsedGraph,
   attribute: string,
@@ -108,7 +119,7 @@ function dropNonEdges(
     const w = Number(raw);
     if (w === 0 && !keepZero) drop.push(edge);
     else if (Number.isNaN(w)) {
-      if (!options.nanIsNoEdge) {
+      if (options.nanIsNoEdge !== true) {
         throw new InputFileError(
           path,
           "not-a-number",
@@ -124,4 +135,31 @@ function dropNonEdges(
 
 function describeEdge(graph: ParsedGraph, edge: string): string {
   return `"${edge}" (${graph.source(edge)} ${graph.isDirected(edge) ? "->" : "--"} ${graph.target(edge)})`;
+}
+
+/**
+ * The first <edge> naming a node that no <node> declares, which graphology's parsers refuse without saying
+ * which (their message names an option of theirs instead); null when every edge is fine.
+ */
+function edgeToUndeclaredNode(
+  document: XmlDocument,
+): { reason: string; position: { line?: number; column?: number } } | null {
+  const declared = new Set<string>();
+  const nodes = document.getElementsByTagName("node");
+  for (let i = 0; i < nodes.length; i++) declared.add(nodes[i].getAttribute("id") ?? "");
+  const edges = document.getElementsByTagName("edge");
+  for (let i = 0; i < edges.length; i++) {
+    const edge = edges[i];
+    for (const end of ["source", "target"]) {
+      const node = edge.getAttribute(end) ?? "";
+      if (declared.has(node)) continue;
+      const at = edge as unknown as { lineNumber?: number; columnNumber?: number };
+      const id = edge.getAttribute("id");
+      return {
+        reason: `edge ${id === null ? "" : `"${id}" `}names ${end} node "${node}", which no <node> element declares`,
+        position: at.lineNumber === undefined ? {} : { line: at.lineNumber, column: at.columnNumber },
+      };
+    }
+  }
+  return null;
 }

@@ -1,17 +1,20 @@
 import { DOMParser } from "@xmldom/xmldom";
 import { InputFileError } from "../input-file-error.js";
 
+/** The parsed document checkXml returns, for questions graphology's parsers do not answer. */
+export type XmlDocument = ReturnType<DOMParser["parseFromString"]>;
+
 /**
- * Checks that `text` is well-formed XML and returns its root element's name and how many elements of each
- * `counted` tag it holds. A malformed document is an error at the parser's line and column, where
+ * Checks that `text` is well-formed XML and returns the document, its root element's name and how many
+ * elements of each `counted` tag it holds. A malformed document is an error at the parser's line and column, where
  * graphology's parsers would read a partial document without a word.
  */
 export function checkXml(
   text: string,
   file: string,
   counted: readonly string[],
-): { root: string; counts: Record<string, number> } {
-  let document: ReturnType<DOMParser["parseFromString"]>;
+): { document: XmlDocument; root: string; counts: Record<string, number> } {
+  let document: XmlDocument;
   // The parser wraps what onError throws; keep the first problem's own words.
   let problem: string | undefined;
   try {
@@ -36,5 +39,5 @@ export function checkXml(
   const root = document.documentElement?.localName ?? "";
   const counts: Record<string, number> = {};
   for (const tag of counted) counts[tag] = document.getElementsByTagName(tag).length;
-  return { root, counts };
+  return { document, root, counts };
 }

@@ -79,7 +79,10 @@ function maxDifference(ours: ArrayLike<number>, theirs: number[][]): number {
 const CASES = [
   { name: "12 channels × 300 time points", series: () => recording(12, 300, 11) },
   { name: "40 channels × 30 time points (fewer points than channels)", series: () => recording(40, 30, 12) },
-  { name: "9 channels × 500 points rounded to 1 decimal (many ties)", series: () => recording(9, 500, 13, 1) },
+  {
+    name: "9 channels × 500 points rounded to 1 decimal (many ties)",
+    series: () => recording(9, 500, 13, 1),
+  },
 ];
 
 describe.skipIf(missing !== null).each(CASES)(

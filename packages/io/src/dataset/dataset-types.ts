@@ -1,3 +1,5 @@
+import type { StackAxis } from "../formats/matrix-stack.js";
+
 /** One graph of a dataset: where it is, what it is called and what is known about it. */
 export interface DatasetEntry {
   id: string;
@@ -32,7 +34,8 @@ export interface DatasetProblem {
 export interface Dataset {
   /** The folder, manifest or stack file the dataset was opened from, absolute. */
   root: string;
-  kind: "folder" | "manifest" | "stack";
+  /** "file": a single recording file read as a dataset of one (time series only). */
+  kind: "folder" | "manifest" | "stack" | "file";
   entries: DatasetEntry[];
   problems: DatasetProblem[];
 }
@@ -44,6 +47,8 @@ export interface OpenDatasetOptions {
   coordinatesFile?: string;
   /** For a .npz or .mat stack: the array or variable to use. Default: the only 2-D/3-D numeric one. */
   variable?: string;
+  /** For a 3-D stack: the axis that counts the entries, when the reader of matrices would guess wrong. */
+  stackAxis?: StackAxis;
 }
 
 /** "file:12:3: reason" — a problem in the form editors and compilers use. */

@@ -27,7 +27,12 @@ export function openDataset(path: string, options: OpenDatasetOptions = {}): Dat
   if (isFolder) dataset = openFolderDataset(root);
   else if (MANIFEST_EXTENSIONS.has(extension)) dataset = openManifestDataset(root);
   else if (STACK_EXTENSIONS.has(extension)) {
-    dataset = openStackDataset(root, options.labelsFile && resolve(options.labelsFile), options.variable);
+    dataset = openStackDataset(
+      root,
+      options.labelsFile && resolve(options.labelsFile),
+      options.variable,
+      options.stackAxis,
+    );
   } else {
     throw new InputFileError(
       root,

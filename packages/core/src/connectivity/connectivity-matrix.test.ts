@@ -124,7 +124,7 @@ describe("connectivityMatrix", () => {
 
   it("options that do not fit the measure are RangeErrors", () => {
     const s = series(rows);
-    expect(() => connectivityMatrix(s, { measure: "lagged" })).toThrow(/needs maxLag/);
+    expect(() => connectivityMatrix(s, { measure: "lagged" })).toThrow(/needs maxLag: the longest lag/);
     expect(() => connectivityMatrix(s, { measure: "pearson", maxLag: 2 })).toThrow(/goes with the lagged/);
     expect(() => connectivityMatrix(s, { measure: "coactivity", window: 1, fisherZ: true })).toThrow(
       RangeError,

@@ -64,7 +64,7 @@ const MIN_POINTS = 3;
  * data and RangeError for bad options.
  */
 export function connectivityMatrix(series: TimeSeries, options: ConnectivityOptions): Connectivity {
-  checkOptions(options);
+  checkConnectivityOptions(options);
   const { measure } = options;
   const { channels: n, timePoints: T } = series;
   if (n < 2) {
@@ -148,27 +148,31 @@ export function connectivityMatrix(series: TimeSeries, options: ConnectivityOpti
   return out;
 }
 
-function checkOptions(options: ConnectivityOptions): void {
+/** Throws a RangeError when the options do not fit the measure (a missing maxLag or window, a misplaced one). */
+export function checkConnectivityOptions(options: ConnectivityOptions): void {
   const { measure, maxLag, window } = options;
   if (!(CONNECTIVITY_MEASURES as readonly string[]).includes(measure)) {
     throw new RangeError(`unknown measure "${measure}"; choose ${CONNECTIVITY_MEASURES.join(", ")}`);
   }
+  const got = (value: unknown) => (value === undefined ? "" : ` (got ${value})`);
   if (measure === "lagged" && !(Number.isInteger(maxLag) && (maxLag as number) >= 1)) {
     throw new RangeError(
-      `lagged correlation needs maxLag, a whole number of time points ≥ 1 (got ${maxLag})`,
+      `lagged correlation needs maxLag: the longest lag, a whole number of time points ≥ 1${got(maxLag)}`,
     );
   }
   if (measure !== "lagged" && maxLag !== undefined) {
     throw new RangeError(`maxLag goes with the lagged measure, not ${measure}`);
   }
   if (measure === "coactivity" && !(Number.isInteger(window) && (window as number) >= 0)) {
-    throw new RangeError(`coactivity needs window, a whole number of time bins ≥ 0 (got ${window})`);
+    throw new RangeError(
+      `coactivity needs window: coincidences count within ± this many time bins, a whole number ≥ 0${got(window)}`,
+    );
   }
   if (measure !== "coactivity" && window !== undefined) {
     throw new RangeError(`window goes with the coactivity measure, not ${measure}`);
   }
   if (measure === "coactivity" && options.fisherZ) {
-    throw new RangeError("Fisher's z applies to correlations; the spike time tiling coefficient is not one");
+    throw new RangeError("fisherZ applies to correlations; the spike time tiling coefficient is not one");
   }
 }
 

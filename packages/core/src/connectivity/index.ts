@@ -5,6 +5,7 @@ export {
   type Connectivity,
   type ConnectivityMeasure,
   type ConnectivityOptions,
+  checkConnectivityOptions,
   connectivityMatrix,
 } from "./connectivity-matrix.js";
 export { fisherZ, perfectCorrelation } from "./fisher-z.js";

@@ -1,7 +1,11 @@
 /**
  * Ranks 1..length of `values[from .. from + length)`, written to `out[to .. to + length)`; tied values
  * share the mean of the ranks they span ("average" ranks, as scipy.stats.rankdata's default method).
- * `order` is scratch space of at least `length` entries.
+ * `sorted` is scratch space of at least `length` entries. Values must not be NaN.
+ *
+ * A value x equal to the sorted values at positions lo..hi−1 (0-based) has the ranks lo+1 .. hi, whose mean
+ * is (lo + 1 + hi) / 2; lo and hi come from binary searches in a copy sorted by the typed array's own numeric
+ * sort, which is several times faster than sorting indices with a comparator.
  */
 export function averageRanks(
   values: Float64Array,
@@ -9,19 +13,27 @@ export function averageRanks(
   length: number,
   out: Float64Array,
   to: number,
-  order: Uint32Array,
+  sorted: Float64Array,
 ): void {
-  const index = order.subarray(0, length);
-  for (let t = 0; t < length; t++) index[t] = t;
-  index.sort((p, q) => values[from + p] - values[from + q]);
-  let start = 0;
-  while (start < length) {
-    let end = start + 1;
-    const x = values[from + index[start]];
-    while (end < length && values[from + index[end]] === x) end++;
-    // Positions start..end−1 hold equal values: ranks start+1 .. end, mean (start + 1 + end) / 2.
-    const rank = (start + 1 + end) / 2;
-    for (let k = start; k < end; k++) out[to + index[k]] = rank;
-    start = end;
+  const copy = sorted.subarray(0, length);
+  copy.set(values.subarray(from, from + length));
+  copy.sort();
+  for (let t = 0; t < length; t++) {
+    const x = values[from + t];
+    let lo = 0;
+    let hi = length;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (copy[mid] < x) lo = mid + 1;
+      else hi = mid;
+    }
+    let end = lo;
+    hi = length;
+    while (end < hi) {
+      const mid = (end + hi) >>> 1;
+      if (copy[mid] <= x) end = mid + 1;
+      else hi = mid;
+    }
+    out[to + t] = (lo + 1 + end) / 2;
   }
 }

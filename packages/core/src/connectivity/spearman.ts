@@ -10,7 +10,7 @@ import type { TimeSeries } from "./time-series.js";
 export function spearmanMatrix(series: TimeSeries): Float64Array {
   const { channels: n, timePoints: T, values } = series;
   const ranks = new Float64Array(n * T);
-  const order = new Uint32Array(T);
-  for (let c = 0; c < n; c++) averageRanks(values, c * T, T, ranks, c * T, order);
+  const sorted = new Float64Array(T);
+  for (let c = 0; c < n; c++) averageRanks(values, c * T, T, ranks, c * T, sorted);
   return pearsonMatrix({ channels: n, timePoints: T, values: ranks });
 }

@@ -1,9 +1,10 @@
+import type { TimeSeries } from "@cliquescape/core";
 import type { ArrayPlace, StackAxis } from "../formats/matrix-stack.js";
 import { InputFileError, type InputFileProblem } from "../input-file-error.js";
 import { readElement } from "../npy-dtype.js";
 import { type NpyArray, npyStrides } from "../parse-npy.js";
 import { DEFAULT_MAX_CELLS } from "../read-options.js";
-import { checkChannelCount, givenLabels, timeSeriesOf } from "./time-series-layout.js";
+import { checkChannelCount, givenLabels } from "./time-series-layout.js";
 import type { TimeSeriesReadOptions, TimeSeriesReadResult } from "./time-series-read-options.js";
 
 /**
@@ -48,14 +49,28 @@ export function arrayTimeSeries(
   const strides = npyStrides(array).map((s) => s * dtype.size);
   const base = array.dataOffset + (stacked ? subject!.index * strides[subject!.axis] : 0);
   const [rowStride, colStride] = axes.map((a) => strides[a]);
-  const view = new DataView(array.bytes.buffer, array.bytes.byteOffset, array.bytes.byteLength);
-  const table = new Float64Array(rows * columns);
-  for (let i = 0; i < rows; i++) {
-    for (let j = 0; j < columns; j++)
-      table[i * columns + j] = readElement(view, base + i * rowStride + j * colStride, dtype);
+  // Straight into the channel-major layout: channel c's time points become contiguous.
+  const [timeStride, channelStride] = channelsFirst ? [colStride, rowStride] : [rowStride, colStride];
+  const values = new Float64Array(channels * timePoints);
+  const floats = float64View(array, base);
+  if (floats) {
+    const dt = timeStride >>> 3;
+    const dc = channelStride >>> 3;
+    for (let c = 0; c < channels; c++) {
+      for (let t = 0; t < timePoints; t++) values[c * timePoints + t] = floats[t * dt + c * dc];
+    }
+  } else {
+    const view = new DataView(array.bytes.buffer, array.bytes.byteOffset, array.bytes.byteLength);
+    for (let c = 0; c < channels; c++) {
+      for (let t = 0; t < timePoints; t++) {
+        values[c * timePoints + t] = readElement(view, base + t * timeStride + c * channelStride, dtype);
+      }
+    }
   }
   const labels = givenLabels(options.labels, channels, file);
-  const series = timeSeriesOf(table, rows, columns, channelsFirst, labels);
+  const series: TimeSeries = labels
+    ? { channels, timePoints, values, labels }
+    : { channels, timePoints, values };
   const warnings: string[] = [];
   if (!channelsFirst && options.channels === undefined && timePoints < channels) {
     warnings.push(
@@ -76,4 +91,16 @@ export function arrayTimeSeries(
       return { element: elementOf(time, channel), ...(place.byteOffsetsInFile ? { byteOffset } : {}) };
     },
   };
+}
+
+// NumPy's own files (little-endian float64, data aligned to 64 bytes) are read through a typed-array view,
+// several times faster than a DataView call per element; anything else goes through readElement.
+const NATIVE_LITTLE = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
+
+function float64View(array: NpyArray, base: number): Float64Array | null {
+  const { dtype, bytes } = array;
+  if (dtype.kind !== "f" || dtype.size !== 8 || dtype.littleEndian !== NATIVE_LITTLE) return null;
+  const start = bytes.byteOffset + base;
+  if (start % 8 !== 0) return null;
+  return new Float64Array(bytes.buffer, start, (bytes.byteLength - base) >>> 3);
 }

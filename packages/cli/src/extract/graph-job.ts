@@ -63,7 +63,7 @@ export function computeGraph(
 ): GraphOutcome {
   let warnings: string[] = [];
   try {
-    const read = readPreparedGraph(entry, spec.preparation);
+    const read = readPreparedGraph(entry, spec.preparation, spec.connectivity);
     warnings = read.warnings;
     const { graph, coordinates } = read;
     const semantics = spec.preparation.weights;

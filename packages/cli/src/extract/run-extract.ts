@@ -1,7 +1,14 @@
 import { existsSync, readFileSync } from "node:fs";
 import { dirname, relative, sep } from "node:path";
 import type { WorkProgress } from "@cliquescape/core";
-import { graphFeatureNames, type OpenDatasetOptions, openDataset, writeFileAtomic } from "@cliquescape/io";
+import {
+  graphFeatureNames,
+  type OpenDatasetOptions,
+  openDataset,
+  openTimeSeriesDataset,
+  writeFileAtomic,
+} from "@cliquescape/io";
+import { recordingOptions } from "../connect/connectivity-spec.js";
 import { UsageError } from "../options/graph-options.js";
 import { progressLine } from "../work-progress.js";
 import { assembleTables, type ErrorRow, labelCode, problemRow } from "./assemble-tables.js";
@@ -48,7 +55,13 @@ export interface ExtractResult {
  */
 export async function runExtract(request: ExtractRequest): Promise<ExtractResult> {
   const requested = validateSpec(request.spec, request.specSource);
-  const dataset = openDataset(request.dataset, request.datasetOptions);
+  // Recordings are opened as such: a stack of recordings counts along its subject axis, one file is one entry.
+  const dataset = requested.connectivity
+    ? openTimeSeriesDataset(request.dataset, {
+        ...request.datasetOptions,
+        ...recordingOptions(requested.connectivity),
+      })
+    : openDataset(request.dataset, request.datasetOptions);
   // Files are named relative to the dataset's folder, so records and tables do not depend on where it sits.
   const base = dataset.kind === "folder" ? dataset.root : dirname(dataset.root);
   const relativeFile = (file: string) => relative(base, file).split(sep).join("/");

@@ -63,7 +63,7 @@ describe.skipIf(missing !== null)(
     let expected: { folder: number[][][]; stack: number[][][] };
     beforeAll(() => {
       dir = scratchFiles({ "groups.txt": "ctrl\nctrl\nstim\n" });
-    for (const sub of ["rec", "wide"]) mkdirSync(join(dir, sub));
+      for (const sub of ["rec", "wide"]) mkdirSync(join(dir, sub));
       const run = spawnSync(PYTHON, ["-c", WRITER, dir], { encoding: "utf8" });
       expect(run.stderr).toBe("");
       expected = JSON.parse(run.stdout);

@@ -18,7 +18,7 @@ import {
 } from "@cliquescape/core";
 import { describe, expect, it } from "vitest";
 import { missingPythonModules, runPythonScript } from "../support/python.js";
-import { type Random, seededRandom } from "../support/random.js";
+import { seededRandom, standardNormal } from "../support/random.js";
 
 const missing = missingPythonModules(["numpy", "scipy", "sklearn"]);
 
@@ -29,10 +29,6 @@ interface Reference {
   lagged: Record<string, number[][]>;
 }
 
-function gaussian(random: Random): number {
-  return Math.sqrt(-2 * Math.log(1 - random())) * Math.cos(2 * Math.PI * random());
-}
-
 /**
  * Channels mixing three shared latent signals (some with negative loadings) plus their own noise, with
  * offsets and scales that differ per channel: correlations of every sign and size, as in real recordings.
@@ -40,14 +36,16 @@ function gaussian(random: Random): number {
  */
 function recording(channels: number, timePoints: number, seed: number, round?: number): TimeSeries {
   const random = seededRandom(seed);
-  const latent = Array.from({ length: 3 }, () => Array.from({ length: timePoints }, () => gaussian(random)));
+  const latent = Array.from({ length: 3 }, () =>
+    Array.from({ length: timePoints }, () => standardNormal(random)),
+  );
   const values = new Float64Array(channels * timePoints);
   for (let c = 0; c < channels; c++) {
     const loadings = latent.map(() => 2 * random() - 1);
     const offset = 100 * (random() - 0.5);
     const scale = 0.5 + 3 * random();
     for (let t = 0; t < timePoints; t++) {
-      let x = gaussian(random);
+      let x = standardNormal(random);
       loadings.forEach((l, k) => {
         x += 1.5 * l * latent[k][t];
       });

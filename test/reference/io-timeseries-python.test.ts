@@ -17,8 +17,10 @@ import {
   readTimeSeriesFile,
 } from "@cliquescape/io";
 import { afterAll, describe, expect, it } from "vitest";
+import { errorOf as errorOfKind } from "../support/error-of.js";
 import { missingPythonModules, PYTHON } from "../support/python.js";
 
+const errorOf = (run: () => unknown) => errorOfKind(run, InputFileError);
 const missing = missingPythonModules(["numpy", "scipy"]);
 const dir = mkdtempSync(join(tmpdir(), "cliquescape-ts-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -62,16 +64,6 @@ function rows(series: TimeSeries): number[][] {
   return Array.from({ length: T }, (_, t) =>
     Array.from({ length: series.channels }, (_, c) => series.values[c * T + t]),
   );
-}
-
-function errorOf(run: () => unknown): InputFileError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof InputFileError) return error;
-    throw error;
-  }
-  throw new Error("expected an InputFileError");
 }
 
 describe.skipIf(missing !== null)(

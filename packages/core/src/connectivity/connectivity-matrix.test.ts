@@ -1,19 +1,11 @@
 import { describe, expect, it } from "vitest";
+import { errorOf as errorOfKind } from "../../../../test/support/error-of.js";
 import { noise, series } from "./connectivity.fixture.js";
 import { connectivityMatrix } from "./connectivity-matrix.js";
 import { pearsonMatrix } from "./pearson.js";
 import { TimeSeriesError } from "./time-series-error.js";
 
-function errorOf(run: () => unknown): TimeSeriesError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof TimeSeriesError) return error;
-    throw error;
-  }
-  throw new Error("expected a TimeSeriesError");
-}
-
+const errorOf = (run: () => unknown) => errorOfKind(run, TimeSeriesError);
 const rows = noise(5, 60, 1);
 const labels = ["V1", "V2", "MT", "PFC", "ACC"];
 

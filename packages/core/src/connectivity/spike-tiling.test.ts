@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { series, uniforms } from "./connectivity.fixture.js";
+import { seededRandom } from "../../../../test/support/random.js";
+import { series } from "./connectivity.fixture.js";
 import { spikeTilingMatrix } from "./spike-tiling.js";
 
 function train(T: number, spikes: number[]): number[] {
@@ -36,7 +37,7 @@ describe("spikeTilingMatrix (Cutts & Eglen 2014)", () => {
   });
 
   it("independent trains score near 0 whatever their rates; a window covering everything is reported", () => {
-    const next = uniforms(3);
+    const next = seededRandom(3);
     const T = 20000;
     const rows = [0.01, 0.05, 0.2].map((rate) => Array.from({ length: T }, () => (next() < rate ? 1 : 0)));
     const { values, fullCoverage } = spikeTilingMatrix(series(rows), 2);

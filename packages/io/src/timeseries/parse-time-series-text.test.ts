@@ -1,17 +1,9 @@
 import { describe, expect, it } from "vitest";
+import { errorOf as errorOfKind } from "../../../../test/support/error-of.js";
 import { InputFileError } from "../input-file-error.js";
 import { parseTimeSeriesText } from "./parse-time-series-text.js";
 
-function errorOf(run: () => unknown): InputFileError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof InputFileError) return error;
-    throw error;
-  }
-  throw new Error("expected an InputFileError");
-}
-
+const errorOf = (run: () => unknown) => errorOfKind(run, InputFileError);
 const channel = (s: { values: Float64Array; timePoints: number }, c: number) =>
   Array.from(s.values.subarray(c * s.timePoints, (c + 1) * s.timePoints));
 

@@ -1,7 +1,7 @@
 import { InputFileError } from "../input-file-error.js";
 import { classifyCell, looksNumeric } from "../parse-number.js";
 import { DEFAULT_MAX_CELLS } from "../read-options.js";
-import { detectDelimiter, type TextRow, textRows } from "../text-rows.js";
+import { detectDelimiter, type TextRow, tableRows } from "../text-rows.js";
 import { checkChannelCount, givenLabels, timeSeriesOf } from "./time-series-layout.js";
 import type { TimeSeriesReadOptions, TimeSeriesReadResult } from "./time-series-read-options.js";
 
@@ -17,13 +17,8 @@ export function parseTimeSeriesText(
   file: string,
   options: TimeSeriesReadOptions = {},
 ): TimeSeriesReadResult {
-  const delimiter = options.delimiter ?? detectDelimiter(text);
-  const rows = textRows(text, delimiter, file);
-  let next = rows.next();
-  if (next.done) {
-    const reason = text.length === 0 ? "file is empty" : "file holds no data, only blank or comment lines";
-    throw new InputFileError(file, "empty-file", reason);
-  }
+  const { first: top, rest: rows } = tableRows(text, options.delimiter ?? detectDelimiter(text), file);
+  let next: IteratorResult<TextRow> = { done: false, value: top };
   const hasHeader = options.header ?? isHeaderRow(next.value.cells);
   let header: TextRow | undefined;
   if (hasHeader) {

@@ -61,8 +61,7 @@ function plainProgress(phase: string, total: number, stream: NodeJS.WriteStream,
       const rate = done / ((now - started) / 1000);
       const left = rate > 0 ? formatDuration((total - done) / rate) : "?";
       stream.write(
-        `cliquescape: ${phase}: ${done}/${total} ${unit}, ${failed} failed, ${rate.toFixed(1)} ${unit}/s, about ${left} left${working ? `; ${working}` : ""}
-`,
+        `cliquescape: ${phase}: ${done}/${total} ${unit}, ${failed} failed, ${rate.toFixed(1)} ${unit}/s, about ${left} left${working ? `; ${working}` : ""}\n`,
       );
     },
     stop() {},

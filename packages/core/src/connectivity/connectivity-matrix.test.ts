@@ -98,6 +98,14 @@ describe("connectivityMatrix", () => {
     ]);
     const e = errorOf(() => connectivityMatrix(spikes, { measure: "coactivity", window: 1 }));
     expect([e.problem, e.location]).toEqual(["not-spike-count", { channel: 1, time: 2 }]);
+    // A missing value in a spike train is a channel problem, which "isolate" can set aside.
+    const gap = series([
+      [0, 1, 0, 2, 0, 1],
+      [1, 0, Number.NaN, 0, 1, 0],
+      [0, 1, 1, 0, 0, 1],
+    ]);
+    const kept = connectivityMatrix(gap, { measure: "coactivity", window: 1, badChannels: "isolate" });
+    expect(kept.isolated).toEqual([1]);
   });
 
   it("lagged gives a directed matrix with its lags; coactivity a silent channel is named as such", () => {

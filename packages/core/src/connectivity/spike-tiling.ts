@@ -74,13 +74,16 @@ export function spikeTilingMatrix(series: TimeSeries, window: number): SpikeTili
   return { values: sttc, fullCoverage };
 }
 
-/** The first value that is not a spike count (a whole number ≥ 0), as [channel, time], or null. */
+/**
+ * The first finite value that is not a spike count (a whole number ≥ 0), as [channel, time], or null.
+ * NaN and infinity are missing values, left to the channel check (which can isolate their channel).
+ */
 export function firstNonCount(series: TimeSeries): [number, number] | null {
   const { channels: n, timePoints: T, values } = series;
   for (let c = 0; c < n; c++) {
     for (let t = 0; t < T; t++) {
       const x = values[c * T + t];
-      if (!(x >= 0 && Number.isInteger(x))) return [c, t];
+      if (Number.isFinite(x) && !(x >= 0 && Number.isInteger(x))) return [c, t];
     }
   }
   return null;

@@ -29,7 +29,7 @@ function listFiles(root) {
       else out.push(relative(root, path));
     }
   };
-  for (const sub of ["graphs", "coords"]) walk(join(root, sub));
+  for (const sub of ["graphs", "coords", "recordings"]) walk(join(root, sub));
   out.push("manifest.csv");
   return out;
 }

@@ -318,6 +318,111 @@ function permute(graph, perm) {
   return { ...graph, W, coords };
 }
 
+// ---------------------------------------------------------------------------------------------------------
+// Recordings: spike trains of the recording sites, binned (1 = the site fired in that bin), for
+// `cliquescape connect` and `extract --measure`. Three cultures per group, a smaller dish than the graphs':
+// one ring channel, or three islands, or a scrambled control. See demo-data/README.md.
+
+const RECORDING_SEED = 20261203;
+const BINS = 600;
+const RECORDINGS_PER_GROUP = 3;
+const BACKGROUND = 0.004; // chance that a site fires in a bin on its own
+
+/** Site spike trains for a ring: 18 sites round one channel; waves run round it, firing each site in passing. */
+function ringRecording(rng) {
+  const sites = 18;
+  const angle = Array.from({ length: sites }, (_, s) => (2 * Math.PI * (s + rng.uniform(-0.2, 0.2))) / sites);
+  const trains = Array.from({ length: sites }, () => new Array(BINS).fill(0));
+  // A wave goes once round the ring in 27 bins (neighbouring sites fire 1 or 2 bins apart), either way round.
+  for (let start = rng.int(0, 20); start < BINS; start += rng.int(35, 70)) {
+    const from = rng.uniform(0, 2 * Math.PI);
+    const direction = rng.uniform() < 0.5 ? 1 : -1;
+    for (let s = 0; s < sites; s++) {
+      if (rng.uniform() > 0.8) continue; // a site sometimes misses a wave
+      const ahead = (((direction * (angle[s] - from)) % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
+      const bin = start + Math.round((ahead / (2 * Math.PI)) * 27 + rng.uniform(-0.5, 0.5));
+      if (bin < BINS) trains[s][bin] = 1;
+    }
+  }
+  return background(rng, trains);
+}
+
+/** Three islands of 6 sites; each island bursts on its own, most of its sites firing within a bin or so. */
+function islandRecording(rng) {
+  const trains = Array.from({ length: 18 }, () => new Array(BINS).fill(0));
+  for (let island = 0; island < 3; island++) {
+    for (let burst = rng.int(0, 40); burst < BINS; burst += rng.int(30, 80)) {
+      for (let s = 6 * island; s < 6 * island + 6; s++) {
+        const bin = burst + rng.int(-1, 1);
+        if (rng.uniform() < 0.8 && bin >= 0 && bin < BINS) trains[s][bin] = 1;
+      }
+    }
+  }
+  return background(rng, trains);
+}
+
+/** Control: a ring or islands culture's trains, each shifted round in time by its own random lag. */
+function scrambledRecording(rng, template) {
+  const trains = template === "ring" ? ringRecording(rng) : islandRecording(rng);
+  return trains.map((train) => {
+    const lag = rng.int(60, BINS - 60);
+    return train.map((_, t) => train[(t + lag) % BINS]);
+  });
+}
+
+function background(rng, trains) {
+  for (const train of trains) for (let t = 0; t < BINS; t++) if (rng.uniform() < BACKGROUND) train[t] = 1;
+  return trains;
+}
+
+/** Time bins × sites as CSV with a header of site names: the layout connect reads by default. */
+function recordingCsv(trains, names) {
+  const lines = [names.join(",")];
+  for (let t = 0; t < BINS; t++) lines.push(trains.map((train) => train[t]).join(","));
+  return `${lines.join("\n")}\n`;
+}
+
+/** The same as a NumPy .npy file of unsigned bytes (|u1), shape (bins, sites), written by hand (NEP 1). */
+function recordingNpy(trains) {
+  const dict = `{'descr': '|u1', 'fortran_order': False, 'shape': (${BINS}, ${trains.length}), }`;
+  const total = 10 + dict.length + 1;
+  const header = `${dict}${" ".repeat(Math.ceil(total / 64) * 64 - total)}\n`;
+  const bytes = new Uint8Array(10 + header.length + BINS * trains.length);
+  bytes.set([0x93, 0x4e, 0x55, 0x4d, 0x50, 0x59, 1, 0, header.length & 0xff, header.length >> 8]);
+  for (let k = 0; k < header.length; k++) bytes[10 + k] = header.charCodeAt(k);
+  for (let t = 0; t < BINS; t++) {
+    for (let s = 0; s < trains.length; s++) bytes[10 + header.length + t * trains.length + s] = trains[s][t];
+  }
+  return bytes;
+}
+
+function writeRecordings(out) {
+  const folder = join(out, "recordings");
+  rmSync(folder, { recursive: true, force: true });
+  mkdirSync(folder, { recursive: true });
+  const manifest = ["id,file,label"];
+  let index = 0;
+  for (const group of GROUPS) {
+    for (let k = 0; k < RECORDINGS_PER_GROUP; k++) {
+      const rng = makeRng((RECORDING_SEED + 104729 * ++index) >>> 0);
+      let trains;
+      if (group.label === "ring") trains = ringRecording(rng);
+      else if (group.label === "islands") trains = islandRecording(rng);
+      else trains = scrambledRecording(rng, k % 2 === 0 ? "ring" : "islands");
+      // Sites in a random order, as in the graphs: the file order gives nothing away.
+      const order = rng.shuffle(Array.from({ length: trains.length }, (_, s) => s));
+      trains = order.map((s) => trains[s]);
+      const id = `${group.prefix}-rec${k + 1}`;
+      const file = k === 2 ? `${id}.npy` : `${id}.csv`;
+      const data = k === 2 ? recordingNpy(trains) : recordingCsv(trains, siteNames(trains.length));
+      writeFileSync(join(folder, file), data);
+      manifest.push([id, file, group.label].join(","));
+    }
+  }
+  writeFileSync(join(folder, "manifest.csv"), `${manifest.join("\n")}\n`);
+  return index;
+}
+
 function main() {
   const here = dirname(fileURLToPath(import.meta.url));
   const out = process.argv[2] ?? here;
@@ -350,7 +455,10 @@ function main() {
     }
   }
   writeFileSync(join(out, "manifest.csv"), `${manifest.join("\n")}\n`);
-  process.stdout.write(`wrote ${manifest.length - 1} graphs and manifest.csv to ${out}\n`);
+  const recordings = writeRecordings(out);
+  process.stdout.write(
+    `wrote ${manifest.length - 1} graphs and manifest.csv, and ${recordings} recordings in recordings/, to ${out}\n`,
+  );
 }
 
 main();

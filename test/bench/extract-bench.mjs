@@ -11,6 +11,7 @@ import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node
 import { cpus, loadavg, tmpdir, totalmem } from "node:os";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
+import { writeDocsSection } from "./docs-section.mjs";
 import { seededRandom } from "./random.mjs";
 
 const here = dirname(fileURLToPath(import.meta.url));
@@ -187,11 +188,4 @@ const section = [
 ].join("\n");
 console.log(section);
 
-if (writeDocs) {
-  const docs = join(root, "docs", "benchmarks.md");
-  const text = existsSync(docs) ? readFileSync(docs, "utf8") : "# Benchmarks\n";
-  const pattern = /<!-- extract-bench:start -->[\s\S]*<!-- extract-bench:end -->/;
-  const next = pattern.test(text) ? text.replace(pattern, section) : `${text.trimEnd()}\n\n${section}\n`;
-  writeFileSync(docs, next);
-  console.error(`wrote the section into ${docs}`);
-}
+if (writeDocs) writeDocsSection("extract-bench", section);

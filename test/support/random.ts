@@ -48,3 +48,8 @@ export function randomPermutation(n: number, random: Random): Int32Array {
   }
   return perm;
 }
+
+/** A standard normal number from two uniforms (Box–Muller transform; common practice). */
+export function standardNormal(random: Random): number {
+  return Math.sqrt(-2 * Math.log(1 - random())) * Math.cos(2 * Math.PI * random());
+}

@@ -1,5 +1,6 @@
 import { Command } from "commander";
 import { barcodeCommand } from "./commands/barcode.js";
+import { connectCommand } from "./commands/connect.js";
 import { distancesCommand } from "./commands/distances.js";
 import { extractCommand } from "./commands/extract.js";
 import { inspectCommand } from "./commands/inspect.js";
@@ -20,7 +21,8 @@ export function createProgram(): Command {
     .addCommand(barcodeCommand())
     .addCommand(extractCommand())
     .addCommand(nullmodelCommand())
-    .addCommand(distancesCommand());
+    .addCommand(distancesCommand())
+    .addCommand(connectCommand());
   program.addHelpText(
     "after",
     `

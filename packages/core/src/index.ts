@@ -1,3 +1,4 @@
+export * from "./connectivity/index.js";
 export type { CountSimplicesOptions } from "./count/count-simplices.js";
 export { countSimplices } from "./count/count-simplices.js";
 export { DEFAULT_SIMPLEX_BUDGET } from "./count/defaults.js";

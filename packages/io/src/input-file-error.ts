@@ -17,7 +17,16 @@ export type InputFileProblem =
   | "negative-weight"
   | "bad-npy"
   | "unsupported-dtype"
-  | "truncated";
+  | "truncated"
+  // Time series (recordings read to compute connectivity):
+  | "bad-shape"
+  | "channel-count"
+  | "constant-channel"
+  | "too-few-points"
+  | "too-few-channels"
+  | "not-spike-count"
+  | "perfect-correlation"
+  | "singular-covariance";
 
 /**
  * Where in the file. Text tables use 1-based `line` and `column` (column = cell number on that line);

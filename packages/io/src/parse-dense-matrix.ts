@@ -5,7 +5,7 @@ import { describePosition, InputFileError, type InputFilePosition } from "./inpu
 import { nanCellsNote } from "./nan-cells-note.js";
 import { classifyCell, looksNumeric } from "./parse-number.js";
 import { type GraphReadOptions, nanIsNoEdge, negativePolicy, zeroIsEdge } from "./read-options.js";
-import { type Delimiter, detectDelimiter, type TextRow, textRows } from "./text-rows.js";
+import { type Delimiter, detectDelimiter, type TextRow, tableRows } from "./text-rows.js";
 
 export interface DenseMatrixTextOptions extends GraphReadOptions {
   /** Default: detected from the first data line. */
@@ -36,13 +36,8 @@ export function parseDenseMatrixText(
   file: string,
   options: DenseMatrixTextOptions = {},
 ): GraphReadResult {
-  const delimiter = options.delimiter ?? detectDelimiter(text);
-  const rows = textRows(text, delimiter, file);
-  let next = rows.next();
-  if (next.done) {
-    const reason = text.length === 0 ? "file is empty" : "file holds no data, only blank or comment lines";
-    throw new InputFileError(file, "empty-file", reason);
-  }
+  const { first: top, rest: rows } = tableRows(text, options.delimiter ?? detectDelimiter(text), file);
+  let next: IteratorResult<TextRow> = { done: false, value: top };
   const labelRow = options.labelRow ?? isLabelRow(next.value.cells);
   let header: TextRow | undefined;
   if (labelRow) {

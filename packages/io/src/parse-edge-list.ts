@@ -4,7 +4,7 @@ import { InputFileError } from "./input-file-error.js";
 import type { GraphReadResult } from "./parse-dense-matrix.js";
 import { classifyCell } from "./parse-number.js";
 import { type GraphReadOptions, nanIsNoEdge, negativePolicy, zeroIsEdge } from "./read-options.js";
-import { type Delimiter, detectDelimiter, textRows } from "./text-rows.js";
+import { type Delimiter, detectDelimiter, type TextRow, tableRows } from "./text-rows.js";
 
 export interface EdgeListTextOptions extends Omit<GraphReadOptions, "labels" | "maxCells">, EdgeColumnNames {
   /** Default: detected from the first data line. */
@@ -27,14 +27,9 @@ export function parseEdgeListText(
   file: string,
   options: EdgeListTextOptions = {},
 ): GraphReadResult {
-  const delimiter = options.delimiter ?? detectDelimiter(text);
-  const rows = textRows(text, delimiter, file);
+  const { first: top, rest: rows } = tableRows(text, options.delimiter ?? detectDelimiter(text), file);
   const warnings: string[] = [];
-  let next = rows.next();
-  if (next.done) {
-    const reason = text.length === 0 ? "file is empty" : "file holds no data, only blank or comment lines";
-    throw new InputFileError(file, "empty-file", reason);
-  }
+  let next: IteratorResult<TextRow> = { done: false, value: top };
   let columns: EdgeColumns;
   let width: number;
   let widthLine: number;

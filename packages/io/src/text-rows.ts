@@ -151,3 +151,21 @@ function readQuotedRecord(
     return { cells, next: pos, lines: lines + 1 };
   }
 }
+
+/**
+ * The records of a text table (see textRows) with the first one already read: a file without any is refused
+ * here, once for every reader, saying whether it is empty or only holds blank and comment lines.
+ */
+export function tableRows(
+  text: string,
+  delimiter: Delimiter,
+  file: string,
+): { first: TextRow; rest: Generator<TextRow> } {
+  const rest = textRows(text, delimiter, file);
+  const next = rest.next();
+  if (next.done) {
+    const reason = text.length === 0 ? "file is empty" : "file holds no data, only blank or comment lines";
+    throw new InputFileError(file, "empty-file", reason);
+  }
+  return { first: next.value, rest };
+}

@@ -7,6 +7,7 @@ import { optionsToSpec } from "../extract/options-to-spec.js";
 import { runExtract } from "../extract/run-extract.js";
 import { EDGE_TRANSFORMS } from "../extract/run-spec.js";
 import { timeLimitOption } from "../options/complex-options.js";
+import { addConnectivityOptions } from "../options/connectivity-options.js";
 import { finiteNumber, numberList, positiveInteger, UsageError } from "../options/graph-options.js";
 
 export function extractCommand(): Command {
@@ -20,7 +21,8 @@ export function extractCommand(): Command {
         "the same command again skips finished graphs; Ctrl-C keeps every finished graph. Settings come from " +
         "--spec (a JSON file, e.g. a previous run's spec.json) with the options below laid over it; see " +
         "docs/extract.md. Graph files read: dense matrices and edge lists (.csv .tsv .txt), NumPy (.npy .npz), " +
-        "MATLAB (.mat), GraphML (.graphml) and GEXF (.gexf).",
+        "MATLAB (.mat), GraphML (.graphml) and GEXF (.gexf). With --measure the dataset holds recordings (time " +
+        "series) instead of matrices: each becomes a connectivity matrix first (docs/connectivity.md).",
     )
     .argument(
       "<dataset>",
@@ -162,11 +164,14 @@ export function extractCommand(): Command {
     )
     .addOption(new Option("--no-bundles", "do not write GNN bundles"))
     .addOption(new Option("--no-barcodes", "do not write barcodes"));
+  // Recordings instead of matrices (recorded in the spec's connectivity section).
+  addConnectivityOptions(command);
   command.addHelpText(
     "after",
     `
 Examples:
   cliquescape extract demo-data/manifest.csv --out out/demo
+  cliquescape extract demo-data/recordings/manifest.csv --out out/rec --measure coactivity --window 2 --negatives drop
   cliquescape extract scans/ --out runs/a --weights distance --transform one-minus --top-dim 2
   cliquescape extract new-subjects.csv --out runs/b --spec runs/a/spec.json
   cliquescape extract cohort.npy --labels participants.tsv --labels-column group --out runs/c

@@ -44,7 +44,7 @@ export async function firstPass(
     },
     {
       size: Math.max(1, Math.min(request.workers, entries.length)),
-      setup: { kind: "setup", preparation: spec.preparation, spec: null },
+      setup: { kind: "setup", preparation: spec.preparation, connectivity: spec.connectivity, spec: null },
       signal: request.signal,
       timeLimitSeconds: spec.complex.timeLimitSeconds,
       // A graph that cannot be read here fails again, with its reason, when it is computed.

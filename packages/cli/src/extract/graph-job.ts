@@ -55,7 +55,7 @@ export function computeGraph(
 ): GraphOutcome {
   let warnings: string[] = [];
   try {
-    const read = readPreparedGraph(entry, spec.preparation);
+    const read = readPreparedGraph(entry, spec.preparation, spec.connectivity);
     warnings = read.warnings.map(cliMessage);
     const { graph, coordinates } = read;
     const semantics = spec.preparation.weights;

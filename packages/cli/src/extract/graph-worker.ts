@@ -50,7 +50,7 @@ function handle(task: WorkerTask): WorkerReply {
     };
   }
   try {
-    const { graph } = readPreparedGraph(task.entry, setup.preparation);
+    const { graph } = readPreparedGraph(task.entry, setup.preparation, setup.connectivity);
     const values = Float64Array.from(strideSample(edgeValues(graph), task.limit));
     return { kind: "sample", index: task.index, values, failure: null };
   } catch (error) {

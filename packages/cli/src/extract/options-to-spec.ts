@@ -1,3 +1,4 @@
+import { connectivityFromOptions } from "../options/connectivity-options.js";
 import { UsageError } from "../options/graph-options.js";
 import { readSpecFile } from "./load-spec.js";
 
@@ -30,6 +31,8 @@ export function optionsToSpec(raw: Raw, given: (name: string) => boolean): { spe
     maxFileMiB: raw.maxFile,
     transform: raw.transform,
   });
+  const connectivity = connectivityFromOptions(raw);
+  const measured = connectivity !== undefined && section("connectivity", connectivity);
   section("complex", {
     topDim: raw.topDim,
     prime: raw.prime,
@@ -45,10 +48,10 @@ export function optionsToSpec(raw: Raw, given: (name: string) => boolean): { spe
     bundles: given("bundles") ? raw.bundles : undefined,
     barcodes: given("barcodes") ? raw.barcodes : undefined,
   });
-  if ((prepared || gridChanged) && spec.resolvedGrid !== undefined) {
+  if ((prepared || measured || gridChanged) && spec.resolvedGrid !== undefined) {
     delete spec.resolvedGrid;
     process.stderr.write(
-      "cliquescape: the options change the grid or the preparation: the grid is chosen anew\n",
+      "cliquescape: the options change the grid, the preparation or the measure: the grid is chosen anew\n",
     );
   }
   return { spec, source: file ?? "the command line" };

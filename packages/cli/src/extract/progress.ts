@@ -17,9 +17,10 @@ export function startProgress(
   phase: string,
   total: number,
   stream: NodeJS.WriteStream = process.stderr,
+  unit = "graphs",
 ): Progress {
   if (stream.isTTY) return barProgress(phase, total, stream);
-  return plainProgress(phase, total, stream);
+  return plainProgress(phase, total, stream, unit);
 }
 
 function barProgress(phase: string, total: number, stream: NodeJS.WriteStream): Progress {
@@ -49,7 +50,7 @@ function barProgress(phase: string, total: number, stream: NodeJS.WriteStream): 
   };
 }
 
-function plainProgress(phase: string, total: number, stream: NodeJS.WriteStream): Progress {
+function plainProgress(phase: string, total: number, stream: NodeJS.WriteStream, unit: string): Progress {
   const started = Date.now();
   let lastLine = started;
   return {
@@ -60,7 +61,7 @@ function plainProgress(phase: string, total: number, stream: NodeJS.WriteStream)
       const rate = done / ((now - started) / 1000);
       const left = rate > 0 ? formatDuration((total - done) / rate) : "?";
       stream.write(
-        `cliquescape: ${phase}: ${done}/${total} graphs, ${failed} failed, ${rate.toFixed(1)} graphs/s, about ${left} left${working ? `; ${working}` : ""}\n`,
+        `cliquescape: ${phase}: ${done}/${total} ${unit}, ${failed} failed, ${rate.toFixed(1)} ${unit}/s, about ${left} left${working ? `; ${working}` : ""}\n`,
       );
     },
     stop() {},

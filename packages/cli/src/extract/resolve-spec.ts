@@ -44,7 +44,9 @@ export async function resolveSpec(
   const known = spec.labelNames ?? (sameRequest ? previous?.labelNames : undefined) ?? [];
   const seen = [...new Set(dataset.entries.map((e) => e.label).filter((l): l is string => l !== null))];
   const labelNames = [...known, ...seen.filter((label) => !known.includes(label)).sort()];
-  const anyDirected = dataset.entries.some((entry) => readOptionsFor(entry, spec.preparation).directed);
+  const anyDirected = dataset.entries.some(
+    (entry) => readOptionsFor(entry, spec.preparation, spec.connectivity).directed,
+  );
   const nodeLayout =
     spec.nodeLayout ??
     (sameRequest ? previous?.nodeLayout : undefined) ??

@@ -1,7 +1,14 @@
 import { existsSync, readFileSync } from "node:fs";
 import { dirname, relative, resolve, sep } from "node:path";
 import type { WorkProgress } from "@cliquescape/core";
-import { graphFeatureNames, type OpenDatasetOptions, openDataset, writeFileAtomic } from "@cliquescape/io";
+import {
+  graphFeatureNames,
+  type OpenDatasetOptions,
+  openDataset,
+  openTimeSeriesDataset,
+  writeFileAtomic,
+} from "@cliquescape/io";
+import { recordingOptions } from "../connect/connectivity-spec.js";
 import { UsageError } from "../options/graph-options.js";
 import { progressLine } from "../work-progress.js";
 import { assembleTables, type ErrorRow, labelCode, problemRow } from "./assemble-tables.js";
@@ -49,10 +56,15 @@ export interface ExtractResult {
 export async function runExtract(request: ExtractRequest): Promise<ExtractResult> {
   const requested = validateSpec(request.spec, request.specSource);
   const maxFileMiB = requested.preparation.maxFileMiB;
-  const dataset = openDataset(request.dataset, {
-    ...request.datasetOptions,
-    ...(maxFileMiB === null ? {} : { maxBytes: maxFileMiB * 2 ** 20 }),
-  });
+  const maxBytes = maxFileMiB === null ? {} : { maxBytes: maxFileMiB * 2 ** 20 };
+  // Recordings are opened as such: a stack of recordings counts along its subject axis, one file is one entry.
+  const dataset = requested.connectivity
+    ? openTimeSeriesDataset(request.dataset, {
+        ...request.datasetOptions,
+        ...maxBytes,
+        ...recordingOptions(requested.connectivity),
+      })
+    : openDataset(request.dataset, { ...request.datasetOptions, ...maxBytes });
   if (dataset.kind === "manifest" && resolve(request.dataset) !== dataset.root) {
     process.stderr.write(
       `cliquescape: ${request.dataset} holds a manifest: reading the dataset from ${dataset.root}\n`,

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { ConnectivitySchema } from "../connect/connectivity-spec.js";
 import { DEFAULT_TIME_LIMIT_SECONDS } from "../options/complex-options.js";
 
 /**
@@ -142,6 +143,11 @@ export const RunSpecSchema = z.strictObject({
   $schema: z.string().optional(),
   format: z.literal("cliquescape-run-spec/1").default("cliquescape-run-spec/1"),
   toolVersion: z.string().optional(),
+  /**
+   * Present when the dataset holds recordings (time series) instead of matrices: how each recording becomes a
+   * connectivity matrix before the preparation below applies to it (see docs/connectivity.md).
+   */
+  connectivity: ConnectivitySchema.optional(),
   preparation: PreparationSchema,
   complex: ComplexSchema,
   grid: GridRequestSchema,

@@ -5,6 +5,7 @@ import type { RunSpec } from "./run-spec.js";
 const COMPARED_KEYS = [
   "format",
   "toolVersion",
+  "connectivity",
   "preparation",
   "complex",
   "grid",
@@ -59,6 +60,9 @@ function isPlainObject(value: unknown): value is Record<string, unknown> {
 
 /** A short hash of the compared settings: per-graph records carry it, so a stray record never mixes in. */
 export function settingsFingerprint(spec: Partial<RunSpec>): string {
-  const picked = COMPARED_KEYS.map((key) => [key, compared(spec, key) ?? null]);
+  // A spec without recordings has no connectivity section and keeps the fingerprint it had before there was one.
+  const picked = COMPARED_KEYS.filter((key) => key !== "connectivity" || spec.connectivity !== undefined).map(
+    (key) => [key, compared(spec, key) ?? null],
+  );
   return createHash("sha256").update(JSON.stringify(picked)).digest("hex").slice(0, 16);
 }

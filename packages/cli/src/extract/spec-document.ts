@@ -14,6 +14,7 @@ export function specDocument(
   const document = {
     format: spec.format,
     toolVersion: spec.toolVersion,
+    ...(spec.connectivity ? { connectivity: spec.connectivity } : {}),
     preparation: spec.preparation,
     complex: spec.complex,
     grid: spec.grid,

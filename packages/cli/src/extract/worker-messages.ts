@@ -8,6 +8,8 @@ import type { ResolvedRunSpec, RunSpec } from "./run-spec.js";
 export interface WorkerSetup {
   kind: "setup";
   preparation: RunSpec["preparation"];
+  /** For recordings: how each becomes a matrix (the first pass reads them before `spec` exists). */
+  connectivity?: RunSpec["connectivity"];
   /** Null during the first pass, before the grid is fixed. */
   spec: ResolvedRunSpec | null;
 }

@@ -5,9 +5,9 @@ import type { WorkerProgress, WorkerReply, WorkerSetup, WorkerTask } from "./wor
 /** The compiled worker script next to this file in dist/. */
 const WORKER_SCRIPT = new URL("./graph-worker.js", import.meta.url);
 
-export interface PoolOptions {
+export interface PoolOptions<Task = WorkerTask, Reply = WorkerReply, Setup = WorkerSetup> {
   size: number;
-  setup: WorkerSetup;
+  setup: Setup;
   /** Interrupts the run: no new task starts and the tasks in flight are abandoned at once. */
   signal: AbortSignal;
   /**
@@ -18,7 +18,7 @@ export interface PoolOptions {
   /** Progress of task `index` while it runs. */
   onProgress?: (index: number, progress: WorkProgress) => void;
   /** The reply standing for a task whose worker died or ran out of time. */
-  failedReply: (task: WorkerTask, message: string) => WorkerReply;
+  failedReply: (task: Task, message: string) => Reply;
 }
 
 /**
@@ -27,10 +27,20 @@ export interface PoolOptions {
  * or overruns the time limit answers its task with a failure and is replaced, so one pathological graph
  * cannot end or stall the run.
  */
-export async function runOnWorkers(
+export function runOnWorkers(
   tasks: readonly WorkerTask[],
   onReply: (reply: WorkerReply) => void,
   options: PoolOptions,
+): Promise<"finished" | "stopped"> {
+  return runOnWorkerScript(WORKER_SCRIPT, tasks, onReply, options);
+}
+
+/** The same pool for another worker script and its own task, reply and setup messages (`connect`). */
+export async function runOnWorkerScript<Task, Reply extends { kind: string }, Setup>(
+  script: URL,
+  tasks: readonly Task[],
+  onReply: (reply: Reply) => void,
+  options: PoolOptions<Task, Reply, Setup>,
 ): Promise<"finished" | "stopped"> {
   const { signal, setup, failedReply, timeLimitSeconds } = options;
   if (tasks.length === 0) return "finished";
@@ -46,9 +56,9 @@ export async function runOnWorkers(
       resolve(how);
     };
     const start = () => {
-      const worker = new Worker(WORKER_SCRIPT);
+      const worker = new Worker(script);
       workers.add(worker);
-      let task: WorkerTask | null = null;
+      let task: Task | null = null;
       let timer: NodeJS.Timeout | undefined;
       const feed = () => {
         if (signal.aborted) return settle("stopped");
@@ -81,9 +91,9 @@ export async function runOnWorkers(
         );
       };
       worker.postMessage(setup);
-      worker.on("message", (reply: WorkerReply | WorkerProgress) => {
+      worker.on("message", (reply: Reply | WorkerProgress) => {
         if (settled) return; // a stopped run writes nothing more
-        if (reply.kind === "progress") {
+        if (isProgress(reply)) {
           options.onProgress?.(reply.index, reply.progress);
           return;
         }
@@ -104,4 +114,8 @@ export async function runOnWorkers(
 /** When a task past its time limit is given up: the limit plus a tenth, and at least 30 s more. */
 function hardLimitMs(timeLimitSeconds: number): number {
   return (timeLimitSeconds + Math.max(30, timeLimitSeconds / 10)) * 1000;
+}
+
+function isProgress(message: { kind: string }): message is WorkerProgress {
+  return message.kind === "progress";
 }

@@ -1,3 +1,5 @@
+import type { StackAxis } from "../formats/matrix-stack.js";
+
 /** One graph of a dataset: where it is, what it is called and what is known about it. */
 export interface DatasetEntry {
   id: string;
@@ -32,7 +34,8 @@ export interface DatasetProblem {
 export interface Dataset {
   /** The folder, manifest or stack file the dataset was opened from, absolute. */
   root: string;
-  kind: "folder" | "manifest" | "stack";
+  /** "file": a single recording file read as a dataset of one (time series only). */
+  kind: "folder" | "manifest" | "stack" | "file";
   entries: DatasetEntry[];
   problems: DatasetProblem[];
 }
@@ -52,6 +55,8 @@ export interface OpenDatasetOptions {
   variable?: string;
   /** For a stack: refuse a file larger than this many bytes (default as for readGraphFile). */
   maxBytes?: number;
+  /** For a 3-D stack: the axis that counts the entries, when the reader of matrices would guess wrong. */
+  stackAxis?: StackAxis;
 }
 
 /** "file:12:3: reason" — a problem in the form editors and compilers use. */

@@ -36,6 +36,7 @@ export function openDataset(path: string, options: OpenDatasetOptions = {}): Dat
       options.variable,
       options.maxBytes,
       options.labelsColumn,
+      options.stackAxis,
     );
   } else {
     throw new InputFileError(

@@ -1,5 +1,5 @@
 import { basename } from "node:path";
-import { graphCount } from "../formats/matrix-stack.js";
+import { graphCount, type StackAxis } from "../formats/matrix-stack.js";
 import { InputFileError } from "../input-file-error.js";
 import type { Dataset, DatasetEntry, DatasetProblem } from "./dataset-types.js";
 import { fileStem } from "./graph-file-extensions.js";
@@ -10,6 +10,7 @@ import { loadStack } from "./stack-source.js";
  * One entry per graph of a stack file (3-D .npy, .npz or .mat): ids `<stem>-<k>`, k zero-padded to the
  * width of the last index so that ids sort in slice order. Labels (and split and metadata) come from an
  * optional labels file; a labels table of the user's own ids gives the slices those ids, in order.
+ * `axis` overrides the axis the matrix reader would count along (time series choose their own).
  */
 export function openStackDataset(
   file: string,
@@ -17,6 +18,7 @@ export function openStackDataset(
   variable?: string,
   maxBytes?: number,
   labelsColumn?: string,
+  axis?: StackAxis,
 ): Dataset {
   const source = loadStack(file, variable, maxBytes);
   const { shape } = source.array;
@@ -27,7 +29,7 @@ export function openStackDataset(
       `array of shape (${shape.join(", ")}) is not a stack of matrices`,
     );
   }
-  const count = graphCount(source.array, source.axis);
+  const count = graphCount(source.array, axis ?? source.axis);
   const stem = fileStem(basename(file));
   const width = String(Math.max(0, count - 1)).length;
   const entries: DatasetEntry[] = [];

@@ -2,8 +2,10 @@
  * The bytes of a .npy header (NumPy format specification, NEP 1): magic "\x93NUMPY", version, header
  * length, then a Python dict literal padded with spaces and a newline so the data starts on a multiple
  * of 64 bytes, as numpy's own writer pads. Version 1.0 unless the header needs 2.0's 32-bit length.
+ * `minDataOffset` (a multiple of 64) pads it further, so a header rewritten with a smaller shape keeps
+ * the data where it is.
  */
-export function npyHeader(descr: string, shape: readonly number[]): Uint8Array {
+export function npyHeader(descr: string, shape: readonly number[], minDataOffset = 0): Uint8Array {
   for (const d of shape) {
     if (!Number.isSafeInteger(d) || d < 0)
       throw new RangeError(`shape entry ${d} is not a non-negative integer`);
@@ -17,7 +19,7 @@ export function npyHeader(descr: string, shape: readonly number[]): Uint8Array {
     lengthBytes = 4;
     total = 8 + lengthBytes + dict.length + 1;
   }
-  const dataOffset = Math.ceil(total / 64) * 64;
+  const dataOffset = Math.max(Math.ceil(total / 64) * 64, minDataOffset);
   const text = `${dict}${" ".repeat(dataOffset - total)}\n`;
   const out = new Uint8Array(dataOffset);
   const view = new DataView(out.buffer);

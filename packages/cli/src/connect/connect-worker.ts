@@ -1,0 +1,58 @@
+import { parentPort } from "node:worker_threads";
+import { readDatasetConnectivity } from "@cliquescape/io";
+import { graphFailureOf } from "../extract/graph-failure.js";
+import type { ConnectReply, ConnectSetup, ConnectTask } from "./connect-messages.js";
+import { measureOptions, recordingOptions } from "./connectivity-spec.js";
+
+/*
+ * Worker thread entry of `connect`: reads one recording per message and posts its connectivity matrix
+ * back (transferred, not copied). It writes no files: the main thread writes every output in order.
+ */
+
+const port = parentPort;
+if (!port) throw new Error("connect-worker.js runs as a worker thread");
+let setup: ConnectSetup | null = null;
+
+port.on("message", (message: ConnectSetup | ConnectTask) => {
+  if (message.kind === "setup") {
+    setup = message;
+    return;
+  }
+  const reply = measure(message);
+  port.postMessage(reply, reply.ok ? [reply.values.buffer as ArrayBuffer] : []);
+});
+
+function measure(task: ConnectTask): ConnectReply {
+  if (!setup) throw new Error("a worker got a task before its setup");
+  try {
+    const {
+      connectivity: c,
+      timePoints,
+      warnings,
+    } = readDatasetConnectivity(
+      task.entry,
+      recordingOptions(setup.connectivity),
+      measureOptions(setup.connectivity),
+    );
+    return {
+      kind: "connect",
+      index: task.index,
+      ok: true,
+      n: c.n,
+      values: c.values,
+      labels: c.labels ? [...c.labels] : null,
+      timePoints,
+      isolated: c.isolated,
+      shrinkage: c.shrinkage ?? null,
+      warnings,
+    };
+  } catch (error) {
+    return {
+      kind: "connect",
+      index: task.index,
+      ok: false,
+      failure: graphFailureOf(error, task.entry.file),
+      warnings: [],
+    };
+  }
+}

@@ -35,13 +35,20 @@ describe("cliquescape COMMAND --help", () => {
     },
   );
 
-  // Commands that read graph files (distances reads a run folder).
-  const readers = commands.filter((c) =>
-    c.registeredArguments.some((a) => ["file", "dataset"].includes(a.name())),
+  // Commands that read graph files (distances reads a run folder, connect recordings).
+  const readers = commands.filter(
+    (c) =>
+      c.name() !== "connect" && c.registeredArguments.some((a) => ["file", "dataset"].includes(a.name())),
   );
   it.each(readers.map((c) => [c.name(), c] as const))("%s: lists every readable format", (_, command) => {
     const help = wideHelp(command);
     for (const extension of GRAPH_FILE_EXTENSIONS) expect(help, extension).toContain(extension);
+  });
+
+  it("connect: lists every format a recording can be in", () => {
+    const help = wideHelp(commands.find((c) => c.name() === "connect")!);
+    for (const extension of [".csv", ".tsv", ".txt", ".npy", ".npz", ".mat"])
+      expect(help).toContain(extension);
   });
 
   it("inspect and sweep say they print Betti numbers", () => {

@@ -15,7 +15,7 @@ export function connectCommand(): Command {
     .summary("recordings (time series) in, connectivity matrices out")
     .description(
       "Reads every recording of a dataset (a folder of recording files, a manifest CSV with id and file " +
-        "columns, a 3-D stack of recordings, or one file) — time points × channels in CSV/TSV/text, .npy, " +
+        "columns, a 3-D stack of recordings, or one file) — time points × channels in text (.csv .tsv .txt), .npy, " +
         ".npz or .mat — checks each channel (a constant or NaN channel is refused, or isolated with " +
         "--bad-channels isolate), computes the chosen measure on worker threads and writes the matrices: one " +
         "(k, n, n) matrices.npy stack with ids.txt, or one .npy per recording with a manifest.csv that " +

@@ -14,6 +14,8 @@ export default defineConfig({
   resolve: {
     alias: {
       "@cliquescape/core": src("core"),
+      // Before the package name, which would otherwise match the subpath as a prefix.
+      "@cliquescape/io/browser": fileURLToPath(new URL("./packages/io/src/browser.ts", import.meta.url)),
       "@cliquescape/io": src("io"),
     },
   },

@@ -35,6 +35,8 @@ export { readXmlGraphFile } from "./formats/read-xml-graph.js";
 export type { ZipMemberInfo } from "./formats/zip-members.js";
 export { extractZipMembers, listZipMembers } from "./formats/zip-members.js";
 export { graphFeatureNames, graphFeatures } from "./graph-features.js";
+export type { GraphJson } from "./graph-json.js";
+export { graphFromJson, graphToJson } from "./graph-json.js";
 export type { InputFilePosition, InputFileProblem } from "./input-file-error.js";
 export { describePosition, formatPosition, InputFileError } from "./input-file-error.js";
 export { networkStatisticNames, networkStatistics } from "./network-statistics.js";
@@ -46,6 +48,8 @@ export type { DenseMatrixTextOptions, GraphReadResult } from "./parse-dense-matr
 export { parseDenseMatrixText } from "./parse-dense-matrix.js";
 export type { EdgeListTextOptions } from "./parse-edge-list.js";
 export { parseEdgeListText } from "./parse-edge-list.js";
+export type { ByteGraphFormat, GraphBytesOptions, GraphBytesResult } from "./parse-graph-bytes.js";
+export { fileExtension, parseGraphBytes } from "./parse-graph-bytes.js";
 export type { NpyArray } from "./parse-npy.js";
 export { npyElementOffset, npyStrides, npyValues, parseNpy } from "./parse-npy.js";
 export type { CellValue } from "./parse-number.js";

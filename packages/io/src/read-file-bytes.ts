@@ -1,6 +1,9 @@
 import { readFileSync, statSync } from "node:fs";
 import { InputFileError } from "./input-file-error.js";
-import { formatBytes } from "./read-options.js";
+import { checkByteSize } from "./read-options.js";
+
+// The text decoder needs no Node API; it lives apart so browsers can import it.
+export { decodeText } from "./decode-text.js";
 
 /** Reads a whole file after checking its size, so a huge file is refused with a message, not a crash. */
 export function readFileBytes(path: string, maxBytes: number): Uint8Array {
@@ -19,13 +22,7 @@ export function readFileBytes(path: string, maxBytes: number): Uint8Array {
       { cause: error },
     );
   }
-  if (size > maxBytes) {
-    throw new InputFileError(
-      path,
-      "too-large",
-      `file is ${formatBytes(size)}, more than the limit of ${formatBytes(maxBytes)}; raise maxBytes if you have the memory`,
-    );
-  }
+  checkByteSize(path, size, maxBytes);
   try {
     return readFileSync(path);
   } catch (error) {
@@ -36,14 +33,5 @@ export function readFileBytes(path: string, maxBytes: number): Uint8Array {
       {},
       { cause: error },
     );
-  }
-}
-
-/** Decodes UTF-8 strictly: a binary or wrongly encoded file is an error, not a page of replacement characters. */
-export function decodeText(bytes: Uint8Array, file: string): string {
-  try {
-    return new TextDecoder("utf-8", { fatal: true }).decode(bytes);
-  } catch {
-    throw new InputFileError(file, "unreadable", "file is not UTF-8 text (is it a binary file?)");
   }
 }

@@ -1,4 +1,5 @@
 import type { NegativePolicy, SymmetrizePolicy, WeightSemantics } from "@cliquescape/core";
+import { InputFileError } from "./input-file-error.js";
 
 /** Options every reader understands. */
 export interface GraphReadOptions {
@@ -69,4 +70,15 @@ export function formatBytes(bytes: number): string {
     unit++;
   }
   return unit === 0 ? `${bytes} bytes` : `${Number(value.toFixed(1))} ${units[unit]}`;
+}
+
+/** Refuses a file larger than the limit, before it is read or parsed, with a message that says how to proceed. */
+export function checkByteSize(file: string, size: number, maxBytes: number): void {
+  if (size > maxBytes) {
+    throw new InputFileError(
+      file,
+      "too-large",
+      `file is ${formatBytes(size)}, more than the limit of ${formatBytes(maxBytes)}; raise maxBytes if you have the memory`,
+    );
+  }
 }

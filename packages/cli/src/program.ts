@@ -5,7 +5,9 @@ import { distancesCommand } from "./commands/distances.js";
 import { extractCommand } from "./commands/extract.js";
 import { inspectCommand } from "./commands/inspect.js";
 import { nullmodelCommand } from "./commands/nullmodel.js";
+import { reportCommand } from "./commands/report.js";
 import { sweepCommand } from "./commands/sweep.js";
+import { viewCommand } from "./commands/view.js";
 import { VERSION } from "./version.js";
 
 /** The cliquescape command line, without running it (tests build it too). */
@@ -22,7 +24,9 @@ export function createProgram(): Command {
     .addCommand(extractCommand())
     .addCommand(nullmodelCommand())
     .addCommand(distancesCommand())
-    .addCommand(connectCommand());
+    .addCommand(connectCommand())
+    .addCommand(viewCommand())
+    .addCommand(reportCommand());
   program.addHelpText(
     "after",
     `

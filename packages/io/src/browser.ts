@@ -17,3 +17,7 @@ export { fileExtension, parseGraphBytes } from "./parse-graph-bytes.js";
 export type { NpyArray } from "./parse-npy.js";
 export { parseNpy } from "./parse-npy.js";
 export type { GraphReadOptions } from "./read-options.js";
+export type { Delimiter, TextRow } from "./text-rows.js";
+export { detectDelimiter, textRows } from "./text-rows.js";
+export type { CsvCell } from "./write/encode-csv.js";
+export { encodeCsv } from "./write/encode-csv.js";

@@ -1,0 +1,97 @@
+import type { CustomSeriesRenderItem, EChartsType } from "echarts";
+import type { GraphAnalysis } from "../compute/graph-analysis.js";
+import { formatWeight } from "../format.js";
+import { PALETTE, seriesColour } from "../palette.js";
+import { filtrationEnd } from "./bar-order.js";
+import { CHART_TEXT, createChart, weightAxis } from "./chart-host.js";
+import { echarts } from "./echarts-setup.js";
+
+// One bar per row: [from, to, row, bar number, essential (1/0)].
+type BarDatum = [number, number, number, number, number];
+
+const drawBar: CustomSeriesRenderItem = (params, api) => {
+  const from = api.coord([api.value(0), api.value(2)]);
+  const to = api.coord([api.value(1), api.value(2)]);
+  const height = Math.max(1.5, Math.min(8, ((api.size?.([0, 1]) as number[] | undefined)?.[1] ?? 4) * 0.7));
+  const shape = echarts.graphic.clipRectByRect(
+    {
+      x: Math.min(from[0], to[0]),
+      y: from[1] - height / 2,
+      width: Math.max(1, Math.abs(to[0] - from[0])),
+      height,
+    },
+    params.coordSys as unknown as { x: number; y: number; width: number; height: number },
+  );
+  return shape && { type: "rect", shape, style: api.style() };
+};
+
+/**
+ * The barcode: one horizontal bar per class, from its birth to its death (to the end of the filtration
+ * when it never dies), grouped by dimension, β0 at the top. Clicking a bar chooses it.
+ */
+export class BarcodeChart {
+  readonly chart: EChartsType;
+  private readonly rows: Map<number, BarDatum>;
+
+  constructor(element: HTMLElement, analysis: GraphAnalysis, onChoose: (bar: number) => void) {
+    this.chart = createChart(element);
+    const end = filtrationEnd(analysis);
+    const dims = Math.max(0, ...analysis.bars.map((b) => b.dim)) + 1;
+    this.rows = new Map();
+    let row = 0;
+    const series: Record<string, unknown>[] = [];
+    for (let k = 0; k < dims; k++) {
+      const data: BarDatum[] = [];
+      analysis.bars.forEach((bar, i) => {
+        if (bar.dim !== k) return;
+        const datum: BarDatum = [bar.birth, bar.death ?? end, row++, i, bar.death === null ? 1 : 0];
+        data.push(datum);
+        this.rows.set(i, datum);
+      });
+      series.push({
+        id: `dim${k}`,
+        name: `H${k}`,
+        type: "custom",
+        renderItem: drawBar,
+        color: seriesColour(k),
+        encode: { x: [0, 1], y: 2 },
+        data,
+      });
+    }
+    series.push({
+      id: "chosen",
+      name: "chosen",
+      type: "custom",
+      renderItem: drawBar,
+      color: PALETTE.loop,
+      encode: { x: [0, 1], y: 2 },
+      data: [],
+    });
+    this.chart.setOption({
+      textStyle: CHART_TEXT,
+      animation: false,
+      legend: { top: 0, textStyle: CHART_TEXT, data: series.slice(0, dims).map((s) => s.name as string) },
+      tooltip: {
+        trigger: "item",
+        formatter: (p: { data: BarDatum; seriesName: string }) =>
+          `${p.seriesName} bar ${p.data[3]}: born ${formatWeight(p.data[0])}, ${p.data[4] ? "never dies" : `dies ${formatWeight(p.data[1])}`}`,
+      },
+      grid: { left: 16, right: 16, top: 30, bottom: 40 },
+      xAxis: weightAxis("threshold (weight)", analysis.semantics === "similarity", {
+        axisLabel: { formatter: formatWeight },
+      }),
+      yAxis: { type: "value", inverse: true, min: -0.5, max: Math.max(row, 1) - 0.5, show: false },
+      series,
+    });
+    this.chart.on("click", (params) => {
+      const datum = params.data as BarDatum | undefined;
+      if (datum) onChoose(datum[3]);
+    });
+  }
+
+  /** Draws the chosen bar in the loop colour (null: none). */
+  choose(bar: number | null): void {
+    const datum = bar === null ? undefined : this.rows.get(bar);
+    this.chart.setOption({ series: [{ id: "chosen", data: datum ? [datum] : [] }] });
+  }
+}

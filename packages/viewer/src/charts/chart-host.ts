@@ -1,0 +1,33 @@
+import type { EChartsType } from "echarts/core";
+import { PALETTE } from "../palette.js";
+import { echarts } from "./echarts-setup.js";
+
+/** The text style every chart shares: the page's ink on white, readable at 1280 × 800. */
+export const CHART_TEXT = { color: PALETTE.ink, fontFamily: "system-ui, sans-serif", fontSize: 12 };
+
+/** An ECharts chart in an element, drawn as SVG and resized with its element. */
+export function createChart(element: HTMLElement): EChartsType {
+  const chart = echarts.init(element, null, { renderer: "svg" });
+  new ResizeObserver(() => chart.resize()).observe(element);
+  return chart;
+}
+
+/** The chart as a standalone SVG document, for saving. */
+export function chartSvg(chart: EChartsType): string {
+  return chart.renderToSVGString();
+}
+
+/** A value axis over weights: thresholds run from strong to weak left to right, whatever the weights mean. */
+export function weightAxis(name: string, similarity: boolean, extra: Record<string, unknown> = {}) {
+  return {
+    type: "value" as const,
+    name,
+    nameLocation: "middle" as const,
+    nameGap: 26,
+    inverse: similarity,
+    scale: true,
+    axisLine: { lineStyle: { color: PALETTE.muted } },
+    splitLine: { lineStyle: { color: PALETTE.rule, opacity: 0.6 } },
+    ...extra,
+  };
+}

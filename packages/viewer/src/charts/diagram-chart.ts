@@ -1,0 +1,96 @@
+import type { EChartsType } from "echarts";
+import type { GraphAnalysis } from "../compute/graph-analysis.js";
+import { formatWeight } from "../format.js";
+import { PALETTE, seriesColour } from "../palette.js";
+import { filtrationEnd } from "./bar-order.js";
+import { CHART_TEXT, createChart, weightAxis } from "./chart-host.js";
+
+// [birth, death (or the "never dies" line), bar number, essential (1/0)].
+type PointDatum = [number, number, number, number];
+
+/**
+ * The persistence diagram: a point (birth, death) per bar, the diagonal birth = death, and bars that never
+ * die on a line above the end of the filtration. Points far from the diagonal last long. Clicking one
+ * chooses its bar.
+ */
+export class DiagramChart {
+  readonly chart: EChartsType;
+  private readonly points: Map<number, PointDatum> = new Map();
+
+  constructor(element: HTMLElement, analysis: GraphAnalysis, onChoose: (bar: number) => void) {
+    this.chart = createChart(element);
+    const similarity = analysis.semantics === "similarity";
+    const start = analysis.start;
+    const end = filtrationEnd(analysis);
+    // The "never dies" line sits a little past the end of the filtration.
+    const never = end + (end - start) * 0.08 || end + 1;
+    const dims = Math.max(0, ...analysis.bars.map((b) => b.dim)) + 1;
+    const series: Record<string, unknown>[] = [];
+    for (let k = 0; k < dims; k++) {
+      const data: PointDatum[] = [];
+      analysis.bars.forEach((bar, i) => {
+        if (bar.dim !== k) return;
+        const point: PointDatum = [bar.birth, bar.death ?? never, i, bar.death === null ? 1 : 0];
+        data.push(point);
+        this.points.set(i, point);
+      });
+      series.push({
+        id: `dim${k}`,
+        name: `H${k}`,
+        type: "scatter",
+        symbol: ["circle", "triangle", "diamond", "rect"][k % 4],
+        symbolSize: 7,
+        color: seriesColour(k),
+        itemStyle: { opacity: 0.85 },
+        data,
+      });
+    }
+    const lo = Math.min(start, end, never);
+    const hi = Math.max(start, end, never);
+    series.push({
+      id: "guides",
+      type: "line",
+      data: [],
+      silent: true,
+      markLine: {
+        silent: true,
+        symbol: "none",
+        animation: false,
+        lineStyle: { color: PALETTE.muted, type: "dotted" },
+        label: { show: true, position: "insideEndTop", color: PALETTE.muted, formatter: "{b}" },
+        data: [
+          [{ name: "birth = death", coord: [lo, lo] }, { coord: [hi, hi] }],
+          { name: "never dies", yAxis: never },
+        ],
+      },
+    });
+    series.push({ id: "chosen", type: "scatter", symbolSize: 14, color: PALETTE.loop, data: [], z: 5 });
+    // The end of the axis past the filtration is the "never dies" line, not a weight.
+    const label = (v: number) => (v === never ? "never" : formatWeight(v));
+    const axis = (name: string) =>
+      weightAxis(name, similarity, { min: lo, max: hi, scale: false, axisLabel: { formatter: label } });
+    this.chart.setOption({
+      textStyle: CHART_TEXT,
+      animation: false,
+      legend: { top: 0, textStyle: CHART_TEXT, data: series.slice(0, dims).map((s) => s.name as string) },
+      tooltip: {
+        trigger: "item",
+        formatter: (p: { data: PointDatum; seriesName: string }) =>
+          `${p.seriesName} bar ${p.data[2]}: born ${formatWeight(p.data[0])}, ${p.data[3] ? "never dies" : `dies ${formatWeight(p.data[1])}`}`,
+      },
+      grid: { left: 52, right: 20, top: 30, bottom: 40 },
+      xAxis: axis("birth"),
+      yAxis: { ...axis("death"), nameGap: 38 },
+      series,
+    });
+    this.chart.on("click", (params) => {
+      const datum = params.data as PointDatum | undefined;
+      if (datum && params.seriesId !== "chosen") onChoose(datum[2]);
+    });
+  }
+
+  choose(bar: number | null): void {
+    const point = bar === null ? undefined : this.points.get(bar);
+    this.chart.setOption({ series: [{ id: "chosen", data: point ? [point] : [] }] });
+  }
+}

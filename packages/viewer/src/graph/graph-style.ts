@@ -1,0 +1,75 @@
+import type { StylesheetJson } from "cytoscape";
+import { PALETTE } from "../palette.js";
+
+/**
+ * How the graph is drawn. Loop edges are thicker as well as coloured, so the loop stands out without
+ * relying on colour; directed graphs get arrowheads (straight edges), undirected ones the cheaper haystack
+ * edges. Nodes sized by participation read their size from `data(size)`.
+ */
+export function graphStyle(directed: boolean, showLabels: boolean): StylesheetJson {
+  return [
+    {
+      selector: "node",
+      style: {
+        width: 9,
+        height: 9,
+        "background-color": PALETTE.node,
+        "border-width": 0,
+        label: showLabels ? "data(label)" : "",
+        "font-size": 9,
+        color: PALETTE.muted,
+        "text-valign": "top",
+        "text-margin-y": -2,
+        "min-zoomed-font-size": 7,
+      },
+    },
+    { selector: "node.sized", style: { width: "data(size)", height: "data(size)" } },
+    {
+      selector: "edge",
+      style: {
+        width: 1,
+        "line-color": PALETTE.edge,
+        opacity: 0.75,
+        "curve-style": directed ? "straight" : "haystack",
+        "haystack-radius": 0,
+        ...(directed
+          ? { "target-arrow-shape": "triangle", "target-arrow-color": PALETTE.edge, "arrow-scale": 0.7 }
+          : {}),
+      },
+    },
+    { selector: "edge.absent", style: { display: "none" } },
+    { selector: ".faded", style: { opacity: 0.25 } },
+    { selector: "node.faded", style: { "background-color": PALETTE.nodeDimmed, label: "" } },
+    {
+      selector: "edge.faded",
+      style: { "line-color": PALETTE.edgeDimmed, "target-arrow-color": PALETTE.edgeDimmed },
+    },
+    {
+      selector: "edge.loop",
+      style: {
+        width: 4,
+        opacity: 1,
+        "line-color": PALETTE.loop,
+        "target-arrow-color": PALETTE.loop,
+        "z-index": 10,
+      },
+    },
+    {
+      selector: "node.loop",
+      style: {
+        width: 13,
+        height: 13,
+        "background-color": PALETTE.loop,
+        "border-width": 2,
+        "border-color": PALETTE.panel,
+        label: "data(label)",
+        color: PALETTE.ink,
+        "font-size": 11,
+        "font-weight": "bold",
+        "text-background-color": PALETTE.panel,
+        "text-background-opacity": 0.8,
+        "z-index": 11,
+      },
+    },
+  ];
+}

@@ -1,10 +1,33 @@
-import { mkdtempSync, rmSync } from "node:fs";
+import { existsSync, mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
+import { fileURLToPath } from "node:url";
 import { type BrowserContext, chromium, type Page } from "playwright-core";
 
 /** Debian's Chromium (apt-get install chromium); override with CHROMIUM=/path/to/chrome. */
 export const CHROMIUM = process.env.CHROMIUM ?? "/usr/bin/chromium";
+
+/**
+ * null when Chromium is there, otherwise why not. Outside CI the browser tests then skip with that reason
+ * in their name; under CI (.ci/run installs chromium) a missing browser is a failure.
+ */
+export function missingChromium(): string | null {
+  if (existsSync(CHROMIUM)) return null;
+  const reason = `no Chromium at ${CHROMIUM} (apt-get install -y chromium, or set CHROMIUM)`;
+  if (process.env.CI) throw new Error(`${reason}; .ci/run installs it, so this is a CI setup fault`);
+  return reason;
+}
+
+/** Where the browser tests keep their screenshots for a reviewer (1280 × 800 each). */
+export const SCREENSHOTS = fileURLToPath(new URL("../../out/screenshots/", import.meta.url));
+
+/** Saves a screenshot of the page as out/screenshots/NAME.png and returns its path. */
+export async function screenshot(page: Page, name: string): Promise<string> {
+  mkdirSync(SCREENSHOTS, { recursive: true });
+  const path = join(SCREENSHOTS, `${name}.png`);
+  await page.screenshot({ path });
+  return path;
+}
 
 /** The screen size the page is designed for and screenshotted at. */
 export const VIEWPORT = { width: 1280, height: 800 };

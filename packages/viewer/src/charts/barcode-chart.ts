@@ -2,9 +2,9 @@ import type { CustomSeriesRenderItem, EChartsType } from "echarts";
 import type { GraphAnalysis } from "../compute/graph-analysis.js";
 import { formatWeight } from "../format.js";
 import { PALETTE, seriesColour } from "../palette.js";
-import { filtrationEnd } from "./bar-order.js";
 import { CHART_TEXT, createChart, weightAxis } from "./chart-host.js";
 import { echarts } from "./echarts-setup.js";
+import { filtrationEnd } from "./filtration-end.js";
 
 // One bar per row: [from, to, row, bar number, essential (1/0)].
 type BarDatum = [number, number, number, number, number];

@@ -2,8 +2,8 @@ import type { EChartsType } from "echarts";
 import type { GraphAnalysis } from "../compute/graph-analysis.js";
 import { formatWeight } from "../format.js";
 import { PALETTE, seriesColour } from "../palette.js";
-import { filtrationEnd } from "./bar-order.js";
 import { CHART_TEXT, createChart, weightAxis } from "./chart-host.js";
+import { filtrationEnd } from "./filtration-end.js";
 
 // [birth, death (or the "never dies" line), bar number, essential (1/0)].
 type PointDatum = [number, number, number, number];

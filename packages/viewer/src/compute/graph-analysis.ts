@@ -5,6 +5,7 @@ import {
   edgeFiltration,
   explicitGrid,
   fromFiltrationValue,
+  mostPersistentBars,
   nodeLabel,
   sweepSimplexCounts,
   toFiltrationValue,
@@ -67,7 +68,12 @@ export interface GraphAnalysis {
   bars: BarSummary[];
   /** Where every vertex is born, in weight units. */
   start: number;
+  /** The most persistent H1 bars (at most LISTED_LOOPS), longest first, as `barcode --cycles` picks them. */
+  loopBars: number[];
 }
+
+/** How many of the most persistent loops the page lists and names. */
+export const LISTED_LOOPS = 10;
 
 /** Counts at every distinct edge value from one enumeration, the barcode, and Betti numbers from it. */
 export function analyseGraph(
@@ -123,6 +129,7 @@ export function analyseGraph(
       prime: barcode.prime,
       bars: barcode.bars.map(({ dim, birth, death }) => ({ dim, birth, death })),
       start: barcode.start,
+      loopBars: mostPersistentBars(barcode, 1, LISTED_LOOPS),
     },
   };
 }

@@ -49,6 +49,15 @@ export class GraphCanvas {
       pixelRatio: large ? 1 : "auto",
     });
     this.edges = this.cy.edges();
+    // The drawing follows its box: refit on resize until the person pans or zooms it themselves.
+    let moved = false;
+    this.cy.on("scrollzoom pinchzoom dragpan", () => {
+      moved = true;
+    });
+    new ResizeObserver(() => {
+      this.cy.resize();
+      if (!moved) this.cy.fit(undefined, 24);
+    }).observe(container);
     // Every edge starts hidden; the threshold control shows the first ones.
     this.edges.addClass("absent");
     this.shown = 0;

@@ -1,10 +1,6 @@
-import { barsByPersistence } from "../charts/bar-order.js";
 import type { GraphAnalysis } from "../compute/graph-analysis.js";
 import { h } from "../dom.js";
 import { formatWeight } from "../format.js";
-
-/** How many of the most persistent loops the list offers. */
-export const LISTED_LOOPS = 10;
 
 /**
  * The most persistent H1 bars as a keyboard-friendly list: Tab reaches it, arrow keys move between loops,
@@ -21,7 +17,7 @@ export class LoopList {
   private chosenLabels = "";
 
   constructor(analysis: GraphAnalysis, onChoose: (bar: number) => void) {
-    this.bars = barsByPersistence(analysis, 1).slice(0, LISTED_LOOPS);
+    this.bars = analysis.loopBars;
     const list = h("ol", { class: "loop-list", "aria-label": "Most persistent loops" });
     this.bars.forEach((bar, rank) => {
       const { birth, death } = analysis.bars[bar];

@@ -4,11 +4,12 @@
 // (20 thresholds between the 5 % and 95 % weight quantiles of the whole dataset, simplices to dimension 3,
 // H0..H2 over Z/2), which ends by printing where the outputs are and the per-label means of a few
 // headline features. Then the same from the demo's recordings (time series), into out/demo-recordings.
-// The folders are made fresh each time so the runs shown are always whole ones.
+// Last, the first run as one HTML page (out/demo/report.html), and how to open it. The folders are made
+// fresh each time so the runs shown are always whole ones.
 import { spawnSync } from "node:child_process";
 import { rmSync } from "node:fs";
 import { dirname, join, relative } from "node:path";
-import { fileURLToPath } from "node:url";
+import { fileURLToPath, pathToFileURL } from "node:url";
 
 const here = dirname(fileURLToPath(import.meta.url));
 const root = join(here, "..");
@@ -44,6 +45,22 @@ for (const run of runs) {
   if (child.status !== 0) {
     process.exitCode = child.status ?? 1;
     break;
+  }
+}
+
+if (!process.exitCode) {
+  // The run as one page: the table, curves by label and feature map, every graph with its loops.
+  const report = join(out, "report.html");
+  const args = ["report", rel(out), "--out", rel(report)];
+  process.stderr.write(`\n$ cliquescape ${args.join(" ")}\n`);
+  const child = spawnSync(process.execPath, [bin, ...args], { stdio: ["ignore", "ignore", "inherit"] });
+  if (child.error) throw child.error;
+  process.exitCode = child.status ?? 1;
+  if (child.status === 0) {
+    process.stdout.write(
+      `\nSee the demo run: open ${pathToFileURL(report).href} in a browser\n` +
+        `(or serve it on this machine: npx cliquescape view ${rel(out)})\n`,
+    );
   }
 }
 

@@ -74,13 +74,14 @@ async function serveUntilStopped(
     process.exitCode = 2;
     return;
   }
-  const { port: actual } = server.address() as AddressInfo;
-  process.stdout.write(`cliquescape view: ${path} at http://${LOOPBACK}:${actual}/  (Ctrl-C to stop)\n`);
   const stop = () => {
     process.stdout.write("cliquescape view: stopped\n");
     server.closeAllConnections();
     server.close();
   };
+  // Ready for Ctrl-C before the address is out: whoever reads it may stop the server at once.
   process.once("SIGINT", stop);
   process.once("SIGTERM", stop);
+  const { port: actual } = server.address() as AddressInfo;
+  process.stdout.write(`cliquescape view: ${path} at http://${LOOPBACK}:${actual}/  (Ctrl-C to stop)\n`);
 }

@@ -14,25 +14,27 @@ export const PALETTE = {
   edgeDimmed: "#e4e2dc",
   node: "#33415c",
   nodeDimmed: "#c9c7c0",
-  /** The loop being shown: its edges and nodes. */
-  loop: "#d1495b",
+  /** The loop being shown: its edges and nodes. A violet chosen to stay apart from everything around it. */
+  loop: "#a45eff",
   /** Focus ring and the current-threshold marker. */
   accent: "#0f7b8a",
 } as const;
 
 /**
  * Colours for series told apart by colour: homology dimensions (β0, β1, β2, …) and the labels of a run.
- * Dark blue, amber, plum, sky, brick, olive, then two more shades for long label lists.
+ * Dark blue, amber, rust brown, light cyan, taupe, periwinkle, sage, aubergine: picked one at a time from
+ * a grid of OKLCH colours, each the farthest (CIEDE2000) from those before it under normal vision and the
+ * three simulated deficiencies at once. Charts also vary marker shape, so colour is never the only cue.
  */
 export const SERIES = [
-  "#24528f",
-  "#e69a28",
-  "#7a3b82",
-  "#62b3e0",
-  "#b8452e",
-  "#7c8a2b",
-  "#1c2230",
-  "#c9a3d9",
+  "#2e5689",
+  "#fbac16",
+  "#772e00",
+  "#6dcfdf",
+  "#967b57",
+  "#6483ff",
+  "#b8c499",
+  "#512d42",
 ];
 
 /** The Euler characteristic's line: ink, drawn dashed, so it never competes with a Betti curve's colour. */

@@ -66,3 +66,14 @@ export async function launchChromium(): Promise<{
     },
   };
 }
+
+/** Clicks what `click` clicks and returns the text of the file the page downloads. */
+export async function downloaded(
+  page: Page,
+  click: () => Promise<void>,
+): Promise<{ name: string; bytes: Buffer }> {
+  const [download] = await Promise.all([page.waitForEvent("download"), click()]);
+  const path = await download.path();
+  const { readFileSync } = await import("node:fs");
+  return { name: download.suggestedFilename(), bytes: readFileSync(path) };
+}

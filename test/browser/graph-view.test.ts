@@ -4,7 +4,7 @@ import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { runCli } from "../cli/run-cli.js";
 import { missingPythonModules, runPythonScript } from "../support/python.js";
-import { launchChromium, missingChromium, SCREENSHOTS, screenshot } from "./chromium.js";
+import { downloaded, launchChromium, missingChromium, SCREENSHOTS, screenshot } from "./chromium.js";
 import { type RunningView, startView } from "./view-server.js";
 
 const GRAPH = "demo-data/graphs/ring01u.csv";
@@ -128,5 +128,39 @@ describe.skipIf(skip)(`graph page in Chromium${skip ? ` (skipped: ${skip})` : ""
     );
     expect(check).toMatchObject({ simple_cycle: true, present_at_birth: true, length: drawn.length });
     await screenshot(page, "graph-loop");
+  });
+
+  it("saves the graph as PNG and SVG, the loop as CSV and each chart as SVG", async () => {
+    const loop = await page.evaluate(() =>
+      window
+        .cliquescape!.graph!.canvas.cy.edges(".loop")
+        .map((e) => [e.source().data("label"), e.target().data("label")].sort().join("|")),
+    );
+    expect(loop.length).toBeGreaterThan(2);
+    const png = await downloaded(page, () => page.getByRole("button", { name: "PNG" }).click());
+    expect(png.name).toBe("ring01u.png");
+    expect(png.bytes.subarray(0, 8)).toEqual(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]));
+    const svg = (
+      await downloaded(page, () => page.locator(".toolbar").getByRole("button", { name: "SVG" }).click())
+    ).bytes.toString();
+    // As many emphasised lines as loop edges, and one circle per node.
+    expect(svg.match(/class="loop"/g)).toHaveLength(loop.length);
+    expect(svg.match(/<circle/g)).toHaveLength(48);
+    const csv = (
+      await downloaded(page, () => page.getByRole("button", { name: "loop CSV" }).click())
+    ).bytes.toString();
+    const [header, ...rows] = csv.trim().split("\n");
+    expect(header).toBe("step,source,target,source_label,target_label,weight");
+    expect(rows.map((r) => r.split(",").slice(3, 5).sort().join("|")).sort()).toEqual([...loop].sort());
+    for (const id of ["curves-chart", "barcode-chart", "diagram-chart"]) {
+      const chart = await downloaded(page, () =>
+        page
+          .locator("figure", { has: page.locator(`#${id}`) })
+          .getByRole("button", { name: "SVG" })
+          .click(),
+      );
+      expect(chart.bytes.toString()).toMatch(/^<svg[^>]*xmlns="http:\/\/www.w3.org\/2000\/svg"/);
+      expect(chart.bytes.toString()).toContain("<path");
+    }
   });
 });

@@ -5,7 +5,7 @@ import { dirname, join } from "node:path";
 import { pathToFileURL } from "node:url";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { runCli } from "../cli/run-cli.js";
-import { launchChromium, missingChromium, screenshot } from "./chromium.js";
+import { downloaded, launchChromium, missingChromium, screenshot } from "./chromium.js";
 import { demoSubsetRun } from "./demo-subset.js";
 
 const skip = missingChromium();
@@ -40,8 +40,23 @@ describe.skipIf(skip)(`report opened from disk${skip ? ` (skipped: ${skip})` : "
     // 3 graphs per label, 3 labels: 9 rows, each id opens its graph.
     expect(await page.locator("table.run-table tbody tr").count()).toBe(9);
     expect(await page.locator("table.run-table button[data-open]").count()).toBe(9);
-    expect(await page.locator("#label-curves-chart svg path").count()).toBeGreaterThan(3);
-    expect(await page.locator("#feature-map-chart svg path").count()).toBeGreaterThan(9);
+    // Each chart saves as SVG: the mean curves with their bands, and one marker per graph in the map.
+    const curves = await downloaded(page, () =>
+      page
+        .locator("figure", { has: page.locator("#label-curves-chart") })
+        .getByRole("button", { name: "SVG" })
+        .click(),
+    );
+    expect(curves.name).toBe("betti_d1-by-label.svg");
+    expect(curves.bytes.toString().match(/<path/g)!.length).toBeGreaterThan(3 * 2);
+    const map = await downloaded(page, () =>
+      page
+        .locator("figure", { has: page.locator("#feature-map-chart") })
+        .getByRole("button", { name: "SVG" })
+        .click(),
+    );
+    expect(map.name).toBe("feature-map.svg");
+    expect(map.bytes.toString().match(/<path/g)!.length).toBeGreaterThanOrEqual(9);
     await screenshot(page, "run-report");
 
     // Sorting by a column header reorders the rows.

@@ -25,9 +25,13 @@ const drawBar: CustomSeriesRenderItem = (params, api) => {
   return shape && { type: "rect", shape, style: api.style() };
 };
 
+/** Bars drawn per dimension: the longest ones; hundreds more would be thinner than a pixel. */
+export const BARS_PER_DIMENSION = 300;
+
 /**
  * The barcode: one horizontal bar per class, from its birth to its death (to the end of the filtration
- * when it never dies), grouped by dimension, β0 at the top. Clicking a bar chooses it.
+ * when it never dies), grouped by dimension, β0 at the top, each group ordered by birth. A dimension with
+ * more than BARS_PER_DIMENSION bars shows its longest ones, and the chart says so. Clicking a bar chooses it.
  */
 export class BarcodeChart {
   readonly chart: EChartsType;
@@ -39,15 +43,29 @@ export class BarcodeChart {
     const dims = Math.max(0, ...analysis.bars.map((b) => b.dim)) + 1;
     this.rows = new Map();
     let row = 0;
+    const notes: string[] = [];
     const series: Record<string, unknown>[] = [];
+    const length = (i: number) => {
+      const { birth, death } = analysis.bars[i];
+      return death === null ? Infinity : Math.abs(death - birth);
+    };
     for (let k = 0; k < dims; k++) {
       const data: BarDatum[] = [];
-      analysis.bars.forEach((bar, i) => {
-        if (bar.dim !== k) return;
+      const all = analysis.bars.flatMap((bar, i) => (bar.dim === k ? [i] : []));
+      const shown =
+        all.length <= BARS_PER_DIMENSION
+          ? all
+          : all
+              .sort((x, y) => length(y) - length(x) || x - y)
+              .slice(0, BARS_PER_DIMENSION)
+              .sort((x, y) => x - y);
+      if (shown.length < all.length) notes.push(`H${k}: longest ${shown.length} of ${all.length}`);
+      for (const i of shown) {
+        const bar = analysis.bars[i];
         const datum: BarDatum = [bar.birth, bar.death ?? end, row++, i, bar.death === null ? 1 : 0];
         data.push(datum);
         this.rows.set(i, datum);
-      });
+      }
       series.push({
         id: `dim${k}`,
         name: `H${k}`,
@@ -81,6 +99,12 @@ export class BarcodeChart {
         axisLabel: { formatter: formatWeight },
       }),
       yAxis: { type: "value", inverse: true, min: -0.5, max: Math.max(row, 1) - 0.5, show: false },
+      title: {
+        text: notes.join(" · "),
+        right: 4,
+        bottom: 0,
+        textStyle: { ...CHART_TEXT, fontSize: 10, fontWeight: "normal" },
+      },
       series,
     });
     this.chart.on("click", (params) => {

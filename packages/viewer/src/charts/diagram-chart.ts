@@ -42,6 +42,8 @@ export class DiagramChart {
         symbolSize: 7,
         color: seriesColour(k),
         itemStyle: { opacity: 0.85 },
+        // Thousands of points: ECharts' batched drawing.
+        large: data.length > 2000,
         data,
       });
     }

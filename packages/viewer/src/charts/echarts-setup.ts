@@ -7,10 +7,10 @@ import {
   TooltipComponent,
 } from "echarts/components";
 import * as echarts from "echarts/core";
-import { SVGRenderer } from "echarts/renderers";
+import { CanvasRenderer, SVGRenderer } from "echarts/renderers";
 
-// Only what the page draws: lines, scatter and custom (barcode) series, rendered as SVG so every chart can
-// be saved as an SVG file exactly as shown.
+// Only what the page draws: lines, scatter and custom (barcode) series. On screen a canvas (tens of
+// thousands of bars and points stay fast); saved as SVG by drawing the same option again with the SVG renderer.
 echarts.use([
   LineChart,
   ScatterChart,
@@ -20,6 +20,7 @@ echarts.use([
   MarkLineComponent,
   TitleComponent,
   TooltipComponent,
+  CanvasRenderer,
   SVGRenderer,
 ]);
 

@@ -17,13 +17,16 @@ export function graphSvg(cy: Core, title: string): string {
   const width = Math.max(1, box.w + 2 * pad);
   const height = Math.max(1, box.h + 2 * pad);
   const directed = cy.edges().some((edge) => edge.style("target-arrow-shape") !== "none");
+  // While a loop is shown, everything else is drawn faded, as on screen.
+  const loopEdges = cy.edges(".loop");
+  const faded = loopEdges.nonempty();
+  const loopNodes = loopEdges.connectedNodes();
   const lines: string[] = [];
   cy.edges().forEach((edge) => {
     if (edge.hasClass("absent")) return;
     const s = edge.source().position();
     const t = edge.target().position();
     const loop = edge.hasClass("loop");
-    const faded = edge.hasClass("faded");
     const colour = loop ? PALETTE.loop : faded ? PALETTE.edgeDimmed : PALETTE.edge;
     lines.push(
       `<line x1="${s.x.toFixed(1)}" y1="${s.y.toFixed(1)}" x2="${t.x.toFixed(1)}" y2="${t.y.toFixed(1)}" stroke="${colour}" stroke-width="${loop ? 4 : 1}"${directed ? ' marker-end="url(#arrow)"' : ""}${loop ? ' class="loop"' : ""}/>`,
@@ -32,13 +35,13 @@ export function graphSvg(cy: Core, title: string): string {
   const circles: string[] = [];
   nodes.forEach((node) => {
     const p = node.position();
-    const loop = node.hasClass("loop");
+    const loop = loopNodes.contains(node);
     const r = Number.parseFloat(node.style("width")) / 2;
-    const colour = loop ? PALETTE.loop : node.hasClass("faded") ? PALETTE.nodeDimmed : PALETTE.node;
+    const colour = loop ? PALETTE.loop : faded ? PALETTE.nodeDimmed : PALETTE.node;
     circles.push(
       `<circle cx="${p.x.toFixed(1)}" cy="${p.y.toFixed(1)}" r="${r.toFixed(1)}" fill="${colour}"/>`,
     );
-    const label = node.style("label") as string;
+    const label = loop ? (node.data("label") as string) : (node.style("label") as string);
     if (label) {
       circles.push(
         `<text x="${p.x.toFixed(1)}" y="${(p.y - r - 3).toFixed(1)}" font-size="${loop ? 11 : 9}" text-anchor="middle" fill="${loop ? PALETTE.ink : PALETTE.muted}">${escapeXml(label)}</text>`,

@@ -1,13 +1,15 @@
 import type { Core, EdgeCollection, ElementDefinition } from "cytoscape";
 import type { GraphAnalysis } from "../compute/graph-analysis.js";
 import { cytoscape } from "./cytoscape-setup.js";
-import { graphStyle } from "./graph-style.js";
+import { graphStyle, loopLayerStyle } from "./graph-style.js";
 import { layoutEdgeCount, placeNodes } from "./node-placement.js";
 
 /**
  * The graph drawn with cytoscape. Every edge is added once and shown or hidden as the threshold moves, so
  * node positions never change with the threshold; a threshold change touches only the edges that enter or
- * leave. A loop is drawn by marking its edges and nodes and fading the rest.
+ * leave. A loop is drawn on a second, small cytoscape layer above a veil that fades the graph: its cost
+ * depends on the loop's length, not on the size of the graph (restyling 40,000 edges to fade them took
+ * seconds).
  */
 export class GraphCanvas {
   readonly cy: Core;
@@ -19,6 +21,9 @@ export class GraphCanvas {
   /** Edge number by node pair (u * n + v; both orders for undirected graphs). */
   private readonly edgeByPair = new Map<number, number>();
   private loopEdges: number[] = [];
+  /** The loop layer: its own cytoscape over a veil, following the main drawing's viewport. */
+  private readonly loopLayer: Core;
+  private readonly veil: HTMLElement;
 
   constructor(container: HTMLElement, analysis: GraphAnalysis) {
     this.analysis = analysis;
@@ -34,8 +39,19 @@ export class GraphCanvas {
       if (!analysis.directed) this.edgeByPair.set(targets[e] * n + sources[e], e);
     }
     const large = sources.length > 5000;
+    const layer = (name: string) => {
+      const div = document.createElement("div");
+      div.className = `graph-layer ${name}`;
+      container.append(div);
+      return div;
+    };
+    const base = layer("graph-base");
+    this.veil = layer("graph-veil");
+    this.veil.hidden = true;
     this.cy = cytoscape({
-      container,
+      container: base,
+      // Positions never change: they are what makes thresholds comparable by eye.
+      autoungrabify: true,
       elements,
       style: graphStyle(analysis.directed, n <= 120),
       layout: { name: "null" },
@@ -49,6 +65,16 @@ export class GraphCanvas {
       pixelRatio: large ? 1 : "auto",
     });
     this.edges = this.cy.edges();
+    this.loopLayer = cytoscape({
+      container: layer("graph-loop"),
+      style: loopLayerStyle(analysis.directed),
+      userPanningEnabled: false,
+      userZoomingEnabled: false,
+      boxSelectionEnabled: false,
+      autoungrabify: true,
+      autounselectify: true,
+    });
+    this.cy.on("viewport", () => this.loopLayer.viewport({ zoom: this.cy.zoom(), pan: this.cy.pan() }));
     // The drawing follows its box: refit on resize until the person pans or zooms it themselves.
     let moved = false;
     this.cy.on("scrollzoom pinchzoom dragpan", () => {
@@ -56,6 +82,7 @@ export class GraphCanvas {
     });
     new ResizeObserver(() => {
       this.cy.resize();
+      this.loopLayer.resize();
       if (!moved) this.cy.fit(undefined, 24);
     }).observe(container);
     // Every edge starts hidden; the threshold control shows the first ones.
@@ -82,23 +109,43 @@ export class GraphCanvas {
     this.shown = count;
   }
 
-  /** Marks the loop given as node pairs [u0, v0, u1, v1, …] and fades the rest; null clears it. */
+  /** Draws the loop given as node pairs [u0, v0, u1, v1, …] above the faded graph; null clears it. */
   showLoop(pairs: Int32Array | null): void {
     const cy = this.cy;
+    const layer = this.loopLayer;
     cy.batch(() => {
-      if (this.loopEdges.length > 0) cy.elements().removeClass("faded loop");
-      this.loopEdges = [];
-      if (!pairs) return;
-      const ids: string[] = [];
-      for (let i = 0; i < pairs.length; i += 2) {
-        const e = this.edgeNumber(pairs[i], pairs[i + 1]);
-        if (e === undefined) continue;
-        this.loopEdges.push(e);
-        ids.push(`#e${e}`, `#n${pairs[i]}`, `#n${pairs[i + 1]}`);
-      }
-      const loop = cy.$(ids.join(","));
-      cy.elements().not(loop).addClass("faded");
-      loop.addClass("loop");
+      for (const e of this.loopEdges) this.edges[e].removeClass("loop");
+    });
+    this.loopEdges = [];
+    layer.elements().remove();
+    this.veil.hidden = pairs === null;
+    if (!pairs) return;
+    const nodes = new Set<number>();
+    const elements: ElementDefinition[] = [];
+    for (let i = 0; i < pairs.length; i += 2) {
+      const e = this.edgeNumber(pairs[i], pairs[i + 1]);
+      if (e === undefined) continue;
+      this.loopEdges.push(e);
+      nodes.add(pairs[i]).add(pairs[i + 1]);
+      const edge = this.edges[e];
+      elements.push({
+        group: "edges",
+        data: { id: `e${e}`, source: edge.source().id(), target: edge.target().id() },
+      });
+    }
+    for (const v of nodes) {
+      const node = cy.getElementById(`n${v}`);
+      elements.unshift({
+        group: "nodes",
+        data: { id: `n${v}`, label: node.data("label") },
+        position: { ...node.position() },
+      });
+    }
+    layer.add(elements);
+    layer.viewport({ zoom: cy.zoom(), pan: cy.pan() });
+    // Marked in the main drawing too, so exports and tests see which edges form the loop.
+    cy.batch(() => {
+      for (const e of this.loopEdges) this.edges[e].addClass("loop");
     });
   }
 
@@ -131,5 +178,6 @@ export class GraphCanvas {
 
   destroy(): void {
     this.cy.destroy();
+    this.loopLayer.destroy();
   }
 }

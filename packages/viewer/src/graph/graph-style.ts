@@ -29,7 +29,6 @@ export function graphStyle(directed: boolean, showLabels: boolean): StylesheetJs
       style: {
         width: 1,
         "line-color": PALETTE.edge,
-        opacity: 0.75,
         "curve-style": directed ? "straight" : "haystack",
         "haystack-radius": 0,
         ...(directed
@@ -38,12 +37,6 @@ export function graphStyle(directed: boolean, showLabels: boolean): StylesheetJs
       },
     },
     { selector: "edge.absent", style: { display: "none" } },
-    { selector: ".faded", style: { opacity: 0.25 } },
-    { selector: "node.faded", style: { "background-color": PALETTE.nodeDimmed, label: "" } },
-    {
-      selector: "edge.faded",
-      style: { "line-color": PALETTE.edgeDimmed, "target-arrow-color": PALETTE.edgeDimmed },
-    },
     {
       selector: "edge.loop",
       style: {
@@ -72,4 +65,13 @@ export function graphStyle(directed: boolean, showLabels: boolean): StylesheetJs
       },
     },
   ];
+}
+
+/** The loop layer: only the loop's nodes and edges, drawn as the emphasised elements of the graph. */
+export function loopLayerStyle(directed: boolean): StylesheetJson {
+  return graphStyle(directed, false).map((rule) =>
+    rule.selector === "edge.loop" || rule.selector === "node.loop"
+      ? { ...rule, selector: rule.selector.split(".")[0] }
+      : rule,
+  );
 }

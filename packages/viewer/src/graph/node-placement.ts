@@ -19,9 +19,9 @@ export function placeNodes(
     const nodes = cy.nodes();
     const xs = nodes.map((_, v) => coordinates[2 * v]);
     const ys = nodes.map((_, v) => coordinates[2 * v + 1]);
-    // Scale to about 40 px between neighbours for a few hundred nodes, whatever the data's units.
+    // About 100 model units per node along a side, whatever the data's units: neighbours land some 30 px apart.
     const span = Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys)) || 1;
-    const scale = (40 * Math.sqrt(nodes.length)) / span;
+    const scale = (100 * Math.sqrt(nodes.length)) / span;
     cy.batch(() => {
       nodes.forEach((node, v) => {
         node.position({ x: xs[v] * scale, y: -ys[v] * scale });

@@ -1,0 +1,241 @@
+// Speed of the viewer in headless Chromium (Debian's /usr/bin/chromium through playwright-core).
+//   node test/bench/viewer-bench.mjs [--no-report] [--repeat 20]      (after npm run build)
+// 1. A 2,000-node, 40,000-edge graph served by `cliquescape view`: slider move to redrawn graph and numbers,
+//    and choosing a loop (threshold to its birth, loop drawn), each timed in the page from the input to the
+//    second animation frame after it (the frame that shows the change), median of 20; main-thread busy time
+//    from Chromium's Performance.getMetrics (TaskDuration) as the CPU figure.
+// 2. The report of a 1,000-graph run opened from disk: from navigation start to the run page drawn
+//    (table, curves, map), median of 5 fresh loads.
+// Prints a JSON summary on stdout; progress on stderr. Inputs are generated (seeded) into .bench/viewer/.
+import { spawn, spawnSync } from "node:child_process";
+import { existsSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { loadavg, tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath, pathToFileURL } from "node:url";
+import { chromium } from "playwright-core";
+import { seededRandom } from "./random.mjs";
+
+const root = fileURLToPath(new URL("../../", import.meta.url));
+const bin = join(root, "packages/cli/bin/cliquescape.js");
+const base = join(root, ".bench", "viewer");
+const option = (name, fallback) => {
+  const i = process.argv.indexOf(name);
+  return i >= 0 ? process.argv[i + 1] : fallback;
+};
+const repeat = Number(option("--repeat", "20"));
+const withReport = !process.argv.includes("--no-report");
+const log = (text) => process.stderr.write(`${text}\n`);
+const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+const round = (x) => Math.round(x * 10) / 10;
+
+/** A seeded random graph: n nodes, exactly m distinct edges with uniform(0, 1) similarity weights. */
+function randomEdgeList(n, m, seed) {
+  const random = seededRandom(seed);
+  const seen = new Set();
+  const lines = ["source,target,weight"];
+  while (seen.size < m) {
+    const u = Math.floor(random() * n);
+    const v = Math.floor(random() * n);
+    if (u === v) continue;
+    const key = u < v ? u * n + v : v * n + u;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    lines.push(`v${u},v${v},${random().toFixed(6)}`);
+  }
+  return `${lines.join("\n")}\n`;
+}
+
+/** Sites in the unit square joined when closer than r; weight exp(−d²/2r²): 3 labels with different r. */
+function geometricEdgeList(n, r, seed) {
+  const random = seededRandom(seed);
+  const xy = Array.from({ length: n }, () => [random(), random()]);
+  const lines = ["source,target,weight"];
+  for (let u = 0; u < n; u++)
+    for (let v = u + 1; v < n; v++) {
+      const d = Math.hypot(xy[u][0] - xy[v][0], xy[u][1] - xy[v][1]);
+      if (d < r) lines.push(`s${u},s${v},${Math.exp(-(d * d) / (2 * r * r)).toFixed(4)}`);
+    }
+  return `${lines.join("\n")}\n`;
+}
+
+function launch() {
+  const profile = mkdtempSync(join(tmpdir(), "cliquescape-bench-chromium-"));
+  return chromium
+    .launchPersistentContext(profile, {
+      executablePath: process.env.CHROMIUM ?? "/usr/bin/chromium",
+      headless: true,
+      viewport: { width: 1280, height: 800 },
+      args: [
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-quic",
+        "--no-first-run",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+      ],
+    })
+    .then((context) => ({
+      context,
+      close: async () => {
+        await context.close();
+        rmSync(profile, { recursive: true, force: true });
+      },
+    }));
+}
+
+function startView(file) {
+  const child = spawn(process.execPath, [bin, "view", file], { stdio: ["ignore", "pipe", "inherit"] });
+  return new Promise((resolve, reject) => {
+    let out = "";
+    child.once("exit", (code) => reject(new Error(`view exited ${code}`)));
+    child.stdout.on("data", (chunk) => {
+      out += chunk;
+      const match = /at (http:\/\/\S+\/)/.exec(out);
+      if (match) resolve({ url: match[1], stop: () => child.kill("SIGINT") });
+    });
+  });
+}
+
+async function mainThreadSeconds(cdp) {
+  const { metrics } = await cdp.send("Performance.getMetrics");
+  return metrics.find((m) => m.name === "TaskDuration").value;
+}
+
+async function benchGraph() {
+  mkdirSync(base, { recursive: true });
+  const file = join(base, "er-2000-40000.csv");
+  if (!existsSync(file)) writeFileSync(file, randomEdgeList(2000, 40000, 2026));
+  const view = await startView(file);
+  const { context, close } = await launch();
+  const page = context.pages()[0] ?? (await context.newPage());
+  const t0 = Date.now();
+  await page.goto(view.url);
+  await page.waitForFunction(() => window.cliquescape?.graph !== undefined, null, { timeout: 600_000 });
+  const openSeconds = (Date.now() - t0) / 1000;
+  log(`graph open (analysis, layout, charts): ${openSeconds.toFixed(1)} s`);
+  const cdp = await context.newCDPSession(page);
+  await cdp.send("Performance.enable");
+
+  const steps = await page.evaluate(() => window.cliquescape.graph.analysis.thresholds.length);
+  const random = seededRandom(7);
+  const positions = Array.from({ length: repeat }, () => Math.floor(random() * steps));
+  const busy0 = await mainThreadSeconds(cdp);
+  const slider = await page.evaluate(async (positions) => {
+    const frame = () => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)));
+    const input = document.querySelector("#threshold-slider");
+    const times = [];
+    for (const p of positions) {
+      await frame();
+      const t = performance.now();
+      input.value = String(p);
+      input.dispatchEvent(new Event("input"));
+      await frame();
+      times.push(performance.now() - t);
+    }
+    return times;
+  }, positions);
+  const busy1 = await mainThreadSeconds(cdp);
+  const loops = await page.evaluate(async (repeat) => {
+    const frame = () => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)));
+    const g = window.cliquescape.graph;
+    const times = [];
+    for (let i = 0; i < repeat; i++) {
+      await frame();
+      const t = performance.now();
+      await g.chooseBar(g.loopBars[i % g.loopBars.length]);
+      await frame();
+      times.push(performance.now() - t);
+    }
+    return { times, bars: g.loopBars.length, loopEdges: g.canvas.loopEdgeNumbers().length };
+  }, repeat);
+  const busy2 = await mainThreadSeconds(cdp);
+  await close();
+  view.stop();
+  return {
+    graph: { nodes: 2000, edges: 40000, steps, openSeconds: round(openSeconds) },
+    sliderMs: {
+      median: round(median(slider)),
+      max: round(Math.max(...slider)),
+      mainThreadPerMoveMs: round(((busy1 - busy0) * 1000) / repeat),
+    },
+    loopMs: {
+      median: round(median(loops.times)),
+      max: round(Math.max(...loops.times)),
+      mainThreadPerChoiceMs: round(((busy2 - busy1) * 1000) / repeat),
+      listed: loops.bars,
+    },
+  };
+}
+
+async function benchReport() {
+  const dataset = join(base, "run-1000");
+  const run = join(base, "run-1000-out");
+  const report = join(base, "report-1000.html");
+  if (!existsSync(join(run, "features.csv"))) {
+    mkdirSync(dataset, { recursive: true });
+    const labels = [
+      ["dense", 0.3],
+      ["medium", 0.24],
+      ["sparse", 0.18],
+    ];
+    const manifest = ["id,file,label"];
+    for (let g = 0; g < 1000; g++) {
+      const [label, r] = labels[g % 3];
+      const id = `g${String(g).padStart(4, "0")}`;
+      writeFileSync(join(dataset, `${id}.csv`), geometricEdgeList(40, r, 5000 + g));
+      manifest.push(`${id},${id}.csv,${label}`);
+    }
+    writeFileSync(join(dataset, "manifest.csv"), `${manifest.join("\n")}\n`);
+    log("extracting the 1,000-graph run (once; kept in .bench/viewer)…");
+    const t = Date.now();
+    const extract = spawnSync(
+      process.execPath,
+      [bin, "extract", join(dataset, "manifest.csv"), "--out", run, "--workers", "2"],
+      { stdio: ["ignore", "ignore", "inherit"] },
+    );
+    if (extract.status !== 0) throw new Error(`extract failed (${extract.status})`);
+    log(`  ${((Date.now() - t) / 1000).toFixed(0)} s`);
+  }
+  const written = spawnSync(process.execPath, [bin, "report", run, "--out", report], { encoding: "utf8" });
+  if (written.status !== 0) throw new Error(written.stderr);
+  const { context, close } = await launch();
+  const loads = [];
+  for (let i = 0; i < 5; i++) {
+    const page = await context.newPage();
+    await page.goto(pathToFileURL(report).href);
+    const ms = await page.evaluate(() =>
+      window.cliquescape.ready.then(
+        () =>
+          new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(() => r(performance.now())))),
+      ),
+    );
+    if ((await page.locator("table.run-table tbody tr").count()) !== 1000)
+      throw new Error("the table does not hold 1,000 rows");
+    loads.push(ms);
+    await page.close();
+  }
+  await close();
+  const { size } = await import("node:fs").then((fs) => fs.statSync(report));
+  return {
+    reportMiB: round(size / 2 ** 20),
+    openMs: { median: Math.round(median(loads)), all: loads.map(Math.round) },
+  };
+}
+
+const started = new Date().toISOString();
+const graph = await benchGraph();
+const report = withReport ? await benchReport() : null;
+console.log(
+  JSON.stringify(
+    {
+      started,
+      loadAverage: loadavg().map(round),
+      cores: (await import("node:os")).cpus().length,
+      ...graph,
+      report,
+    },
+    null,
+    2,
+  ),
+);

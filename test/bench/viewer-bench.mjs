@@ -13,6 +13,7 @@ import { loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
 import { chromium } from "playwright-core";
+import { CHROMIUM, CHROMIUM_ARGS } from "../browser/chromium-flags.mjs";
 import { seededRandom } from "./random.mjs";
 
 const root = fileURLToPath(new URL("../../", import.meta.url));
@@ -62,18 +63,10 @@ function launch() {
   const profile = mkdtempSync(join(tmpdir(), "cliquescape-bench-chromium-"));
   return chromium
     .launchPersistentContext(profile, {
-      executablePath: process.env.CHROMIUM ?? "/usr/bin/chromium",
+      executablePath: CHROMIUM,
       headless: true,
       viewport: { width: 1280, height: 800 },
-      args: [
-        "--no-sandbox",
-        "--disable-gpu",
-        "--disable-quic",
-        "--no-first-run",
-        "--disable-background-networking",
-        "--disable-component-update",
-        "--disable-sync",
-      ],
+      args: CHROMIUM_ARGS,
     })
     .then((context) => ({
       context,

@@ -4,8 +4,9 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { type BrowserContext, chromium, type Page } from "playwright-core";
 
-/** Debian's Chromium (apt-get install chromium); override with CHROMIUM=/path/to/chrome. */
-export const CHROMIUM = process.env.CHROMIUM ?? "/usr/bin/chromium";
+import { CHROMIUM, CHROMIUM_ARGS } from "./chromium-flags.mjs";
+
+export { CHROMIUM };
 
 /**
  * null when Chromium is there, otherwise why not. Outside CI the browser tests then skip with that reason
@@ -46,15 +47,7 @@ export async function launchChromium(): Promise<{
     executablePath: CHROMIUM,
     headless: true,
     viewport: VIEWPORT,
-    args: [
-      "--no-sandbox",
-      "--disable-gpu",
-      "--disable-quic",
-      "--no-first-run",
-      "--disable-background-networking",
-      "--disable-component-update",
-      "--disable-sync",
-    ],
+    args: CHROMIUM_ARGS,
   });
   const page = context.pages()[0] ?? (await context.newPage());
   return {

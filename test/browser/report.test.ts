@@ -41,20 +41,17 @@ describe.skipIf(skip)(`report opened from disk${skip ? ` (skipped: ${skip})` : "
     expect(await page.locator("table.run-table tbody tr").count()).toBe(9);
     expect(await page.locator("table.run-table button[data-open]").count()).toBe(9);
     // Each chart saves as SVG: the mean curves with their bands, and one marker per graph in the map.
-    const curves = await downloaded(page, () =>
-      page
-        .locator("figure", { has: page.locator("#label-curves-chart") })
-        .getByRole("button", { name: "SVG" })
-        .click(),
-    );
+    const saved = (chart: string) =>
+      downloaded(page, () =>
+        page
+          .locator("figure", { has: page.locator(`#${chart}`) })
+          .getByRole("button", { name: "SVG" })
+          .click(),
+      );
+    const curves = await saved("label-curves-chart");
     expect(curves.name).toBe("betti_d1-by-label.svg");
     expect(curves.bytes.toString().match(/<path/g)!.length).toBeGreaterThan(3 * 2);
-    const map = await downloaded(page, () =>
-      page
-        .locator("figure", { has: page.locator("#feature-map-chart") })
-        .getByRole("button", { name: "SVG" })
-        .click(),
-    );
+    const map = await saved("feature-map-chart");
     expect(map.name).toBe("feature-map.svg");
     expect(map.bytes.toString().match(/<path/g)!.length).toBeGreaterThanOrEqual(9);
     await screenshot(page, "run-report");

@@ -2,9 +2,9 @@ import type { CustomSeriesRenderItem, EChartsType } from "echarts";
 import type { GraphAnalysis } from "../compute/graph-analysis.js";
 import { formatWeight } from "../format.js";
 import { PALETTE, seriesColour } from "../palette.js";
+import { barChartBase, filtrationEnd } from "./bar-charts.js";
 import { CHART_TEXT, createChart, weightAxis } from "./chart-host.js";
 import { echarts } from "./echarts-setup.js";
-import { filtrationEnd } from "./filtration-end.js";
 
 // One bar per row: [from, to, row, bar number, essential (1/0)].
 type BarDatum = [number, number, number, number, number];
@@ -86,14 +86,7 @@ export class BarcodeChart {
       data: [],
     });
     this.chart.setOption({
-      textStyle: CHART_TEXT,
-      animation: false,
-      legend: { top: 0, textStyle: CHART_TEXT, data: series.slice(0, dims).map((s) => s.name as string) },
-      tooltip: {
-        trigger: "item",
-        formatter: (p: { data: BarDatum; seriesName: string }) =>
-          `${p.seriesName} bar ${p.data[3]}: born ${formatWeight(p.data[0])}, ${p.data[4] ? "never dies" : `dies ${formatWeight(p.data[1])}`}`,
-      },
+      ...barChartBase(analysis, dims, (datum) => datum[3]),
       grid: { left: 16, right: 16, top: 30, bottom: 40 },
       xAxis: weightAxis("threshold (weight)", analysis.semantics === "similarity", {
         axisLabel: { formatter: formatWeight },

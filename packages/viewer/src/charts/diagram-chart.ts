@@ -2,8 +2,8 @@ import type { EChartsType } from "echarts";
 import type { GraphAnalysis } from "../compute/graph-analysis.js";
 import { formatWeight } from "../format.js";
 import { PALETTE, seriesColour } from "../palette.js";
-import { CHART_TEXT, createChart, weightAxis } from "./chart-host.js";
-import { filtrationEnd } from "./filtration-end.js";
+import { barChartBase, filtrationEnd } from "./bar-charts.js";
+import { createChart, weightAxis } from "./chart-host.js";
 
 // [birth, death (or the "never dies" line), bar number, essential (1/0)].
 type PointDatum = [number, number, number, number];
@@ -72,14 +72,7 @@ export class DiagramChart {
     const axis = (name: string) =>
       weightAxis(name, similarity, { min: lo, max: hi, scale: false, axisLabel: { formatter: label } });
     this.chart.setOption({
-      textStyle: CHART_TEXT,
-      animation: false,
-      legend: { top: 0, textStyle: CHART_TEXT, data: series.slice(0, dims).map((s) => s.name as string) },
-      tooltip: {
-        trigger: "item",
-        formatter: (p: { data: PointDatum; seriesName: string }) =>
-          `${p.seriesName} bar ${p.data[2]}: born ${formatWeight(p.data[0])}, ${p.data[3] ? "never dies" : `dies ${formatWeight(p.data[1])}`}`,
-      },
+      ...barChartBase(analysis, dims, (datum) => datum[2]),
       grid: { left: 52, right: 20, top: 30, bottom: 40 },
       xAxis: axis("birth"),
       yAxis: { ...axis("death"), nameGap: 38 },

@@ -33,27 +33,24 @@ export class LabelCurvesChart {
         data: x.map((v, t) => [v, c.mean[t]]),
       });
       // The band: an invisible lower edge, then the band's height stacked on it and filled.
-      series.push({
+      const band = (values: number[], extra: Record<string, unknown> = {}) => ({
         name: c.label,
         type: "line",
         stack,
         symbol: "none",
         lineStyle: { opacity: 0 },
-        data: x.map((v, t) => [v, c.mean[t] - c.sd[t]]),
+        data: x.map((v, t) => [v, values[t]]),
         tooltip: { show: false },
         silent: true,
+        ...extra,
       });
-      series.push({
-        name: c.label,
-        type: "line",
-        stack,
-        symbol: "none",
-        lineStyle: { opacity: 0 },
-        areaStyle: { color: colour, opacity: 0.18 },
-        data: x.map((v, t) => [v, 2 * c.sd[t]]),
-        tooltip: { show: false },
-        silent: true,
-      });
+      series.push(band(c.mean.map((m, t) => m - c.sd[t])));
+      series.push(
+        band(
+          c.sd.map((s) => 2 * s),
+          { areaStyle: { color: colour, opacity: 0.18 } },
+        ),
+      );
     });
     this.chart.setOption(
       {

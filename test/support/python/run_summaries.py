@@ -18,8 +18,9 @@ with open(job["features"], newline="") as handle:
     rows = list(csv.reader(handle))
 header, body = rows[0], rows[1:]
 labels = [r[1] for r in body]
-values = np.array([[float(x) if x != "" else np.nan for x in r[3:]] for r in body])
-names = header[3:]
+first = 4 if header[3] == "truncated" else 3  # id, label, split[, truncated], then the features
+values = np.array([[float(x) if x != "" else np.nan for x in r[first:]] for r in body])
+names = header[first:]
 curve = [names.index(f'{job["curve"]}_{s}') for s in job["axis"]]
 out = {"labels": {}}
 for label in sorted(set(labels)):

@@ -2,7 +2,13 @@ import type { Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { Command, Option } from "commander";
 import { addComplexOptions, complexOptionsOf } from "../options/complex-options.js";
-import { addGraphOptions, graphOptionsOf, nonNegativeInteger } from "../options/graph-options.js";
+import {
+  addGraphOptions,
+  GRAPH_FILE_HELP,
+  graphOptionsOf,
+  nonNegativeInteger,
+} from "../options/graph-options.js";
+import { addSpecOption, specOf } from "../options/spec-option.js";
 import { viewerPageHtml } from "../view/page-html.js";
 import { LOOPBACK, servePage } from "../view/page-server.js";
 import { openViewTarget, type ViewOptions, type ViewTarget } from "../view/view-target.js";
@@ -10,6 +16,7 @@ import { openViewTarget, type ViewOptions, type ViewTarget } from "../view/view-
 /** Options `view` and `report` share: how to read a single graph file, and where a run's dataset is. */
 export function addViewOptions(command: Command): Command {
   addGraphOptions(command);
+  addSpecOption(command);
   addComplexOptions(command);
   return command
     .addOption(new Option("--coords <file>", "node positions for a single graph (CSV: node,x,y)"))
@@ -18,10 +25,12 @@ export function addViewOptions(command: Command): Command {
     );
 }
 
-export function viewOptionsOf(raw: Record<string, unknown>): ViewOptions {
+export function viewOptionsOf(raw: Record<string, unknown>, self: Command): ViewOptions {
+  const given = (name: string) => self.getOptionValueSource(name) === "cli";
+  const spec = specOf(raw);
   return {
-    graph: graphOptionsOf(raw),
-    complex: complexOptionsOf(raw),
+    graph: graphOptionsOf(raw, spec, given),
+    complex: complexOptionsOf(raw, spec, given),
     coords: raw.coords as string | undefined,
     dataset: raw.dataset as string | undefined,
   };
@@ -31,12 +40,12 @@ export function viewCommand(): Command {
   const command = new Command("view")
     .summary("open a graph or a run folder in the browser (served on 127.0.0.1 only)")
     .description(
-      "Serves the cliquescape page for one graph file or for a run folder written by extract, on this machine\n" +
-        "only (127.0.0.1), and prints its address. Open it in a browser: the graph at a threshold slider, the\n" +
-        "numbers there, Betti and Euler curves, barcode and diagram; choosing a bar draws its loop on the graph.\n" +
+      "Serves the cliquescape page for one graph file or for a run folder written by extract, on this machine " +
+        "only (127.0.0.1), and prints its address. Open it in a browser: the graph at a threshold slider, the " +
+        "numbers there, Betti and Euler curves, barcode and diagram; choosing a bar draws its loop on the graph. " +
         "Only what was given is served: no other file, no directory listing. Ctrl-C stops it.",
     )
-    .argument("<file-or-run>", "a graph file (matrix, edge list, .npy, …) or a run folder (holds spec.json)");
+    .argument("<file>", `${GRAPH_FILE_HELP}; or a run folder written by extract (it holds spec.json)`);
   addViewOptions(command);
   command.addOption(
     new Option("--port <n>", "port to listen on (default: a free one)")
@@ -51,9 +60,9 @@ Examples:
   cliquescape view out/demo
   cliquescape view subject07.npy --weights distance --port 8321`,
   );
-  command.action((path: string, raw: Record<string, unknown>) => {
+  command.action((path: string, raw: Record<string, unknown>, self: Command) => {
     // Reading the input is synchronous, so a bad file fails here with the usual message and exit code.
-    const target = openViewTarget(path, viewOptionsOf(raw));
+    const target = openViewTarget(path, viewOptionsOf(raw, self));
     const html = viewerPageHtml();
     void serveUntilStopped(path, target, html, raw.port as number);
   });

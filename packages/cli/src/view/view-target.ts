@@ -62,7 +62,7 @@ function graphTarget(path: string, options: ViewOptions): ViewTarget {
       kind: "graph",
       name: basename(path),
       settings: {
-        semantics: options.graph.weights,
+        semantics: options.graph.preparation.weights,
         topDim: topDim ?? null,
         maxHomologyDim: homologyDimOf(options.complex),
         prime,

@@ -25,6 +25,8 @@ export interface RunGraph {
   id: string;
   label: string;
   split: string;
+  /** True when the top dimension hid simplices, so Euler columns are partial sums; null when not said. */
+  truncated: boolean | null;
   /** Aligned with featureNames; NaN for an empty cell. */
   values: Float64Array;
 }
@@ -39,8 +41,9 @@ export interface RunError {
 /** The files the page needs, by their names in the run folder. */
 export const RUN_FILES = ["spec.json", "features.csv", "errors.csv"] as const;
 
-// features.csv starts with these columns; the feature columns follow.
+// features.csv starts with these columns (runs before truncated was added lack it); the features follow.
 const KEY_COLUMNS = ["id", "label", "split"];
+const TRUNCATED_COLUMN = "truncated";
 
 /** Parses the run's files; a file that does not look like extract's output is an error naming it. */
 export function readRunFolder(files: Record<string, string>): RunFolder {
@@ -59,13 +62,15 @@ export function readRunFolder(files: Record<string, string>): RunFolder {
   const table = [...textRows(required(files, "features.csv"), ",", "features.csv")];
   if (table.length === 0 || KEY_COLUMNS.some((name, i) => table[0].cells[i] !== name))
     throw new Error(`features.csv: the first columns must be ${KEY_COLUMNS.join(", ")}`);
-  const featureNames = table[0].cells.slice(KEY_COLUMNS.length);
+  const keys = KEY_COLUMNS.length + (table[0].cells[KEY_COLUMNS.length] === TRUNCATED_COLUMN ? 1 : 0);
+  const featureNames = table[0].cells.slice(keys);
   const graphs = table.slice(1).map(({ cells }) => ({
     id: cells[0],
     label: cells[1],
     split: cells[2],
+    truncated: keys > KEY_COLUMNS.length && cells[3] !== "" ? cells[3] === "true" : null,
     values: Float64Array.from(featureNames, (_, j) => {
-      const cell = cells[KEY_COLUMNS.length + j];
+      const cell = cells[keys + j];
       return cell === undefined || cell === "" ? Number.NaN : Number(cell);
     }),
   }));

@@ -62,6 +62,7 @@ export function runTable(
           h("td", {}, g.label),
           h("td", {}, g.split),
           ...columns.map((c) => h("td", { class: "num" }, formatCell(g.values[c.index]))),
+          h("td", {}, g.truncated ? "partial" : ""),
         );
       }),
     );
@@ -94,6 +95,11 @@ export function runTable(
         header("label", "label"),
         header("split", "split"),
         ...columns.map((c) => header(c.index, c.heading)),
+        h(
+          "th",
+          { scope: "col", title: "partial: the top dimension hid simplices, Euler columns are partial sums" },
+          "χ",
+        ),
       ),
     ),
     tbody,

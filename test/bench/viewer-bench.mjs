@@ -1,8 +1,8 @@
 // Speed of the viewer in headless Chromium (Debian's /usr/bin/chromium through playwright-core).
 //   node test/bench/viewer-bench.mjs [--only graph|report] [--repeat 20]      (after npm run build)
 // 1. A 2,000-node, 40,000-edge graph served by `cliquescape view`: slider moves to redrawn graph and numbers
-//    (jumps to random steps, and a drag: consecutive moves of 1 % of the range), and choosing a loop
-//    (threshold to its birth, loop drawn), each timed in the page from the input to the second animation
+//    (jumps to random steps, and a drag: consecutive moves of 1 % of the range), choosing a loop (threshold
+//    to its birth, loop drawn) and drawing a loop alone (its threshold already set), each timed in the page from the input to the second animation
 //    frame after it (the frame that shows the change), median of 20. CPU: user + system time of every
 //    Chromium process of the run (/proc/PID/stat), per move — on a shared machine wall time also counts
 //    the time other processes hold the cores.
@@ -169,6 +169,22 @@ async function benchGraph() {
     return { times, bars: g.loopBars.length };
   }, repeat);
   const cpu3 = cpu();
+  // The loop drawing alone, its threshold already set: the loop layer and the veil.
+  const drawn = await page.evaluate(async (repeat) => {
+    const frame = () => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)));
+    const g = window.cliquescape.graph;
+    const times = [];
+    for (let i = 0; i < repeat; i++) {
+      const pairs = await g.loopOf(g.loopBars[i % g.loopBars.length]);
+      await frame();
+      const t = performance.now();
+      g.canvas.showLoop(pairs);
+      await frame();
+      times.push(performance.now() - t);
+    }
+    return times;
+  }, repeat);
+  const cpu4 = cpu();
   await close();
   view.stop();
   const summary = (times, seconds) => ({
@@ -180,7 +196,8 @@ async function benchGraph() {
     graph: { nodes: 2000, edges: 40000, steps, openSeconds: round(openSeconds) },
     sliderJump: summary(jumped, cpu1 - cpu0),
     sliderDrag: { stepsPerMove: stride, ...summary(dragged, cpu2 - cpu1) },
-    loop: { listed: loops.bars, ...summary(loops.times, cpu3 - cpu2) },
+    loopChoice: { listed: loops.bars, ...summary(loops.times, cpu3 - cpu2) },
+    loopDrawing: summary(drawn, cpu4 - cpu3),
   };
 }
 

@@ -100,12 +100,9 @@ describe.skipIf(skip)(`graph page in Chromium${skip ? ` (skipped: ${skip})` : ""
     await page.keyboard.press("Enter");
     await page.waitForSelector('.loop-item[aria-pressed="true"]');
     const chosen = Number(await page.getAttribute('.loop-item[aria-pressed="true"]', "data-bar"));
-    await page.waitForFunction(() => window.cliquescape!.graph!.canvas.cy.edges(".loop").length > 0);
-    const drawn = await page.evaluate(() =>
-      window
-        .cliquescape!.graph!.canvas.cy.edges(".loop")
-        .map((e) => [e.source().data("label"), e.target().data("label")]),
-    );
+    await page.waitForFunction(() => window.cliquescape!.graph!.canvas.shownLoop().length > 0);
+    // The loop as drawn: the edges on the page's loop layer, over the faded graph.
+    const drawn = await page.evaluate(() => window.cliquescape!.graph!.canvas.shownLoop());
     const threshold = await page.evaluate(() => window.cliquescape!.graph!.control.threshold());
 
     const cli = runCli(["barcode", GRAPH, "--cycles", "1", "--format", "json"]);
@@ -132,9 +129,7 @@ describe.skipIf(skip)(`graph page in Chromium${skip ? ` (skipped: ${skip})` : ""
 
   it("saves the graph as PNG and SVG, the loop as CSV and each chart as SVG", async () => {
     const loop = await page.evaluate(() =>
-      window
-        .cliquescape!.graph!.canvas.cy.edges(".loop")
-        .map((e) => [e.source().data("label"), e.target().data("label")].sort().join("|")),
+      window.cliquescape!.graph!.canvas.shownLoop().map((pair) => [...pair].sort().join("|")),
     );
     expect(loop.length).toBeGreaterThan(2);
     const png = await downloaded(page, () => page.getByRole("button", { name: "PNG" }).click());

@@ -25,6 +25,8 @@ export interface GraphPageHandle {
   moveTo(index: number): void;
   /** Chooses a bar as a click in the barcode does; resolves once its loop is drawn. */
   chooseBar(bar: number): Promise<void>;
+  /** The representative loop of an H1 bar, as node pairs (from the worker once, then remembered). */
+  loopOf(bar: number): Promise<Int32Array>;
   loopBars: number[];
 }
 
@@ -65,10 +67,10 @@ export async function showGraphPage(
     h("label", { class: "toggle" }, sizeToggle, " node size: simplices through it"),
     h("span", { class: "spacer" }),
     h("span", { class: "toggle" }, "Save"),
-    button("PNG", () =>
-      download(`${stem}.png`, canvas.cy.png({ output: "blob", full: true, scale: 2, bg: "#ffffff" }) as Blob),
+    button("PNG", () => void canvas.png().then((png) => download(`${stem}.png`, png))),
+    button("SVG", () =>
+      download(`${stem}.svg`, graphSvg(canvas.cy, title, canvas.loopEdgeNumbers()), "image/svg+xml"),
     ),
-    button("SVG", () => download(`${stem}.svg`, graphSvg(canvas.cy, title), "image/svg+xml")),
     button("loop CSV", () => {
       if (chosen === null || !loops.has(chosen)) {
         status.textContent = "Choose a loop first (in the list, the barcode or the diagram).";
@@ -195,7 +197,7 @@ export async function showGraphPage(
       loopWalk(pairs).map((v) => analysis.labels[v]),
     );
   }
-  return { analysis, canvas, control, moveTo, chooseBar, loopBars: list.bars };
+  return { analysis, canvas, control, moveTo, chooseBar, loopOf, loopBars: list.bars };
 }
 
 function button(label: string, action: () => void): HTMLButtonElement {

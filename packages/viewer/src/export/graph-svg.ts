@@ -6,9 +6,10 @@ const escapeXml = (text: string) =>
 
 /**
  * The graph as drawn, as an SVG document: the edges shown at the current threshold, the nodes, and the
- * loop (if any) emphasised as on screen. Positions are cytoscape's model positions.
+ * loop (given by its edge numbers; none when empty) emphasised as on screen. Positions are cytoscape's
+ * model positions.
  */
-export function graphSvg(cy: Core, title: string): string {
+export function graphSvg(cy: Core, title: string, loopEdgeNumbers: number[]): string {
   const nodes = cy.nodes();
   const box = nodes.boundingBox({});
   const pad = 20;
@@ -18,7 +19,8 @@ export function graphSvg(cy: Core, title: string): string {
   const height = Math.max(1, box.h + 2 * pad);
   const directed = cy.edges().some((edge) => edge.style("target-arrow-shape") !== "none");
   // While a loop is shown, everything else is drawn faded, as on screen.
-  const loopEdges = cy.edges(".loop");
+  let loopEdges = cy.collection();
+  for (const e of loopEdgeNumbers) loopEdges = loopEdges.union(cy.getElementById(`e${e}`));
   const faded = loopEdges.nonempty();
   const loopNodes = loopEdges.connectedNodes();
   const lines: string[] = [];
@@ -26,7 +28,7 @@ export function graphSvg(cy: Core, title: string): string {
     if (edge.hasClass("absent")) return;
     const s = edge.source().position();
     const t = edge.target().position();
-    const loop = edge.hasClass("loop");
+    const loop = loopEdges.contains(edge);
     const colour = loop ? PALETTE.loop : faded ? PALETTE.edgeDimmed : PALETTE.edge;
     lines.push(
       `<line x1="${s.x.toFixed(1)}" y1="${s.y.toFixed(1)}" x2="${t.x.toFixed(1)}" y2="${t.y.toFixed(1)}" stroke="${colour}" stroke-width="${loop ? 4 : 1}"${directed ? ' marker-end="url(#arrow)"' : ""}${loop ? ' class="loop"' : ""}/>`,

@@ -7,9 +7,9 @@ import { layoutEdgeCount, placeNodes } from "./node-placement.js";
 /**
  * The graph drawn with cytoscape. Every edge is added once and shown or hidden as the threshold moves, so
  * node positions never change with the threshold; a threshold change touches only the edges that enter or
- * leave. A loop is drawn on a second, small cytoscape layer above a veil that fades the graph: its cost
- * depends on the loop's length, not on the size of the graph (restyling 40,000 edges to fade them took
- * seconds).
+ * leave. A loop is drawn on a second, small cytoscape layer above a veil that fades the graph, and the
+ * graph itself is not touched: the cost depends on the loop's length, not on the size of the graph
+ * (restyling 40,000 edges to fade them took seconds, and any change to the main drawing redraws every edge).
  */
 export class GraphCanvas {
   readonly cy: Core;
@@ -113,9 +113,6 @@ export class GraphCanvas {
   showLoop(pairs: Int32Array | null): void {
     const cy = this.cy;
     const layer = this.loopLayer;
-    cy.batch(() => {
-      for (const e of this.loopEdges) this.edges[e].removeClass("loop");
-    });
     this.loopEdges = [];
     layer.elements().remove();
     this.veil.hidden = pairs === null;
@@ -143,10 +140,27 @@ export class GraphCanvas {
     }
     layer.add(elements);
     layer.viewport({ zoom: cy.zoom(), pan: cy.pan() });
-    // Marked in the main drawing too, so exports and tests see which edges form the loop.
-    cy.batch(() => {
-      for (const e of this.loopEdges) this.edges[e].addClass("loop");
-    });
+  }
+
+  /** The loop as drawn on its layer: one [label, label] pair per edge (what a person sees emphasised). */
+  shownLoop(): [string, string][] {
+    return this.loopLayer.edges().map((edge) => [edge.source().data("label"), edge.target().data("label")]);
+  }
+
+  /** The drawing as one PNG: the graph, and over it the veil and the loop when one is shown. */
+  async png(): Promise<Blob> {
+    const options = { output: "blob-promise" as const, full: false, scale: 2, bg: "#ffffff" };
+    const base = await this.cy.png(options);
+    if (this.loopEdges.length === 0) return base;
+    const loop = await this.loopLayer.png({ ...options, bg: undefined });
+    const [under, over] = await Promise.all([createImageBitmap(base), createImageBitmap(loop)]);
+    const canvas = new OffscreenCanvas(under.width, under.height);
+    const context = canvas.getContext("2d")!;
+    context.drawImage(under, 0, 0);
+    context.fillStyle = getComputedStyle(this.veil).backgroundColor;
+    context.fillRect(0, 0, canvas.width, canvas.height);
+    context.drawImage(over, 0, 0, under.width, under.height);
+    return canvas.convertToBlob({ type: "image/png" });
   }
 
   /** The number (entering order) of the edge between u and v (for directed graphs, the arc u → v first). */
@@ -155,7 +169,7 @@ export class GraphCanvas {
     return this.edgeByPair.get(u * n + v) ?? this.edgeByPair.get(v * n + u);
   }
 
-  /** Edge numbers (entering order) of the loop shown. */
+  /** Edge numbers (entering order) of the loop shown, in the loop's order. */
   loopEdgeNumbers(): number[] {
     return [...this.loopEdges];
   }

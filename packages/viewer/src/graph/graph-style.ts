@@ -2,9 +2,8 @@ import type { StylesheetJson } from "cytoscape";
 import { PALETTE } from "../palette.js";
 
 /**
- * How the graph is drawn. Loop edges are thicker as well as coloured, so the loop stands out without
- * relying on colour; directed graphs get arrowheads (straight edges), undirected ones the cheaper haystack
- * edges. Nodes sized by participation read their size from `data(size)`.
+ * How the graph is drawn. Directed graphs get arrowheads (straight edges), undirected ones the cheaper
+ * haystack edges. Nodes sized by participation read their size from `data(size)`.
  */
 export function graphStyle(directed: boolean, showLabels: boolean): StylesheetJson {
   return [
@@ -37,8 +36,18 @@ export function graphStyle(directed: boolean, showLabels: boolean): StylesheetJs
       },
     },
     { selector: "edge.absent", style: { display: "none" } },
+  ];
+}
+
+/**
+ * The loop layer: only the loop's nodes and edges, over the graph's own rules (shapes, arrowheads). Loop
+ * edges are thicker as well as coloured, so the loop stands out without relying on colour.
+ */
+export function loopLayerStyle(directed: boolean): StylesheetJson {
+  return [
+    ...graphStyle(directed, false),
     {
-      selector: "edge.loop",
+      selector: "edge",
       style: {
         width: 4,
         opacity: 1,
@@ -48,7 +57,7 @@ export function graphStyle(directed: boolean, showLabels: boolean): StylesheetJs
       },
     },
     {
-      selector: "node.loop",
+      selector: "node",
       style: {
         width: 13,
         height: 13,
@@ -65,13 +74,4 @@ export function graphStyle(directed: boolean, showLabels: boolean): StylesheetJs
       },
     },
   ];
-}
-
-/** The loop layer: only the loop's nodes and edges, drawn as the emphasised elements of the graph. */
-export function loopLayerStyle(directed: boolean): StylesheetJson {
-  return graphStyle(directed, false).map((rule) =>
-    rule.selector === "edge.loop" || rule.selector === "node.loop"
-      ? { ...rule, selector: rule.selector.split(".")[0] }
-      : rule,
-  );
 }

@@ -79,7 +79,7 @@ export { subjectAxis } from "./timeseries/subject-axis.js";
 export type { TimeSeriesReadOptions, TimeSeriesReadResult } from "./timeseries/time-series-read-options.js";
 export { type ToGraphologyOptions, toGraphology } from "./to-graphology.js";
 export type { CsvCell } from "./write/encode-csv.js";
-export { encodeCell, encodeCsv } from "./write/encode-csv.js";
+export { encodeCell, encodeCsv, encodeCsvChunks } from "./write/encode-csv.js";
 export { encodeNpyBigInt64, encodeNpyStrings } from "./write/encode-npy-extra.js";
 export type { NpzArray, NpzEncodeOptions } from "./write/encode-npz.js";
 export { encodeNpz } from "./write/encode-npz.js";

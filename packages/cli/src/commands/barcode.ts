@@ -9,6 +9,7 @@ import {
   thresholdSubgraph,
   type WeightedGraph,
 } from "@cliquescape/core";
+import { encodeCsv } from "@cliquescape/io";
 import { Command, Option } from "commander";
 import { loadGraph } from "../load-graph.js";
 import { addComplexOptions, complexOptionsOf, homologyDimOf } from "../options/complex-options.js";
@@ -23,7 +24,6 @@ import { addOutputOptions, type OutputFormat } from "../options/output-options.j
 import { addSpecOption, specOf } from "../options/spec-option.js";
 import { specAxis } from "../options/threshold-options.js";
 import { renderBarcodeTable } from "../render/barcode-table.js";
-import { csvDocument } from "../render/csv.js";
 import { startGraphWork } from "../work-progress.js";
 
 /** One bar as `barcode --format json` prints it. Stable: later versions only add fields. */
@@ -167,7 +167,7 @@ export function renderBarcode(report: BarcodeReport, format: OutputFormat): stri
     return `${fields},\n  "bars": [\n${lines}\n  ]\n}\n`;
   }
   if (format === "csv") {
-    return csvDocument(
+    return encodeCsv(
       ["bar", "dim", "birth", "death", "cycle"],
       report.bars.map((bar, i) => [
         i,

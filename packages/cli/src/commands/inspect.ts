@@ -6,6 +6,7 @@ import {
   edgeCount,
   thresholdSubgraph,
 } from "@cliquescape/core";
+import { encodeCsv } from "@cliquescape/io";
 import { Command } from "commander";
 import { barcodeWithinBudget } from "../barcode-within-budget.js";
 import { loadGraph } from "../load-graph.js";
@@ -14,7 +15,6 @@ import { addGraphOptions, GRAPH_FILE_HELP, graphOptionsOf } from "../options/gra
 import { addOutputOptions, type OutputFormat } from "../options/output-options.js";
 import { addSpecOption, specOf } from "../options/spec-option.js";
 import { addSingleThresholdOptions, gridOf, thresholdChoiceOf } from "../options/threshold-options.js";
-import { csvDocument } from "../render/csv.js";
 import { formatCount, formatWeight } from "../render/format-number.js";
 import { keyValueLines, textTable } from "../render/text-table.js";
 import { startGraphWork } from "../work-progress.js";
@@ -115,7 +115,7 @@ export function renderInspect(report: InspectReport, format: OutputFormat): stri
   const dims = report.counts.map((_, k) => k);
   const bettiDims = (report.betti ?? []).map((_, k) => k);
   if (format === "csv") {
-    return csvDocument(
+    return encodeCsv(
       [
         "file",
         "threshold",

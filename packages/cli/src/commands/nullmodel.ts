@@ -10,6 +10,7 @@ import {
   nullFeatureNames,
   nullFeatures,
 } from "@cliquescape/core";
+import { encodeCsv } from "@cliquescape/io";
 import { Command, Option } from "commander";
 import { runAsyncAction } from "../async-action.js";
 import { startProgress } from "../extract/progress.js";
@@ -27,7 +28,6 @@ import {
 import { addOutputOptions, type OutputFormat } from "../options/output-options.js";
 import { addSingleThresholdOptions, gridOf } from "../options/threshold-options.js";
 import { mapOnWorkers } from "../parallel/map-on-workers.js";
-import { csvDocument } from "../render/csv.js";
 import { formatWeight } from "../render/format-number.js";
 import { textTable } from "../render/text-table.js";
 
@@ -233,7 +233,7 @@ export function renderNullModel(report: NullModelReport, format: OutputFormat): 
     f.pTwoSided,
     f.samples,
   ]);
-  if (format === "csv") return csvDocument(columns, rows);
+  if (format === "csv") return encodeCsv(columns, rows);
   const at =
     report.threshold === null
       ? "every edge"

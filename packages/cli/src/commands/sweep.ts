@@ -9,6 +9,7 @@ import {
   thresholdSubgraph,
   type WeightedGraph,
 } from "@cliquescape/core";
+import { encodeCsv } from "@cliquescape/io";
 import { Command } from "commander";
 import { barcodeWithinBudget } from "../barcode-within-budget.js";
 import { loadGraph } from "../load-graph.js";
@@ -17,7 +18,6 @@ import { addGraphOptions, GRAPH_FILE_HELP, graphOptionsOf } from "../options/gra
 import { addOutputOptions, type OutputFormat } from "../options/output-options.js";
 import { addSpecOption, specOf } from "../options/spec-option.js";
 import { addGridOptions, gridChoiceOf, gridOf } from "../options/threshold-options.js";
-import { csvDocument } from "../render/csv.js";
 import { formatCount, formatWeight } from "../render/format-number.js";
 import { textTable } from "../render/text-table.js";
 import { startGraphWork } from "../work-progress.js";
@@ -116,13 +116,13 @@ Examples:
 
 export function renderSweep(report: SweepReport, format: OutputFormat): string {
   if (format === "json") return `${JSON.stringify(report)}\n`;
-  const top = Math.max(0, ...report.counts.map((row) => row.length - 1));
+  const top = report.counts.reduce((most, row) => Math.max(most, row.length - 1), 0);
   const dims = Array.from({ length: top + 1 }, (_, k) => k);
   const cell = (row: number[], k: number) => row[k] ?? 0;
   const betti = report.betti;
   const bettiDims = betti ? Array.from({ length: betti[0]?.length ?? 0 }, (_, k) => k) : [];
   if (format === "csv") {
-    return csvDocument(
+    return encodeCsv(
       [
         "threshold",
         "density",

@@ -1,5 +1,10 @@
-import { type DatasetEntry, type DatasetProblem, encodeNpz } from "@cliquescape/io";
-import { csvDocument } from "../render/csv.js";
+import {
+  type CsvCell,
+  type DatasetEntry,
+  type DatasetProblem,
+  encodeCsvChunks,
+  encodeNpz,
+} from "@cliquescape/io";
 import type { GraphFailure } from "./graph-failure.js";
 import { type GraphRecord, recordValues } from "./graph-record.js";
 
@@ -13,9 +18,10 @@ export interface ErrorRow {
 }
 
 export interface RunTables {
-  featuresCsv: string;
+  /** The text of features.csv in pieces (it may exceed the longest string V8 can hold); read it once. */
+  featuresCsv: Iterable<string>;
   featuresNpz: Uint8Array;
-  errorsCsv: string;
+  errorsCsv: Iterable<string>;
   /** Graphs in the tables. */
   rows: number;
   errors: ErrorRow[];
@@ -25,6 +31,7 @@ export interface RunTables {
  * The run's tables, built only from per-graph records and in dataset order, so their bytes depend on the
  * data and the spec alone (not on worker count or scheduling). Entries without a record yet (an
  * interrupted run) are simply absent; failed ones go to errors.csv after the dataset's own problems.
+ * Linear in the number of graphs, and with no call whose argument count grows with it.
  */
 export function assembleTables(
   entries: readonly DatasetEntry[],
@@ -49,18 +56,13 @@ export function assembleTables(
       throw new Error(`record of ${record.id} has ${values.length} values, expected ${F}`);
     X.set(values, i * F);
   });
-  const codes = done.map((record) => labelCode(record.label, labelNames));
+  const codeOf = labelCoder(labelNames);
+  const codes = done.map((record) => codeOf(record.label));
   // Whether the graph has simplices above topDim: its Euler columns are then partial sums (see docs).
   const truncated = done.map((record) => record.truncated ?? null);
-  const featuresCsv = csvDocument(
+  const featuresCsv = encodeCsvChunks(
     ["id", "label", "split", "truncated", ...featureNames],
-    done.map((record, i) => [
-      record.id,
-      record.label ?? "",
-      record.split ?? "",
-      truncated[i] === null ? "" : String(truncated[i]),
-      ...Array.from(X.subarray(i * F, (i + 1) * F)),
-    ]),
+    featureRows(done, truncated, X, F),
   );
   const featuresNpz = encodeNpz([
     { name: "X", dtype: "float64", shape: [done.length, F], values: X },
@@ -77,16 +79,45 @@ export function assembleTables(
       values: truncated.map((t) => (t === null ? -1 : t ? 1 : 0)),
     },
   ]);
-  const errorsCsv = csvDocument(
+  const errorsCsv = encodeCsvChunks(
     ["id", "file", "line", "column", "reason"],
-    errors.map((e) => [e.id, e.file, e.line ?? "", e.column ?? "", e.reason]),
+    errors.map((e) => [e.id, e.file, e.line, e.column, e.reason]),
   );
   return { featuresCsv, featuresNpz, errorsCsv, rows: done.length, errors };
 }
 
 /** Position of the label in the spec's label list; −1 for a graph without a label. */
 export function labelCode(label: string | null, labelNames: readonly string[]): number {
-  return label === null ? -1 : labelNames.indexOf(label);
+  return labelCoder(labelNames)(label);
+}
+
+/** labelCode for many graphs: one lookup table, so coding a million graphs stays linear. */
+export function labelCoder(labelNames: readonly string[]): (label: string | null) => number {
+  const codes = new Map<string, number>();
+  labelNames.forEach((name, k) => {
+    if (!codes.has(name)) codes.set(name, k);
+  });
+  return (label) => (label === null ? -1 : (codes.get(label) ?? -1));
+}
+
+// One row of features.csv at a time, as the writer asks for it.
+function* featureRows(
+  done: readonly GraphRecord[],
+  truncated: readonly (boolean | null)[],
+  X: Float64Array,
+  F: number,
+): Generator<CsvCell[]> {
+  for (let i = 0; i < done.length; i++) {
+    const record = done[i];
+    const row: CsvCell[] = [
+      record.id,
+      record.label ?? "",
+      record.split ?? "",
+      truncated[i] === null ? "" : String(truncated[i]),
+    ];
+    for (let j = 0; j < F; j++) row.push(X[i * F + j]);
+    yield row;
+  }
 }
 
 export function errorRow(id: string, failure: GraphFailure): ErrorRow {

@@ -42,8 +42,10 @@ export async function resolveSpec(
     throw new UsageError(`resolvedGrid: ${(error as Error).message}`);
   }
   const known = spec.labelNames ?? (sameRequest ? previous?.labelNames : undefined) ?? [];
-  const seen = [...new Set(dataset.entries.map((e) => e.label).filter((l): l is string => l !== null))];
-  const labelNames = [...known, ...seen.filter((label) => !known.includes(label)).sort()];
+  const knownSet = new Set(known);
+  const seen = new Set<string>();
+  for (const { label } of dataset.entries) if (label !== null && !knownSet.has(label)) seen.add(label);
+  const labelNames = [...known, ...[...seen].sort()];
   const anyDirected = dataset.entries.some(
     (entry) => readOptionsFor(entry, spec.preparation, spec.connectivity).directed,
   );

@@ -13,7 +13,7 @@ export function renderBarcodeTable(report: BarcodeReport): string {
   const sign = report.weights === "distance" ? 1 : -1;
   const finite = report.bars.flatMap((b) => (b.death === null ? [b.birth] : [b.birth, b.death]));
   const from = sign * report.start;
-  const to = Math.max(from, sign * report.end, ...finite.map((w) => sign * w));
+  const to = finite.reduce((most, w) => Math.max(most, sign * w), Math.max(from, sign * report.end));
   const column = (w: number) => Math.round(((sign * w - from) / (to - from || 1)) * (PICTURE_WIDTH - 1));
   const draw = (birth: number, death: number | null) => {
     const a = column(birth);

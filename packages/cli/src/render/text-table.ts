@@ -1,6 +1,7 @@
 /** Right-aligns numeric-looking cells, left-aligns the rest, two spaces between columns. */
 export function textTable(header: readonly string[], rows: readonly (readonly string[])[]): string {
-  const widths = header.map((h, c) => Math.max(h.length, ...rows.map((r) => r[c].length)));
+  // reduce, not Math.max(...): a sweep over 100,000 thresholds would overflow the call stack.
+  const widths = header.map((h, c) => rows.reduce((w, r) => Math.max(w, r[c].length), h.length));
   const numeric = header.map(
     (_, c) => rows.length > 0 && rows.every((r) => /^[-+]?[\d.,e∞]+$|^–$/.test(r[c])),
   );
@@ -14,6 +15,6 @@ export function textTable(header: readonly string[], rows: readonly (readonly st
 
 /** Key/value lines with the keys padded to one width. */
 export function keyValueLines(pairs: readonly (readonly [string, string])[]): string {
-  const width = Math.max(...pairs.map(([k]) => k.length));
+  const width = pairs.reduce((w, [k]) => Math.max(w, k.length), 0);
   return pairs.map(([k, v]) => `${k.padEnd(width)}  ${v}`).join("\n");
 }

@@ -9,17 +9,38 @@ export type CsvCell = string | number | boolean | null | undefined;
  * back to the same float64.
  */
 export function encodeCsv(header: readonly string[], rows: Iterable<readonly CsvCell[]>): string {
-  const lines = [header.map(encodeCell).join(",")];
+  let text = "";
+  for (const chunk of encodeCsvChunks(header, rows)) text += chunk;
+  return text;
+}
+
+// Rows are handed out in pieces of about this many characters.
+const CHUNK_CHARACTERS = 1 << 16;
+
+/**
+ * The text of encodeCsv in pieces, produced as `rows` are consumed: a table of a million rows is written
+ * to a file piece by piece (writeFileAtomic takes the pieces) and never exists as one string, which V8
+ * caps at about 2^29 characters.
+ */
+export function* encodeCsvChunks(
+  header: readonly string[],
+  rows: Iterable<readonly CsvCell[]>,
+): Generator<string> {
+  let chunk = `${header.map(encodeCell).join(",")}\n`;
   let k = 0;
   for (const row of rows) {
     if (row.length !== header.length) {
       throw new RangeError(`row ${k} has ${row.length} cells but the header has ${header.length}`);
     }
     // A lone empty cell would be a blank line, which readers skip.
-    lines.push(row.length === 1 && encodeCell(row[0]) === "" ? '""' : row.map(encodeCell).join(","));
+    chunk += row.length === 1 && encodeCell(row[0]) === "" ? '""\n' : `${row.map(encodeCell).join(",")}\n`;
     k++;
+    if (chunk.length >= CHUNK_CHARACTERS) {
+      yield chunk;
+      chunk = "";
+    }
   }
-  return `${lines.join("\n")}\n`;
+  yield chunk;
 }
 
 /** One cell, quoted when needed. */

@@ -23,21 +23,27 @@ export function encodeNpyStrings(
   shape: readonly number[] = [values.length],
 ): Uint8Array {
   checkCount(values.length, shape);
-  const codePoints = values.map((text, k) => {
-    const points = Array.from(text, (ch) => ch.codePointAt(0) as number);
-    if (points.includes(0)) throw new RangeError(`string ${k} contains U+0000, which numpy reads as padding`);
-    return points;
-  });
-  const width = Math.max(1, ...codePoints.map((points) => points.length));
+  // Two passes over the strings and no per-string arrays: a million ids cost no more than their text.
+  let width = 1;
+  for (let k = 0; k < values.length; k++) {
+    let points = 0;
+    for (const ch of values[k]) {
+      if (ch === "\u0000") throw new RangeError(`string ${k} contains U+0000, which numpy reads as padding`);
+      points++;
+    }
+    if (points > width) width = points;
+  }
   const header = npyHeader(`<U${width}`, shape);
   const out = new Uint8Array(header.length + values.length * width * 4);
   out.set(header);
   const view = new DataView(out.buffer);
-  codePoints.forEach((points, k) => {
-    points.forEach((point, c) => {
-      view.setUint32(header.length + (k * width + c) * 4, point, true);
-    });
-  });
+  for (let k = 0; k < values.length; k++) {
+    let at = header.length + k * width * 4;
+    for (const ch of values[k]) {
+      view.setUint32(at, ch.codePointAt(0) as number, true);
+      at += 4;
+    }
+  }
   return out;
 }
 

@@ -8,18 +8,26 @@ let counter = 0;
  * Writes a file so that readers see either the old content or the whole new content, never half of it:
  * the bytes go to a temporary file in the same folder (a rename is atomic only within one file system),
  * are flushed to disk, and the temporary file is renamed over the target. Missing folders are created.
+ * `data` may come in pieces (text or bytes), written as they are produced: a table larger than any one
+ * string or buffer can hold is written without ever being whole in memory.
  */
-export function writeFileAtomic(path: string, data: string | Uint8Array): void {
+export function writeFileAtomic(
+  path: string,
+  data: string | Uint8Array | Iterable<string | Uint8Array>,
+): void {
   const folder = dirname(path);
   mkdirSync(folder, { recursive: true });
   // Unique per process, worker thread and call, so concurrent writers never share a temporary file.
   const temporary = join(folder, `.${basename(path)}.${process.pid}.${threadId}.${counter++}.tmp`);
-  const bytes = typeof data === "string" ? Buffer.from(data, "utf8") : data;
+  const pieces = typeof data === "string" || data instanceof Uint8Array ? [data] : data;
   let fd: number | undefined;
   try {
     fd = openSync(temporary, "w");
-    let written = 0;
-    while (written < bytes.length) written += writeSync(fd, bytes, written, bytes.length - written);
+    for (const piece of pieces) {
+      const bytes = typeof piece === "string" ? Buffer.from(piece, "utf8") : piece;
+      let written = 0;
+      while (written < bytes.length) written += writeSync(fd, bytes, written, bytes.length - written);
+    }
     fsyncSync(fd);
     closeSync(fd);
     fd = undefined;

@@ -1,25 +1,25 @@
 import { parentPort } from "node:worker_threads";
 import { readDatasetConnectivity } from "@cliquescape/io";
 import { graphFailureOf } from "../extract/graph-failure.js";
+import { serveBatches } from "../extract/worker-batches.js";
 import type { ConnectReply, ConnectSetup, ConnectTask } from "./connect-messages.js";
 import { measureOptions, recordingOptions } from "./connectivity-spec.js";
 
 /*
- * Worker thread entry of `connect`: reads one recording per message and posts its connectivity matrix
- * back (transferred, not copied). It writes no files: the main thread writes every output in order.
+ * Worker thread entry of `connect`: reads the recordings of each batch and posts their connectivity
+ * matrices back (transferred, not copied). It writes no files: the main thread writes every output in order.
  */
 
 const port = parentPort;
 if (!port) throw new Error("connect-worker.js runs as a worker thread");
 let setup: ConnectSetup | null = null;
 
-port.on("message", (message: ConnectSetup | ConnectTask) => {
-  if (message.kind === "setup") {
+serveBatches<ConnectSetup, ConnectTask, ConnectReply>(port, {
+  setup: (message) => {
     setup = message;
-    return;
-  }
-  const reply = measure(message);
-  port.postMessage(reply, reply.ok ? [reply.values.buffer as ArrayBuffer] : []);
+  },
+  handle: measure,
+  transfer: (reply) => (reply.ok ? [reply.values.buffer as ArrayBuffer] : []),
 });
 
 function measure(task: ConnectTask): ConnectReply {

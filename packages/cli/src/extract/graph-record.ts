@@ -1,4 +1,4 @@
-import { existsSync, readFileSync } from "node:fs";
+import { readFileSync } from "node:fs";
 import type { GraphFailure } from "./graph-failure.js";
 
 /**
@@ -34,7 +34,7 @@ export function encodeRecord(record: GraphRecord): string {
 
 /** The record at `path`, or null when there is none or it cannot be read (it is then simply redone). */
 export function readRecord(path: string): GraphRecord | null {
-  if (!existsSync(path)) return null;
+  // One read, no existence check first: a resumed run of a million graphs asks a million times.
   try {
     return JSON.parse(readFileSync(path, "utf8")) as GraphRecord;
   } catch {

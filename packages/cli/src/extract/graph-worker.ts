@@ -5,30 +5,31 @@ import { graphFailureOf } from "./graph-failure.js";
 import { computeGraph } from "./graph-job.js";
 import { readPreparedGraph } from "./read-prepared-graph.js";
 import { strideSample } from "./weight-quantiles.js";
+import { serveBatches } from "./worker-batches.js";
 import type { WorkerProgress, WorkerReply, WorkerSetup, WorkerTask } from "./worker-messages.js";
 
 /*
- * Worker thread entry: computes one graph per message and posts the result back. It writes no files: the
- * main thread writes every output, so an interrupted run never leaves a file half-written by a worker.
+ * Worker thread entry: computes the graphs of each batch in order and posts the results back. It writes no
+ * files: the main thread writes every output, so an interrupted run never leaves a file half-written by a
+ * worker.
  */
 
 if (!parentPort) throw new Error("graph-worker.js runs as a worker thread");
 const port = parentPort;
 let setup: WorkerSetup | null = null;
 
-port.on("message", (message: WorkerSetup | WorkerTask) => {
-  if (message.kind === "setup") {
+const { flush } = serveBatches<WorkerSetup, WorkerTask, WorkerReply>(port, {
+  setup: (message) => {
     setup = message;
-    return;
-  }
-  const reply = handle(message);
-  const transfer: ArrayBuffer[] = [];
-  if (reply.kind === "sample" && reply.values) transfer.push(reply.values.buffer as ArrayBuffer);
-  if (reply.kind === "extract" && reply.outcome.ok) {
-    transfer.push(reply.outcome.values.buffer as ArrayBuffer);
-    if (reply.outcome.bundle) transfer.push(reply.outcome.bundle.buffer as ArrayBuffer);
-  }
-  port.postMessage(reply, transfer);
+  },
+  handle,
+  transfer: (reply) => {
+    if (reply.kind === "sample") return reply.values ? [reply.values.buffer as ArrayBuffer] : [];
+    if (!reply.outcome.ok) return [];
+    const buffers = [reply.outcome.values.buffer as ArrayBuffer];
+    if (reply.outcome.bundle) buffers.push(reply.outcome.bundle.buffer as ArrayBuffer);
+    return buffers;
+  },
 });
 
 function handle(task: WorkerTask): WorkerReply {
@@ -40,8 +41,11 @@ function handle(task: WorkerTask): WorkerReply {
     const work: WorkControl = {
       startedAt: Date.now(),
       ...(limit === null ? {} : { timeLimitMs: limit * 1000 }),
-      onProgress: (progress) =>
-        port.postMessage({ kind: "progress", index, progress } satisfies WorkerProgress),
+      // Replies held back go first: the pool then knows this graph is the one running.
+      onProgress: (progress) => {
+        flush();
+        port.postMessage({ kind: "progress", index, progress } satisfies WorkerProgress);
+      },
     };
     return {
       kind: "extract",

@@ -11,7 +11,7 @@ import {
 import { recordingOptions } from "../connect/connectivity-spec.js";
 import { UsageError } from "../options/graph-options.js";
 import { progressLine } from "../work-progress.js";
-import { assembleTables, type ErrorRow, labelCode, problemRow } from "./assemble-tables.js";
+import { assembleTables, type ErrorRow, labelCoder, problemRow } from "./assemble-tables.js";
 import { featureConfigOf } from "./graph-job.js";
 import { type GraphRecord, readRecord } from "./graph-record.js";
 import { hashInputs, hashOrNote } from "./input-hashes.js";
@@ -138,12 +138,13 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
     if (!slowest || slowest[1].elapsedMs < 2000) return undefined;
     return `${dataset.entries[slowest[0]].id}: ${progressLine(slowest[1])}`;
   };
+  const codeOf = labelCoder(spec.labelNames);
   const tasks = todo.map((i) => ({
     kind: "extract" as const,
     index: i,
     entry: dataset.entries[i],
     relativeFile: relativeFile(dataset.entries[i].file),
-    labelCode: labelCode(dataset.entries[i].label, spec.labelNames),
+    labelCode: codeOf(dataset.entries[i].label),
   }));
   const ended = await runOnWorkers(
     tasks,

@@ -30,3 +30,12 @@ export interface WorkerProgress {
 export type WorkerReply =
   | { kind: "sample"; index: number; values: Float64Array | null; failure: GraphFailure | null }
   | { kind: "extract"; index: number; outcome: GraphOutcome };
+
+/**
+ * Tasks for one worker, done in order (see worker-batches.ts). Answers come back as arrays of replies,
+ * gathered for at most a few tens of milliseconds.
+ */
+export interface WorkerBatch<Task = WorkerTask> {
+  kind: "batch";
+  tasks: Task[];
+}

@@ -1,9 +1,12 @@
 import { Worker } from "node:worker_threads";
 import type { WorkProgress } from "@cliquescape/core";
-import type { WorkerProgress, WorkerReply, WorkerSetup, WorkerTask } from "./worker-messages.js";
+import type { WorkerBatch, WorkerProgress, WorkerReply, WorkerSetup, WorkerTask } from "./worker-messages.js";
 
 /** The compiled worker script next to this file in dist/. */
 const WORKER_SCRIPT = new URL("./graph-worker.js", import.meta.url);
+
+/** Most tasks one message carries: enough that a million tiny graphs are not a million round trips. */
+const MAX_BATCH = 256;
 
 export interface PoolOptions<Task = WorkerTask, Reply = WorkerReply, Setup = WorkerSetup> {
   size: number;
@@ -22,10 +25,13 @@ export interface PoolOptions<Task = WorkerTask, Reply = WorkerReply, Setup = Wor
 }
 
 /**
- * Runs tasks on worker threads, one task per worker at a time, handing each reply to `onReply` in the order
- * replies arrive (the caller puts results in dataset order). A worker that dies (a crash, its heap limit)
- * or overruns the time limit answers its task with a failure and is replaced, so one pathological graph
- * cannot end or stall the run.
+ * Runs tasks on worker threads and hands each reply to `onReply` in the order replies arrive (the caller
+ * puts results in dataset order). Tasks go out in batches (worker-batches.ts), sized so that each worker
+ * gets several before the end and the last ones go singly, to even out the finish; answers come back at
+ * least every few tens of milliseconds. A worker that dies (a crash, its heap limit) is replaced and the
+ * unanswered tasks of its batch are run again one by one, so the one that killed it fails alone; a task
+ * still running well past the time limit is failed and its worker replaced. One pathological graph cannot
+ * end or stall the run.
  */
 export function runOnWorkers(
   tasks: readonly WorkerTask[],
@@ -45,7 +51,9 @@ export async function runOnWorkerScript<Task, Reply extends { kind: string }, Se
   const { signal, setup, failedReply, timeLimitSeconds } = options;
   if (tasks.length === 0) return "finished";
   let next = 0;
-  let pending = 0;
+  // Tasks whose worker died under them, waiting to be run alone.
+  const alone: Task[] = [];
+  let unanswered = tasks.length;
   const workers = new Set<Worker>();
   return new Promise((resolve) => {
     let settled = false;
@@ -55,55 +63,79 @@ export async function runOnWorkerScript<Task, Reply extends { kind: string }, Se
       for (const worker of workers) void worker.terminate();
       resolve(how);
     };
+    const takeBatch = (): Task[] => {
+      const retry = alone.shift();
+      if (retry !== undefined) return [retry];
+      const size = Math.max(1, Math.min(MAX_BATCH, Math.floor((tasks.length - next) / (8 * options.size))));
+      const batch = tasks.slice(next, next + size);
+      next += batch.length;
+      return batch;
+    };
     const start = () => {
       const worker = new Worker(script);
       workers.add(worker);
-      let task: Task | null = null;
+      // The batch being worked on; the first `answered` of it are done.
+      let inFlight: Task[] = [];
+      let answered = 0;
+      let ranAlone = false;
       let timer: NodeJS.Timeout | undefined;
-      const feed = () => {
-        if (signal.aborted) return settle("stopped");
-        if (next >= tasks.length) {
-          if (pending === 0) settle("finished");
-          return;
-        }
-        task = tasks[next++];
-        pending++;
-        worker.postMessage(task);
-        // Unreferenced: a finished or stopped run does not wait for the timer of an abandoned task.
+      // Restarted at each answer: it measures the task now running. Unreferenced: a finished or stopped
+      // run does not wait for the timer of an abandoned task.
+      const arm = () => {
+        clearTimeout(timer);
         if (timeLimitSeconds !== null) timer = setTimeout(overrun, hardLimitMs(timeLimitSeconds)).unref();
       };
-      // The worker is lost: its task fails with `message`, and a fresh worker takes its place.
-      const lose = (message: string) => {
+      const feed = () => {
+        if (signal.aborted) return settle("stopped");
+        if (unanswered === 0) return settle("finished");
+        ranAlone = alone.length > 0;
+        inFlight = takeBatch();
+        answered = 0;
+        if (inFlight.length === 0) return; // the other workers finish the last batches
+        worker.postMessage({ kind: "batch", tasks: inFlight } satisfies WorkerBatch<Task>);
+        arm();
+      };
+      const answer = (reply: Reply) => {
+        answered++;
+        unanswered--;
+        onReply(reply);
+      };
+      // The worker is lost. The task it was on fails with `message` when that task is known (it overran the
+      // time limit, ran alone, or was the last of its batch); the others of its batch go back to run alone.
+      // A fresh worker takes its place.
+      const lose = (message: string, blameFirst: boolean) => {
         clearTimeout(timer);
         workers.delete(worker);
         if (settled) return;
-        if (task) {
-          pending--;
-          onReply(failedReply(task, message));
-          task = null;
+        const left = inFlight.slice(answered);
+        inFlight = [];
+        if (left.length > 0 && (blameFirst || ranAlone || left.length === 1)) {
+          answer(failedReply(left[0], message));
+          left.shift();
         }
+        for (const task of left) alone.push(task);
         start();
       };
       const overrun = () => {
         void worker.terminate();
         lose(
           `still running ${Math.round(hardLimitMs(timeLimitSeconds as number) / 1000)} s after it started, past the time limit of ${timeLimitSeconds} s; the graph was abandoned (raise --time-limit, 0: no limit)`,
+          true,
         );
       };
       worker.postMessage(setup);
-      worker.on("message", (reply: Reply | WorkerProgress) => {
+      worker.on("message", (message: Reply[] | WorkerProgress) => {
         if (settled) return; // a stopped run writes nothing more
-        if (isProgress(reply)) {
-          options.onProgress?.(reply.index, reply.progress);
+        if (!Array.isArray(message)) {
+          options.onProgress?.(message.index, message.progress);
           return;
         }
+        for (const reply of message) answer(reply);
+        if (answered < inFlight.length) return arm();
         clearTimeout(timer);
-        pending--;
-        task = null;
-        onReply(reply);
         feed();
       });
-      worker.on("error", (error) => lose(`worker stopped: ${error.message}`));
+      worker.on("error", (error) => lose(`worker stopped: ${error.message}`, false));
       feed();
     };
     signal.addEventListener("abort", () => settle("stopped"), { once: true });
@@ -114,8 +146,4 @@ export async function runOnWorkerScript<Task, Reply extends { kind: string }, Se
 /** When a task past its time limit is given up: the limit plus a tenth, and at least 30 s more. */
 function hardLimitMs(timeLimitSeconds: number): number {
   return (timeLimitSeconds + Math.max(30, timeLimitSeconds / 10)) * 1000;
-}
-
-function isProgress(message: { kind: string }): message is WorkerProgress {
-  return message.kind === "progress";
 }

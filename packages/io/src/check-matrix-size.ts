@@ -8,13 +8,13 @@ export function checkMatrixSize(
   file: string,
   position: InputFilePosition = {},
 ): void {
-  const maxCells = options.maxCells ?? DEFAULT_MAX_CELLS;
-  if (n * n > maxCells) {
-    throw new InputFileError(
-      file,
-      "too-large",
-      `a ${n}×${n} matrix has ${n * n} cells, more than the limit of ${maxCells}; raise maxCells if you have the memory`,
-      position,
-    );
-  }
+  const problem = matrixSizeProblem(n, n, options.maxCells ?? DEFAULT_MAX_CELLS);
+  if (problem) throw new InputFileError(file, "too-large", problem, position);
+}
+
+/** Why a rows × cols matrix is over the cell limit, or undefined when it is not. */
+export function matrixSizeProblem(rows: number, cols: number, maxCells: number): string | undefined {
+  return rows * cols > maxCells
+    ? `a ${rows}×${cols} matrix has ${rows * cols} cells, more than the limit of ${maxCells}; raise maxCells if you have the memory`
+    : undefined;
 }

@@ -33,7 +33,12 @@ export { pickNpzArray, readNpzFile, readNpzMembers } from "./formats/read-npz.js
 export type { XmlGraphFormat, XmlGraphReadOptions } from "./formats/read-xml-graph.js";
 export { readXmlGraphFile } from "./formats/read-xml-graph.js";
 export type { ZipMemberInfo } from "./formats/zip-members.js";
-export { extractZipMembers, listZipMembers } from "./formats/zip-members.js";
+export {
+  checkZipMemberSize,
+  listZipMembers,
+  readZipMember,
+  readZipMemberPrefix,
+} from "./formats/zip-members.js";
 export { graphFeatureNames, graphFeatures } from "./graph-features.js";
 export type { GraphJson } from "./graph-json.js";
 export { graphFromJson, graphToJson } from "./graph-json.js";
@@ -50,8 +55,15 @@ export type { EdgeListTextOptions } from "./parse-edge-list.js";
 export { parseEdgeListText } from "./parse-edge-list.js";
 export type { ByteGraphFormat, GraphBytesOptions, GraphBytesResult } from "./parse-graph-bytes.js";
 export { fileExtension, parseGraphBytes } from "./parse-graph-bytes.js";
-export type { NpyArray } from "./parse-npy.js";
-export { npyElementOffset, npyStrides, npyValues, parseNpy } from "./parse-npy.js";
+export type { NpyArray, NpyHeader } from "./parse-npy.js";
+export {
+  npyElementOffset,
+  npyHeaderEnd,
+  npyStrides,
+  npyValues,
+  parseNpy,
+  parseNpyHeader,
+} from "./parse-npy.js";
 export type { CellValue } from "./parse-number.js";
 export { classifyCell, looksNumeric } from "./parse-number.js";
 export { decodeText, readFileBytes } from "./read-file-bytes.js";

@@ -18,6 +18,7 @@ export type InputFileProblem =
   | "bad-npy"
   | "unsupported-dtype"
   | "truncated"
+  | "bad-checksum"
   // Time series (recordings read to compute connectivity):
   | "bad-shape"
   | "channel-count"

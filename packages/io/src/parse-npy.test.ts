@@ -84,10 +84,13 @@ describe("parseNpy: errors", () => {
       'a.npy: byte 68: header is not a valid dictionary: expected "}" but found the end of the header',
     );
     expect(failure(npyBytes("{'descr': '<f8', 'shape': (2, 2)}", [])).reason).toBe(
+      "header keys are 'descr', 'shape'; a .npy header has exactly 'descr', 'fortran_order' and 'shape' (numpy refuses any other set)",
+    );
+    expect(failure(npyBytes("{'descr': '<f8', 'fortran_order': 0, 'shape': (2, 2)}", [])).reason).toBe(
       "header has no 'fortran_order' True/False",
     );
     expect(failure(npyBytes("{'descr': '<f8', 'fortran_order': False, 'shape': (2, -1)}", [])).reason).toBe(
-      "header 'shape' is not a tuple of non-negative integers",
+      "header 'shape' (2, -1) is not a tuple of non-negative integers",
     );
   });
 

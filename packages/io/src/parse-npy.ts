@@ -2,6 +2,19 @@ import { InputFileError, type InputFileProblem } from "./input-file-error.js";
 import { type NpyDtype, parseDescr, readElement, SUPPORTED_DTYPES } from "./npy-dtype.js";
 import { PythonLiteralError, type PythonValue, parsePythonLiteral } from "./python-literal.js";
 
+/** What a .npy header says: everything but the data. */
+export interface NpyHeader {
+  /** Format version as "major.minor". */
+  version: string;
+  dtype: NpyDtype;
+  fortranOrder: boolean;
+  shape: number[];
+  /** Byte offset of the first element: the header's length. */
+  dataOffset: number;
+  /** Bytes of data the shape and dtype call for. */
+  dataBytes: number;
+}
+
 /** A .npy array, not yet copied: elements are read from `bytes` on demand. */
 export interface NpyArray {
   /** Format version as "major.minor". */
@@ -18,12 +31,52 @@ export interface NpyArray {
 
 // NumPy format specification (NEP 1): the magic string is \x93NUMPY, then major and minor version bytes.
 const MAGIC = [0x93, 0x4e, 0x55, 0x4d, 0x50, 0x59];
+// The keys numpy writes and requires, no more and no fewer (numpy.lib.format reads nothing else).
+const HEADER_KEYS = ["descr", "fortran_order", "shape"];
 
 /**
  * Parses the header of a .npy file (format versions 1.0, 2.0 and 3.0 of the NumPy format specification)
  * and checks that the data the header promises is all there, before anything is allocated.
  */
 export function parseNpy(bytes: Uint8Array, file: string): NpyArray {
+  const header = parseNpyHeader(bytes, file);
+  const available = bytes.length - header.dataOffset;
+  if (header.dataBytes > available) {
+    throw new InputFileError(
+      file,
+      "truncated",
+      `file is truncated: shape (${header.shape.join(", ")}) of ${header.dtype.descr} needs ${header.dataBytes} bytes of data after ` +
+        `byte ${header.dataOffset}, but only ${available} are there`,
+      { byteOffset: bytes.length },
+    );
+  }
+  return {
+    version: header.version,
+    dtype: header.dtype,
+    fortranOrder: header.fortranOrder,
+    shape: header.shape,
+    dataOffset: header.dataOffset,
+    bytes,
+    trailingBytes: available - header.dataBytes,
+  };
+}
+
+/**
+ * Where the header of a .npy file ends (its data offset), from its first 12 bytes; undefined when they are
+ * too few or not a .npy start (parseNpyHeader then says what is wrong). Lets a reader fetch just the header.
+ */
+export function npyHeaderEnd(start: Uint8Array): number | undefined {
+  if (start.length < 10 || MAGIC.some((b, k) => start[k] !== b)) return undefined;
+  const view = new DataView(start.buffer, start.byteOffset, start.byteLength);
+  if (start[6] === 1) return 10 + view.getUint16(8, true);
+  return start.length < 12 ? undefined : 12 + view.getUint32(8, true);
+}
+
+/**
+ * Parses and checks a .npy header, given at least the bytes up to its end (the data need not be there).
+ * The header must be a dict with exactly the keys descr, fortran_order and shape, as numpy requires.
+ */
+export function parseNpyHeader(bytes: Uint8Array, file: string): NpyHeader {
   const fail = (problem: InputFileProblem, reason: string, byteOffset?: number): never => {
     throw new InputFileError(file, problem, reason, byteOffset === undefined ? {} : { byteOffset });
   };
@@ -74,6 +127,14 @@ export function parseNpy(bytes: Uint8Array, file: string): NpyArray {
   if (header === null || typeof header !== "object" || Array.isArray(header)) {
     return fail("bad-npy", "header is not a dictionary", headerStart);
   }
+  const keys = Object.keys(header).sort();
+  if (keys.join("\u0000") !== HEADER_KEYS.join("\u0000")) {
+    fail(
+      "bad-npy",
+      `header keys are ${keys.length === 0 ? "none" : keys.map((k) => `'${k}'`).join(", ")}; a .npy header has exactly 'descr', 'fortran_order' and 'shape' (numpy refuses any other set)`,
+      headerStart,
+    );
+  }
   const { descr, fortran_order: fortranOrder, shape } = header;
   if (typeof descr !== "string") {
     const what = Array.isArray(descr)
@@ -92,11 +153,21 @@ export function parseNpy(bytes: Uint8Array, file: string): NpyArray {
   }
   if (typeof fortranOrder !== "boolean")
     fail("bad-npy", "header has no 'fortran_order' True/False", headerStart);
-  if (
-    !Array.isArray(shape) ||
-    !shape.every((d) => typeof d === "number" && Number.isSafeInteger(d) && d >= 0)
-  ) {
-    return fail("bad-npy", "header 'shape' is not a tuple of non-negative integers", headerStart);
+  if (!Array.isArray(shape)) return fail("bad-npy", "header 'shape' is not a tuple", headerStart);
+  const shapeText = `(${shape.map(String).join(", ")}${shape.length === 1 ? "," : ""})`;
+  if (shape.some((d) => typeof d === "bigint" && d > 0n)) {
+    fail(
+      "too-large",
+      `header shape ${shapeText} has a dimension above 2^53: more data than any file can hold`,
+      headerStart,
+    );
+  }
+  if (!shape.every((d) => typeof d === "number" && Number.isSafeInteger(d) && d >= 0)) {
+    return fail(
+      "bad-npy",
+      `header 'shape' ${shapeText} is not a tuple of non-negative integers`,
+      headerStart,
+    );
   }
   const dims = shape as number[];
   // Multiply with a bound so a forged shape like (10**12, 10**12) is refused without overflow or allocation.
@@ -104,22 +175,8 @@ export function parseNpy(bytes: Uint8Array, file: string): NpyArray {
   for (const d of dims) {
     elements *= d;
     if (elements * dtype.size > Number.MAX_SAFE_INTEGER) {
-      fail(
-        "too-large",
-        `header shape (${dims.join(", ")}) describes more data than any file can hold`,
-        headerStart,
-      );
+      fail("too-large", `header shape ${shapeText} describes more data than any file can hold`, headerStart);
     }
-  }
-  const dataBytes = elements * dtype.size;
-  const available = bytes.length - dataOffset;
-  if (dataBytes > available) {
-    fail(
-      "truncated",
-      `file is truncated: shape (${dims.join(", ")}) of ${dtype.descr} needs ${dataBytes} bytes of data after ` +
-        `byte ${dataOffset}, but only ${available} are there`,
-      bytes.length,
-    );
   }
   return {
     version: `${major}.${minor}`,
@@ -127,8 +184,7 @@ export function parseNpy(bytes: Uint8Array, file: string): NpyArray {
     fortranOrder: fortranOrder as boolean,
     shape: dims,
     dataOffset,
-    bytes,
-    trailingBytes: available - dataBytes,
+    dataBytes: elements * dtype.size,
   };
 }
 

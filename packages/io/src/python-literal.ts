@@ -1,5 +1,15 @@
-/** The values a .npy header may hold: a Python literal of dicts, tuples, lists, strings, ints and booleans. */
-export type PythonValue = string | number | boolean | null | PythonValue[] | { [key: string]: PythonValue };
+/**
+ * The values a .npy header may hold: a Python literal of dicts, tuples, lists, strings, ints and booleans.
+ * Integers beyond 2^53 stay exact as bigint, so a forged shape is refused for what it is.
+ */
+export type PythonValue =
+  | string
+  | number
+  | bigint
+  | boolean
+  | null
+  | PythonValue[]
+  | { [key: string]: PythonValue };
 
 /** Thrown with the character offset in the literal where parsing failed. */
 export class PythonLiteralError extends Error {
@@ -10,10 +20,14 @@ export class PythonLiteralError extends Error {
   }
 }
 
+/** Deepest nesting read. numpy's own headers nest two levels (a dict holding a tuple). */
+export const MAX_LITERAL_DEPTH = 32;
+
 /**
  * Parses the small subset of Python literal syntax the .npy format uses for its header (NumPy format
- * specification, NEP 1: "a Python literal expression of a dictionary"). Tuples and lists both become arrays.
- * Never evaluates anything.
+ * specification, NEP 1: "a Python literal expression of a dictionary"). Tuples and lists both become arrays;
+ * dicts become objects without a prototype, so a key like `__proto__` is a key like any other. Never
+ * evaluates anything, and refuses nesting deeper than MAX_LITERAL_DEPTH instead of recursing without end.
  */
 export function parsePythonLiteral(text: string): PythonValue {
   let pos = 0;
@@ -48,24 +62,27 @@ export function parsePythonLiteral(text: string): PythonValue {
     }
   };
 
-  const value = (): PythonValue => {
+  const value = (depth: number): PythonValue => {
     skipSpace();
     const ch = text[pos];
+    if ((ch === "{" || ch === "(" || ch === "[") && depth >= MAX_LITERAL_DEPTH) {
+      fail(`nested more than ${MAX_LITERAL_DEPTH} levels deep`);
+    }
     if (ch === "{") {
       pos++;
-      const out: { [key: string]: PythonValue } = {};
+      const out: { [key: string]: PythonValue } = Object.create(null);
       sequence("}", () => {
-        const key = value();
+        const key = value(depth + 1);
         if (typeof key !== "string") fail("dictionary keys must be strings");
         expect(":");
-        out[key as string] = value();
+        out[key as string] = value(depth + 1);
       });
       return out;
     }
     if (ch === "(" || ch === "[") {
       pos++;
       const out: PythonValue[] = [];
-      sequence(ch === "(" ? ")" : "]", () => out.push(value()));
+      sequence(ch === "(" ? ")" : "]", () => out.push(value(depth + 1)));
       return out;
     }
     if (ch === "'" || ch === '"') {
@@ -76,16 +93,24 @@ export function parsePythonLiteral(text: string): PythonValue {
       pos = end + 1;
       return s;
     }
-    const word = /^(?:True|False|None|[+-]?\d+L?)/.exec(text.slice(pos, pos + 40));
-    if (!word) return fail(`unexpected ${describe()}`);
-    pos += word[0].length;
-    if (word[0] === "True") return true;
-    if (word[0] === "False") return false;
-    if (word[0] === "None") return null;
-    return Number(word[0].replace("L", ""));
+    const word = /^(?:True|False|None)/.exec(text.slice(pos, pos + 5));
+    if (word) {
+      pos += word[0].length;
+      return word[0] === "True" ? true : word[0] === "False" ? false : null;
+    }
+    const digits = /[+-]?\d+/y;
+    digits.lastIndex = pos;
+    const integer = digits.exec(text);
+    if (!integer) return fail(`unexpected ${describe()}`);
+    pos = digits.lastIndex;
+    if (text[pos] === "L") pos++; // Python 2's long suffix, in files written by old numpy
+    const exact = BigInt(integer[0]);
+    return exact >= BigInt(Number.MIN_SAFE_INTEGER) && exact <= BigInt(Number.MAX_SAFE_INTEGER)
+      ? Number(exact)
+      : exact;
   };
 
-  const result = value();
+  const result = value(0);
   skipSpace();
   if (pos < text.length) fail(`unexpected ${describe()} after the dictionary`);
   return result;

@@ -49,7 +49,7 @@ function readStack(file: string, variable: string | undefined, maxBytes: number 
     };
   }
   if (extension === ".npz") {
-    const array = pickNpzArray(readNpzMembers(file, maxBytes, variable), file, variable);
+    const array = pickNpzArray(readNpzMembers(file, maxBytes), file, variable);
     const place = { prefix: `array "${array.name}": `, byteOffsetsInFile: false };
     return { array, axis: 0, variable: array.name, place, warnings: [] };
   }

@@ -143,7 +143,7 @@ describe.skipIf(missing !== null)(
 
     it("lists every member and variable with its shape and type", () => {
       const members = readNpzMembers(join(dir, "named.npz"));
-      expect(members.map((m) => [m.name, m.array?.shape, m.array?.dtype.descr])).toEqual([
+      expect(members.map((m) => [m.name, m.header?.shape, m.header?.dtype.descr])).toEqual([
         ["ids", undefined, undefined], // a unicode array: not a matrix, not an error until it is asked for
         ["weights", [5, 5], "<f8"],
         ["other", [3, 3], "<f8"],

@@ -20,6 +20,26 @@ export const NUMERIC_DATA_TYPES: Record<number, Pick<NpyDtype, "kind" | "size">>
   13: { kind: "u", size: 8 }, // miUINT64
 };
 
+/** Whether a tag's type is one of the MAT-file data types (1–7, 9, 12–18; 8, 10 and 11 are reserved). */
+export function isMatDataType(type: number): boolean {
+  return (type >= 1 && type <= 7) || type === 9 || (type >= 12 && type <= 18);
+}
+
+/**
+ * The rows and columns of each matrix of a 2-D variable or a 3-D stack (MATLAB's n × n × k, or a numpy
+ * stack k × n × n saved by scipy: the first two dimensions differ and the last two agree).
+ */
+export function matrixDims(dims: readonly number[]): [number, number] | undefined {
+  if (dims.length === 2) return [dims[0], dims[1]];
+  if (dims.length !== 3) return undefined;
+  return stackAxisOf(dims) === 0 ? [dims[1], dims[2]] : [dims[0], dims[1]];
+}
+
+/** Which dimension of a 3-D variable counts the graphs: 0 for a numpy stack k × n × n, else 2. */
+export function stackAxisOf(dims: readonly number[]): 0 | 2 {
+  return dims[0] !== dims[1] && dims[1] === dims[2] ? 0 : 2;
+}
+
 /** MATLAB class names by mxCLASS number. */
 export const ARRAY_CLASSES: Record<number, string> = {
   1: "cell",

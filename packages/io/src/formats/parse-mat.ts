@@ -1,14 +1,17 @@
 import { Unzlib } from "fflate";
+import { matrixSizeProblem } from "../check-matrix-size.js";
 import { InputFileError, type InputFileProblem } from "../input-file-error.js";
 import type { NpyArray } from "../parse-npy.js";
-import { formatBytes } from "../read-options.js";
+import { DEFAULT_MAX_CELLS, formatBytes } from "../read-options.js";
 import {
   ARRAY_CLASSES,
   FLAG_COMPLEX,
   FLAG_LOGICAL,
+  isMatDataType,
   isNumericClass,
   MI_COMPRESSED,
   MI_MATRIX,
+  matrixDims,
   NUMERIC_DATA_TYPES,
 } from "./mat-types.js";
 
@@ -24,17 +27,31 @@ export interface MatVariable {
   byteOffset: number;
   /** The data as an array in Fortran (column-major) order; set for real numeric and logical variables. */
   array?: NpyArray;
+  /**
+   * Why a real numeric variable's data was not unpacked: its declared size is over the limits. Reading it
+   * raises this error; the other variables stay readable.
+   */
+  refused?: InputFileError;
 }
 
 const HEADER_BYTES = 128;
+// Enough inflated bytes to hold a variable's flags, dimensions and name, read before its data is unpacked.
+const MATRIX_HEADER_BYTES = 4096;
 const DATA_TYPE_NAMES: Record<number, string> = { 14: "miMATRIX", 15: "miCOMPRESSED" };
 
 /**
  * Parses a MATLAB Level 5 MAT-file (the format MATLAB writes with -v6 and -v7, and scipy.io.savemat),
  * following the MATLAB 7 MAT-File Format document: a 128-byte header, then data elements, each an
  * miMATRIX or an miCOMPRESSED (zlib) wrapper around one. `maxBytes` bounds the unpacked data as a whole.
+ * A compressed variable's header is unpacked first: one whose declared size passes `maxBytes`, or whose
+ * matrices pass `maxCells`, is listed with `refused` set and is never unpacked.
  */
-export function parseMat(bytes: Uint8Array, file: string, maxBytes: number): MatVariable[] {
+export function parseMat(
+  bytes: Uint8Array,
+  file: string,
+  maxBytes: number,
+  maxCells: number = DEFAULT_MAX_CELLS,
+): MatVariable[] {
   const fail = (problem: InputFileProblem, reason: string, byteOffset?: number): never => {
     throw new InputFileError(file, problem, reason, byteOffset === undefined ? {} : { byteOffset });
   };
@@ -73,17 +90,40 @@ export function parseMat(bytes: Uint8Array, file: string, maxBytes: number): Mat
   while (at < bytes.length) {
     const tag = readTag(fileView, at, littleEndian, file, 0);
     if (tag.type === MI_COMPRESSED) {
-      const inner = inflateBounded(
-        bytes.subarray(tag.dataStart, tag.dataStart + tag.size),
-        file,
-        at,
-        maxBytes - unpacked,
-      );
-      unpacked += inner.length;
-      const innerView = new DataView(inner.buffer, inner.byteOffset, inner.byteLength);
-      const innerTag = readTag(innerView, 0, littleEndian, file, at, "inside the compressed element");
-      if (innerTag.type === MI_MATRIX)
-        variables.push(readMatrix(inner, innerTag, littleEndian, file, at, false));
+      const packed = bytes.subarray(tag.dataStart, tag.dataStart + tag.size);
+      const head = inflateBounded(packed, file, at, MATRIX_HEADER_BYTES, false);
+      const headView = new DataView(head.buffer, head.byteOffset, head.byteLength);
+      const innerTag = readTag(headView, 0, littleEndian, file, at, "inside the compressed element", true);
+      if (innerTag.type === MI_MATRIX) {
+        const declared = innerTag.dataStart + innerTag.size;
+        const header =
+          innerTag.size > 0 ? readMatrixHeader(head, innerTag, littleEndian, file, at) : undefined;
+        // Only real numeric variables are ever read: the others are listed from their header alone.
+        const numeric = header && isNumericClass(header.classNumber) && !header.variable.complex;
+        const refused =
+          declared > maxBytes - unpacked
+            ? new InputFileError(
+                file,
+                "too-large",
+                `${header ? `variable "${header.variable.name}": ` : ""}a compressed variable unpacks to ${formatBytes(declared)}, more than the limit of ${formatBytes(maxBytes - unpacked)}; raise maxBytes if you have the memory`,
+                { byteOffset: at },
+              )
+            : header && oversizedMatrix(header, maxCells, file, at);
+        if (header && !numeric) {
+          variables.push(header.variable);
+        } else if (refused && header) {
+          variables.push({ ...header.variable, refused });
+        } else if (refused) {
+          throw refused;
+        } else {
+          const inner =
+            head.length < declared ? inflateBounded(packed, file, at, maxBytes - unpacked, true) : head;
+          unpacked += inner.length;
+          const innerView = new DataView(inner.buffer, inner.byteOffset, inner.byteLength);
+          const whole = readTag(innerView, 0, littleEndian, file, at, "inside the compressed element");
+          variables.push(readMatrix(inner, whole, littleEndian, file, at, false));
+        }
+      }
       // miCOMPRESSED data is not padded: the next element follows the compressed bytes directly.
       at = tag.dataStart + tag.size;
     } else {
@@ -102,8 +142,20 @@ interface Tag {
   next: number;
 }
 
-/** A data element's tag, long (8 bytes) or small (4 bytes, data in the next 4). */
-function readTag(view: DataView, at: number, le: boolean, file: string, fileOffset: number, where = ""): Tag {
+/**
+ * A data element's tag, long (8 bytes) or small (4 bytes, data in the next 4). A type that no MAT-file uses
+ * means the bytes are not MAT-file data at all (damaged, or random bytes after a valid header). `partial`
+ * accepts data that runs past the bytes at hand (a header read before its element is unpacked).
+ */
+function readTag(
+  view: DataView,
+  at: number,
+  le: boolean,
+  file: string,
+  fileOffset: number,
+  where = "",
+  partial = false,
+): Tag {
   const place = (offset: number) => (fileOffset === 0 ? { byteOffset: offset } : { byteOffset: fileOffset });
   const inside = where ? ` ${where}` : "";
   if (at + 8 > view.byteLength) {
@@ -115,12 +167,20 @@ function readTag(view: DataView, at: number, le: boolean, file: string, fileOffs
     );
   }
   const first = view.getUint32(at, le);
-  if (first >>> 16 !== 0) {
-    return { type: first & 0xffff, size: first >>> 16, dataStart: at + 4, next: at + 8 };
+  const small = first >>> 16 !== 0;
+  const type = small ? first & 0xffff : first;
+  if (!isMatDataType(type) || (small && first >>> 16 > 4)) {
+    throw new InputFileError(
+      file,
+      "bad-header",
+      `no MAT-file data element starts here${inside}: its tag (0x${first.toString(16).padStart(8, "0")}) names no MATLAB data type; the bytes are damaged or not MAT-file data`,
+      place(at),
+    );
   }
+  if (small) return { type, size: first >>> 16, dataStart: at + 4, next: at + 8 };
   const size = view.getUint32(at + 4, le);
   const dataStart = at + 8;
-  if (dataStart + size > view.byteLength) {
+  if (!partial && dataStart + size > view.byteLength) {
     const name = DATA_TYPE_NAMES[first] ?? `type ${first}`;
     throw new InputFileError(
       file,
@@ -130,6 +190,59 @@ function readTag(view: DataView, at: number, le: boolean, file: string, fileOffs
     );
   }
   return { type: first, size, dataStart, next: dataStart + Math.ceil(size / 8) * 8 };
+}
+
+/**
+ * An miMATRIX element's class, dimensions and name, from bytes that need not hold its data; undefined when
+ * they do not reach that far (a name or dimension list longer than MATRIX_HEADER_BYTES).
+ */
+function readMatrixHeader(
+  bytes: Uint8Array,
+  tag: Tag,
+  le: boolean,
+  file: string,
+  elementOffset: number,
+): { variable: MatVariable; classNumber: number } | undefined {
+  try {
+    const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+    const sub = (at: number) => readTag(view, at, le, file, elementOffset, "inside the compressed element");
+    const flagsTag = sub(tag.dataStart);
+    const flagWord = view.getUint32(flagsTag.dataStart, le);
+    const classNumber = flagWord & 0xff;
+    const flags = (flagWord >>> 8) & 0xff;
+    const dimsTag = sub(flagsTag.next);
+    const dims: number[] = [];
+    for (let k = 0; k < dimsTag.size / 4; k++) dims.push(view.getInt32(dimsTag.dataStart + 4 * k, le));
+    const nameTag = sub(dimsTag.next);
+    const name = new TextDecoder("latin1").decode(
+      bytes.subarray(nameTag.dataStart, nameTag.dataStart + nameTag.size),
+    );
+    const logical = (flags & FLAG_LOGICAL) !== 0;
+    const complex = (flags & FLAG_COMPLEX) !== 0;
+    const className = logical ? "logical" : (ARRAY_CLASSES[classNumber] ?? `class ${classNumber}`);
+    return { variable: { name, className, dims, complex, byteOffset: elementOffset }, classNumber };
+  } catch (error) {
+    if (error instanceof InputFileError && error.problem === "truncated") return undefined;
+    throw error;
+  }
+}
+
+/** The refusal of a real numeric variable whose matrices have more cells than `maxCells`, if it is one. */
+function oversizedMatrix(
+  header: { variable: MatVariable; classNumber: number },
+  maxCells: number,
+  file: string,
+  elementOffset: number,
+): InputFileError | undefined {
+  const { variable, classNumber } = header;
+  if (!isNumericClass(classNumber) || variable.complex || variable.dims.some((d) => d < 0)) return undefined;
+  const matrix = matrixDims(variable.dims);
+  const problem = matrix && matrixSizeProblem(matrix[0], matrix[1], maxCells);
+  return problem
+    ? new InputFileError(file, "too-large", `variable "${variable.name}": ${problem}`, {
+        byteOffset: elementOffset,
+      })
+    : undefined;
 }
 
 /** Reads an miMATRIX element's flags, dimensions, name and, for real numeric classes, its data. */
@@ -196,9 +309,15 @@ function readMatrix(
   return variable;
 }
 
-// Inflates in slices so that a small file declaring a huge variable stops at the limit, not at the
-// machine's memory.
-function inflateBounded(data: Uint8Array, file: string, elementOffset: number, limit: number): Uint8Array {
+// Inflates in slices. Whole: refused as soon as it passes `limit`, so a small file declaring a huge
+// variable stops at the limit, not at the machine's memory. Not whole: the first `limit` bytes only.
+function inflateBounded(
+  data: Uint8Array,
+  file: string,
+  elementOffset: number,
+  limit: number,
+  whole: boolean,
+): Uint8Array {
   const chunks: Uint8Array[] = [];
   let total = 0;
   const tooLarge = new InputFileError(
@@ -209,12 +328,13 @@ function inflateBounded(data: Uint8Array, file: string, elementOffset: number, l
   );
   const stream = new Unzlib((chunk) => {
     total += chunk.length;
-    if (total > limit) throw tooLarge;
+    if (whole && total > limit) throw tooLarge;
     chunks.push(chunk);
   });
-  const step = 1 << 16;
+  // A kilobyte of deflate unpacks to at most about a megabyte: small steps while only a header is wanted.
+  const step = whole ? 1 << 16 : 1 << 10;
   try {
-    for (let k = 0; k < data.length; k += step)
+    for (let k = 0; k < data.length && (whole || total < limit); k += step)
       stream.push(data.subarray(k, k + step), k + step >= data.length);
     if (data.length === 0) stream.push(data, true);
   } catch (error) {
@@ -226,12 +346,15 @@ function inflateBounded(data: Uint8Array, file: string, elementOffset: number, l
       { byteOffset: elementOffset },
     );
   }
-  if (chunks.length === 1) return chunks[0];
-  const out = new Uint8Array(total);
+  const length = whole ? total : Math.min(total, limit);
+  if (chunks.length === 1 && chunks[0].length === length) return chunks[0];
+  const out = new Uint8Array(length);
   let offset = 0;
   for (const chunk of chunks) {
-    out.set(chunk, offset);
-    offset += chunk.length;
+    if (offset >= length) break;
+    const piece = chunk.subarray(0, length - offset);
+    out.set(piece, offset);
+    offset += piece.length;
   }
   return out;
 }

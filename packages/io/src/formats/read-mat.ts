@@ -3,6 +3,7 @@ import type { GraphsReadResult } from "../npy-graphs.js";
 import type { NpyArray } from "../parse-npy.js";
 import { readFileBytes } from "../read-file-bytes.js";
 import { DEFAULT_MAX_NPY_BYTES, type GraphReadOptions } from "../read-options.js";
+import { stackAxisOf } from "./mat-types.js";
 import { arrayGraphs, type StackAxis } from "./matrix-stack.js";
 import { type MatVariable, parseMat } from "./parse-mat.js";
 
@@ -19,9 +20,16 @@ export interface MatMatrix {
   warnings: string[];
 }
 
-/** Reads a MAT-file's variables (see parseMat); `maxBytes` bounds the file and the unpacked data. */
-export function readMatVariables(path: string, maxBytes = DEFAULT_MAX_NPY_BYTES): MatVariable[] {
-  return parseMat(readFileBytes(path, maxBytes), path, maxBytes);
+/**
+ * Reads a MAT-file's variables (see parseMat); `maxBytes` bounds the file and the unpacked data, `maxCells`
+ * each matrix of a compressed variable, checked before it is unpacked.
+ */
+export function readMatVariables(
+  path: string,
+  maxBytes = DEFAULT_MAX_NPY_BYTES,
+  maxCells?: number,
+): MatVariable[] {
+  return parseMat(readFileBytes(path, maxBytes), path, maxBytes, maxCells);
 }
 
 /**
@@ -34,7 +42,8 @@ export function pickMatMatrix(variables: readonly MatVariable[], path: string, w
     .join(", ");
   // MATLAB stores scalars and vectors as 2-D (1×1, 1×n): a matrix candidate has every dimension ≥ 2.
   const candidates = variables.filter(
-    (v) => v.array && (v.dims.length === 2 || v.dims.length === 3) && v.dims.every((d) => d >= 2),
+    (v) =>
+      (v.array || v.refused) && (v.dims.length === 2 || v.dims.length === 3) && v.dims.every((d) => d >= 2),
   );
   let chosen: MatVariable | undefined;
   if (wanted !== undefined) {
@@ -46,6 +55,7 @@ export function pickMatMatrix(variables: readonly MatVariable[], path: string, w
         `the MAT-file has no variable "${wanted}"; its variables are: ${names || "none"}`,
       );
     }
+    if (chosen.refused) throw chosen.refused;
     if (!chosen.array) {
       const what = chosen.complex ? `complex ${chosen.className}` : chosen.className;
       throw new InputFileError(
@@ -68,14 +78,15 @@ export function pickMatMatrix(variables: readonly MatVariable[], path: string, w
       `the MAT-file has ${which}; name the one to read (variable option); its variables are: ${names || "none"}`,
     );
   }
+  if (chosen.refused) throw chosen.refused;
   const array = chosen.array as NpyArray;
   const warnings: string[] = [];
   const dims = chosen.dims;
   let axis: StackAxis = 2;
   if (dims.length === 3) {
     // MATLAB's own convention is n × n × k; numpy stacks saved by scipy arrive as k × n × n.
-    if (dims[0] !== dims[1] && dims[1] === dims[2]) axis = 0;
-    else if (dims[0] === dims[1] && dims[1] === dims[2]) {
+    axis = stackAxisOf(dims);
+    if (dims[0] === dims[1] && dims[1] === dims[2]) {
       warnings.push(
         `variable "${chosen.name}" is ${dims.join("×")}: read as ${dims[2]} graphs ${chosen.name}(:,:,k)`,
       );
@@ -92,7 +103,11 @@ export function readMatFile(
   path: string,
   options: MatReadOptions = {},
 ): GraphsReadResult & { variable: string } {
-  const matrix = pickMatMatrix(readMatVariables(path, options.maxBytes), path, options.variable);
+  const matrix = pickMatMatrix(
+    readMatVariables(path, options.maxBytes, options.maxCells),
+    path,
+    options.variable,
+  );
   const result = arrayGraphs(matrix.array, matrix.axis, path, options, {
     prefix: `variable "${matrix.name}": `,
     byteOffsetsInFile: false,

@@ -35,6 +35,13 @@ export function npyToGraphs(array: NpyArray, file: string, options: GraphReadOpt
   if (shape[shape.length - 2] !== n) {
     throw new InputFileError(file, "not-square", `matrices of shape ${shapeText} are not square`);
   }
+  if (n === 0 || k === 0) {
+    throw new InputFileError(
+      file,
+      "empty-file",
+      `array of shape ${shapeText} holds no ${k === 0 ? "matrices" : "nodes"}: there is no graph to read`,
+    );
+  }
   checkMatrixSize(n, options, file);
   if (options.labels && options.labels.length !== n) {
     throw new InputFileError(

@@ -181,9 +181,16 @@ describe("parseDenseMatrixText: errors name the file, line and cell", () => {
   });
 
   it("non-square matrices, both ways", () => {
-    expect(failure("0,1,2\n1,0,3\n").message).toBe("m.csv:2: matrix is not square: 2 rows but 3 columns");
+    expect(failure("0,1,2,4\n1,0,3,4\n").message).toBe("m.csv:2: matrix is not square: 2 rows but 4 columns");
+    expect(failure("0,1,1,1\n1,0,1,1\n2,3,0,1\n1,1,1,0\n0,0,0,0\n").message).toBe(
+      "m.csv:5: matrix is not square: more than 4 rows for 4 columns",
+    );
+    // Two or three columns without labels may be an edge list that lost its header: the message says so.
+    expect(failure("0,1,2\n1,0,3\n").message).toBe(
+      'm.csv:2: matrix is not square: 2 rows but 3 columns; if this file is an edge list (source, target, weight on each line), give it a header line such as "source,target,weight"',
+    );
     expect(failure("0,1\n1,0\n2,3\n").message).toBe(
-      "m.csv:3: matrix is not square: more than 2 rows for 2 columns",
+      'm.csv:3: matrix is not square: more than 2 rows for 2 columns; if this file is an edge list (source, target on each line), give it a header line such as "source,target"',
     );
   });
 
@@ -234,6 +241,41 @@ describe("parseDenseMatrixText: errors name the file, line and cell", () => {
   it("refuses a matrix above the cell limit before allocating it", () => {
     expect(failure("0,1,2\n1,0,3\n2,3,0\n", { maxCells: 8 }).message).toBe(
       "m.csv:1: a 3×3 matrix has 9 cells, more than the limit of 8; raise maxCells if you have the memory",
+    );
+  });
+});
+
+// Unclear cases of the audit of issue 8, each with the message and position a user sees.
+describe("parseDenseMatrixText: files that are not what they seem", () => {
+  it("a headerless 3-column edge list is refused, not read as a 3×3 matrix, directed or not", () => {
+    const list = "0 1 0.5\n1 2 0.7\n0 2 0.3\n";
+    const expected =
+      'm.csv:1: this looks like an edge list without a header line, not a 3×3 matrix: its first two columns hold node numbers and its diagonal is not constant. Give it a header line such as "source,target,weight"; if it is a matrix, write its diagonal (which is ignored) as 0 or leave it empty';
+    expect(failure(list).message).toBe(expected);
+    expect(failure(list).problem).toBe("bad-header");
+    // Before, the undirected read said "read it as directed", and the directed read took node numbers as weights.
+    expect(failure(list, { directed: true }).message).toBe(expected);
+    expect(failure("1,2\n2,3\n").message).toMatch(
+      /^m\.csv:1: this looks like an edge list .*"source,target"; /,
+    );
+    // A real matrix with node-number-like entries has a constant diagonal, and reads as before.
+    expect(edges("0,1,1\n1,0,2\n1,2,0\n")).toEqual(["0-1:1", "0-2:1", "1-2:2"]);
+    expect(edges("1,3,0.5\n3,1,0.7\n0.5,0.7,1\n")).toEqual(["0-1:3", "0-2:0.5", "1-2:0.7"]);
+  });
+
+  it("mixed tabs and spaces: the message says the separators are mixed", () => {
+    expect(failure("0\t1\t2\n1\t0 3\n2\t3\t0\n").message).toBe(
+      "m.csv:2: row has 2 cells but line 1 has 3; it separates cells with spaces where line 1 uses tabs: use one kind of separator throughout",
+    );
+    expect(failure("0\t1 2\t3\n1\t0\t3\n").message).toBe(
+      'm.csv:1:2: "1 2" is not a number; the line separates cells with spaces but the file with tabs: use one kind of separator throughout',
+    );
+  });
+
+  it("semicolon-separated with decimal commas: each cell is named, not half of it", () => {
+    const error = failure("0;0,5;0,25\n0,5;0;1\n0,25;1;0\n");
+    expect(error.message).toBe(
+      'm.csv:1:2: "0,5" is not a number; decimal commas are not read: write a decimal point (0.5)',
     );
   });
 });

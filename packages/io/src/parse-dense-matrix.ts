@@ -3,7 +3,7 @@ import { asymmetryReason } from "./asymmetry-reason.js";
 import { checkMatrixSize } from "./check-matrix-size.js";
 import { describePosition, InputFileError, type InputFilePosition } from "./input-file-error.js";
 import { nanCellsNote } from "./nan-cells-note.js";
-import { classifyCell, looksNumeric } from "./parse-number.js";
+import { classifyCell, looksNumeric, notANumberHint } from "./parse-number.js";
 import { type GraphReadOptions, nanIsNoEdge, negativePolicy, zeroIsEdge } from "./read-options.js";
 import { type Delimiter, detectDelimiter, type TextRow, tableRows } from "./text-rows.js";
 
@@ -36,7 +36,8 @@ export function parseDenseMatrixText(
   file: string,
   options: DenseMatrixTextOptions = {},
 ): GraphReadResult {
-  const { first: top, rest: rows } = tableRows(text, options.delimiter ?? detectDelimiter(text), file);
+  const delimiter = options.delimiter ?? detectDelimiter(text);
+  const { first: top, rest: rows } = tableRows(text, delimiter, file);
   let next: IteratorResult<TextRow> = { done: false, value: top };
   const labelRow = options.labelRow ?? isLabelRow(next.value.cells);
   let header: TextRow | undefined;
@@ -51,7 +52,7 @@ export function parseDenseMatrixText(
   const labelColumn =
     options.labelColumn ??
     ((header !== undefined && header.cells[0] === "" && header.cells.length === first.cells.length) ||
-      (first.cells[0] !== "" && !looksNumeric(first.cells[0])));
+      (first.cells[0] !== "" && !looksLikeData(first.cells[0])));
   const skip = labelColumn ? 1 : 0;
   const width = first.cells.length;
   const n = width - skip;
@@ -63,15 +64,22 @@ export function parseDenseMatrixText(
   let nans = 0;
   const values = new Float64Array(n * n);
   const lineOfRow = new Int32Array(n);
+  // The cells of a 2×2 or 3×3 table, as written: to tell a headerless edge list from a matrix.
+  const firstCells: string[][] = [];
   const rowLabels: string[] = [];
   let rowCount = 0;
   for (; !next.done; next = rows.next()) {
     const { line, cells } = next.value;
     if (cells.length !== width) {
+      const mixed =
+        delimiter === "\t" && cells.some((cell) => /\S[ ]+\S/.test(cell))
+          ? "; it separates cells with spaces where line " +
+            `${first.line} uses tabs: use one kind of separator throughout`
+          : "";
       throw new InputFileError(
         file,
         "ragged-row",
-        `row has ${cells.length} cells but line ${first.line} has ${width}`,
+        `row has ${cells.length} cells but line ${first.line} has ${width}${mixed}`,
         { line },
       );
     }
@@ -79,7 +87,7 @@ export function parseDenseMatrixText(
       throw new InputFileError(
         file,
         "not-square",
-        `matrix is not square: more than ${n} rows for ${n} columns`,
+        `matrix is not square: more than ${n} rows for ${n} columns${edgeListHint(n, header, labelColumn)}`,
         {
           line,
         },
@@ -87,13 +95,19 @@ export function parseDenseMatrixText(
     }
     const i = rowCount++;
     lineOfRow[i] = line;
+    if (n <= 3) firstCells.push(cells.slice(skip));
     if (labelColumn) rowLabels.push(cells[0]);
     for (let j = 0; j < n; j++) {
       const raw = cells[j + skip];
       const cell = classifyCell(raw);
       const at = () => ({ line, column: j + skip + 1 });
       if (cell.kind === "text") {
-        throw new InputFileError(file, "not-a-number", `${JSON.stringify(raw)} is not a number`, at());
+        throw new InputFileError(
+          file,
+          "not-a-number",
+          `${JSON.stringify(raw)} is not a number${notANumberHint(raw, delimiter)}`,
+          at(),
+        );
       }
       let w = Number.NaN;
       if (i !== j) {
@@ -118,8 +132,18 @@ export function parseDenseMatrixText(
     throw new InputFileError(
       file,
       "not-square",
-      `matrix is not square: ${rowCount} row${rowCount === 1 ? "" : "s"} but ${n} columns`,
+      `matrix is not square: ${rowCount} row${rowCount === 1 ? "" : "s"} but ${n} columns${edgeListHint(n, header, labelColumn)}`,
       { line: lineOfRow[rowCount - 1] },
+    );
+  }
+  if (header === undefined && !labelColumn && looksLikeEdgeList(n, firstCells)) {
+    throw new InputFileError(
+      file,
+      "bad-header",
+      `this looks like an edge list without a header line, not a ${n}×${n} matrix: its first two columns hold ` +
+        `node numbers and its diagonal is not constant. Give it a header line such as "source,target${n === 3 ? ",weight" : ""}"; ` +
+        "if it is a matrix, write its diagonal (which is ignored) as 0 or leave it empty",
+      { line: first.line },
     );
   }
 
@@ -163,10 +187,41 @@ export function parseDenseMatrixText(
   }
 }
 
+/** The hint that a 2- or 3-column table without labels may be an edge list missing its header line. */
+function edgeListHint(n: number, header: TextRow | undefined, labelColumn: boolean): string {
+  return n <= 3 && header === undefined && !labelColumn
+    ? `; if this file is an edge list (source, target${n === 3 ? ", weight" : ""} on each line), give it a header line such as "source,target${n === 3 ? ",weight" : ""}"`
+    : "";
+}
+
+/**
+ * A 2×2 or 3×3 table read as a matrix that is far likelier an edge list without its header: every row starts
+ * with two whole numbers ≥ 0 (node numbers) and the diagonal is not one value repeated, as a matrix's is
+ * in practice (0, 1 or empty). Refused rather than read as a matrix of node numbers.
+ */
+function looksLikeEdgeList(n: number, cells: readonly string[][]): boolean {
+  if (n < 2 || n > 3 || cells.length !== n) return false;
+  const nodeNumber = (cell: string) => /^\d+$/.test(cell);
+  if (!cells.every((row) => nodeNumber(row[0]) && nodeNumber(row[1]))) return false;
+  const diagonal = cells.map((row, i) => classifyCell(row[i]));
+  const same = (a: (typeof diagonal)[number], b: (typeof diagonal)[number]) =>
+    a.kind === b.kind && (!("value" in a) || !("value" in b) || Object.is(a.value, b.value));
+  return !diagonal.every((cell) => same(cell, diagonal[0]));
+}
+
 /** A label row names nodes: every cell after the first (which may be a corner cell) is non-numeric text. */
 function isLabelRow(cells: readonly string[]): boolean {
   const named = cells.length === 1 ? cells : cells.slice(1);
-  return named.every((cell) => cell !== "" && !looksNumeric(cell));
+  return named.every((cell) => cell !== "" && !looksLikeData(cell));
+}
+
+/**
+ * A cell that is meant as a number: one that reads as one, or a number written with a decimal comma
+ * ("0,5", refused later with a hint). Such cells are data, never labels: a semicolon file with decimal
+ * commas would otherwise pass for a labelled matrix one row and column smaller.
+ */
+function looksLikeData(cell: string): boolean {
+  return looksNumeric(cell) || /^[+-]?\d*,\d+$/.test(cell);
 }
 
 /**

@@ -159,3 +159,23 @@ describe("parseEdgeListText: errors", () => {
     );
   });
 });
+
+describe("parseEdgeListText: empty graphs and unclear weights", () => {
+  it("a header without edges is refused like an empty matrix file, unless a node list gives the nodes", () => {
+    const error = failure("# exported\nsource,target,weight\n");
+    expect(error.problem).toBe("empty-file");
+    expect(error.message).toBe(
+      "e.csv:2: the edge list has a header but no edges (and no node list): the graph would have no nodes",
+    );
+    expect(read("source,target,weight\n", { nodes: ["a", "b"] }).labels).toEqual(["a", "b"]);
+  });
+
+  it("semicolon-separated with decimal commas names the cell, and tabs mixed with spaces say so", () => {
+    expect(failure("source;target;weight\na;b;0,5\n").message).toBe(
+      'e.csv:2:3: "0,5" is not a number; decimal commas are not read: write a decimal point (0.5)',
+    );
+    expect(failure("source\ttarget\tweight\na\tb\t0.5 1\n").message).toBe(
+      'e.csv:2:3: "0.5 1" is not a number; the line separates cells with spaces but the file with tabs: use one kind of separator throughout',
+    );
+  });
+});

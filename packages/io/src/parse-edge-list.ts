@@ -2,7 +2,7 @@ import { fromEdgeList, GraphInputError } from "@cliquescape/core";
 import { type EdgeColumnNames, type EdgeColumns, findEdgeColumns } from "./edge-list-columns.js";
 import { InputFileError } from "./input-file-error.js";
 import type { GraphReadResult } from "./parse-dense-matrix.js";
-import { classifyCell } from "./parse-number.js";
+import { classifyCell, notANumberHint } from "./parse-number.js";
 import { type GraphReadOptions, nanIsNoEdge, negativePolicy, zeroIsEdge } from "./read-options.js";
 import { type Delimiter, detectDelimiter, type TextRow, tableRows } from "./text-rows.js";
 
@@ -27,7 +27,8 @@ export function parseEdgeListText(
   file: string,
   options: EdgeListTextOptions = {},
 ): GraphReadResult {
-  const { first: top, rest: rows } = tableRows(text, options.delimiter ?? detectDelimiter(text), file);
+  const delimiter = options.delimiter ?? detectDelimiter(text);
+  const { first: top, rest: rows } = tableRows(text, delimiter, file);
   const warnings: string[] = [];
   let next: IteratorResult<TextRow> = { done: false, value: top };
   let columns: EdgeColumns;
@@ -117,7 +118,12 @@ export function parseEdgeListText(
       const cell = classifyCell(raw);
       if (cell.kind === "empty") throw new InputFileError(file, "not-a-number", "weight cell is empty", at);
       if (cell.kind === "text") {
-        throw new InputFileError(file, "not-a-number", `${JSON.stringify(raw)} is not a number`, at);
+        throw new InputFileError(
+          file,
+          "not-a-number",
+          `${JSON.stringify(raw)} is not a number${notANumberHint(raw, delimiter)}`,
+          at,
+        );
       }
       if (cell.kind === "not-finite") {
         if (Number.isNaN(cell.value) && nanIsNoEdge(options)) {
@@ -144,6 +150,15 @@ export function parseEdgeListText(
   }
 
   if (nans > 0) warnings.push(`left out ${nans} edge${nans === 1 ? "" : "s"} whose weight is NaN`);
+  if (names.length === 0) {
+    // Like an empty matrix file: nothing to compute. With a node list, isolated nodes are a graph.
+    throw new InputFileError(
+      file,
+      "empty-file",
+      "the edge list has a header but no edges (and no node list): the graph would have no nodes",
+      { line: widthLine },
+    );
+  }
   const directed = options.directed ?? false;
   try {
     const graph = fromEdgeList({

@@ -208,3 +208,57 @@ describe("npyToGraphs", () => {
     ]);
   });
 });
+
+// Hostile and empty headers of the audit of issue 8. numpy.lib.format refuses a header whose keys are not
+// exactly descr, fortran_order and shape ("Header does not contain the correct keys"), recalled from its
+// source; the messages here are ours.
+describe("parseNpy: headers that must not be believed", () => {
+  it("a __proto__ key is a key like any other: refused for the keys, not read through the prototype", () => {
+    const header = "{'__proto__': {'descr': '<f8', 'fortran_order': False, 'shape': (2, 2)}}";
+    const error = failure(npyBytes(header, new Uint8Array(32)));
+    expect(error.problem).toBe("bad-npy");
+    expect(error.message).toBe(
+      "a.npy: byte 10: header keys are '__proto__'; a .npy header has exactly 'descr', 'fortran_order' and 'shape' (numpy refuses any other set)",
+    );
+    expect(({} as Record<string, unknown>).descr).toBeUndefined();
+    const extra = "{'descr': '<f8', 'fortran_order': False, 'shape': (2, 2), 'note': 'x'}";
+    expect(failure(npyBytes(extra, new Uint8Array(32))).reason).toMatch(
+      /^header keys are 'descr', 'fortran_order', 'note', 'shape'; /,
+    );
+  });
+
+  it("a header nested 200,000 levels deep is a clear error, not a stack overflow", () => {
+    const deep = `{'descr': ${"[".repeat(200_000)}${"]".repeat(200_000)}}`;
+    const bytes = npyBytes(deep, [], 2);
+    const error = failure(bytes);
+    expect(error.problem).toBe("bad-npy");
+    expect(error.message).toBe(
+      "a.npy: byte 53: header is not a valid dictionary: nested more than 32 levels deep",
+    );
+  });
+
+  it("shapes above 2^53 are too large, not 'not integers'; huge products too", () => {
+    const big = "{'descr': '<f8', 'fortran_order': False, 'shape': (18446744073709551617, 2), }";
+    const error = failure(npyBytes(big, []));
+    expect(error.problem).toBe("too-large");
+    expect(error.message).toBe(
+      "a.npy: byte 10: header shape (18446744073709551617, 2) has a dimension above 2^53: more data than any file can hold",
+    );
+    const long = `{'descr': '<f8', 'fortran_order': False, 'shape': (${"9".repeat(60)},), }`;
+    expect(failure(npyBytes(long, [])).problem).toBe("too-large");
+  });
+
+  it("(0, 0), (3, 0, 0) and (0, 3, 3) arrays hold no graph and are refused like an empty file", () => {
+    for (const [shape, what] of [
+      ["(0, 0)", "nodes"],
+      ["(3, 0, 0)", "nodes"],
+      ["(0, 3, 3)", "matrices"],
+    ]) {
+      const error = failure(npyBytes(`{'descr': '<f8', 'fortran_order': False, 'shape': ${shape}, }`, []));
+      expect(error.problem).toBe("empty-file");
+      expect(error.message).toBe(
+        `a.npy: array of shape ${shape} holds no ${what}: there is no graph to read`,
+      );
+    }
+  });
+});

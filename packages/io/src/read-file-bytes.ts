@@ -1,4 +1,4 @@
-import { readFileSync, statSync } from "node:fs";
+import { readFileSync, type Stats, statSync } from "node:fs";
 import { InputFileError } from "./input-file-error.js";
 import { checkByteSize } from "./read-options.js";
 
@@ -10,7 +10,8 @@ export function readFileBytes(path: string, maxBytes: number): Uint8Array {
   let size: number;
   try {
     const stat = statSync(path);
-    if (!stat.isFile()) throw new InputFileError(path, "unreadable", "not a regular file");
+    if (!stat.isFile())
+      throw new InputFileError(path, "unreadable", `not a regular file (${fileKind(stat)})`);
     size = stat.size;
   } catch (error) {
     if (error instanceof InputFileError) throw error;
@@ -34,4 +35,14 @@ export function readFileBytes(path: string, maxBytes: number): Uint8Array {
       { cause: error },
     );
   }
+}
+
+/** What a path that is not a regular file is, in words: "a directory", "a FIFO (named pipe)", … */
+export function fileKind(stat: Stats): string {
+  if (stat.isDirectory()) return "a directory";
+  if (stat.isFIFO()) return "a FIFO (named pipe)";
+  if (stat.isCharacterDevice()) return "a character device";
+  if (stat.isBlockDevice()) return "a block device";
+  if (stat.isSocket()) return "a socket";
+  return "not a file";
 }

@@ -92,7 +92,7 @@ describe("readGraphFile: file-level errors", () => {
   it("a directory", () => {
     const sub = join(dir, "sub.csv");
     mkdirSync(sub);
-    expect(failure(sub).message).toBe(`${sub}: not a regular file`);
+    expect(failure(sub).message).toBe(`${sub}: not a regular file (a directory)`);
   });
 
   it("empty files of each kind", () => {

@@ -20,7 +20,9 @@ function isSkipped(lineText: string, delimiter: Delimiter): boolean {
 
 /**
  * Guesses the delimiter from the first data line: a tab wins, then a comma, then a semicolon,
- * else whitespace. Tabs first because TSV label cells may contain commas.
+ * else whitespace. Tabs first because TSV label cells may contain commas. A line with semicolons whose
+ * every comma sits between two digits is semicolon-separated with decimal commas (spreadsheets in many
+ * locales): its delimiter is the semicolon, so that the cells, not their halves, are what gets refused.
  */
 export function detectDelimiter(text: string): Delimiter {
   let pos = 0;
@@ -30,6 +32,7 @@ export function detectDelimiter(text: string): Delimiter {
     const lineText = text.slice(pos, end);
     if (!isSkipped(lineText, "whitespace")) {
       if (lineText.includes("\t")) return "\t";
+      if (lineText.includes(";") && lineText.includes(",") && !/(?<!\d),|,(?!\d)/.test(lineText)) return ";";
       if (lineText.includes(",")) return ",";
       if (lineText.includes(";")) return ";";
       return "whitespace";

@@ -410,3 +410,32 @@ describe("hashFile", () => {
     expect(() => hashFile(join(root, "h"))).toThrow(/h: cannot read file: EISDIR/);
   });
 });
+
+// Manifests that say one thing and mean another (audit of issue 8): each problem names what is wrong.
+describe("manifests: unclear cases", () => {
+  it("a row naming a directory, a FIFO or a device is 'not a regular file', not 'file not found'", () => {
+    mkdirSync(join(root, "odd/folder.csv"), { recursive: true });
+    execFileSync("mkfifo", [join(root, "odd/pipe.csv")]);
+    const manifest = put(
+      "odd/manifest.csv",
+      "id,file\nd,folder.csv\np,pipe.csv\nn,/dev/null.csv\nz,/dev/zero\n",
+    );
+    expect(openDataset(manifest).problems.map(formatDatasetProblem)).toEqual([
+      `${manifest}:2:2: d: not a regular file (a directory): folder.csv (looked for ${join(root, "odd/folder.csv")})`,
+      `${manifest}:3:2: p: not a regular file (a FIFO (named pipe)): pipe.csv (looked for ${join(root, "odd/pipe.csv")})`,
+      `${manifest}:4:2: n: file not found: /dev/null.csv (looked for /dev/null.csv)`,
+      `${manifest}:5:2: z: cannot tell the format of "/dev/zero" from its extension`,
+    ]);
+    // Read directly, a device is named for what it is.
+    expect(errorOf(() => readGraphFile("/dev/null", { format: "dense-matrix" })).message).toBe(
+      "/dev/null: not a regular file (a character device)",
+    );
+  });
+
+  it("a tab-separated manifest named .csv is told to be renamed, not missing its id column", () => {
+    const manifest = put("tabbed/manifest.csv", "id\tfile\tlabel\ng1\tg1.csv\ta\n");
+    expect(errorOf(() => openDataset(manifest)).message).toBe(
+      `${manifest}:1: the header line is tab-separated, but a .csv manifest is read as comma-separated; name the file .tsv, or separate its columns with commas`,
+    );
+  });
+});

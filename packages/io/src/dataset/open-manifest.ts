@@ -1,7 +1,7 @@
 import { statSync } from "node:fs";
 import { dirname, extname, isAbsolute, resolve } from "node:path";
 import { InputFileError } from "../input-file-error.js";
-import { decodeText, readFileBytes } from "../read-file-bytes.js";
+import { decodeText, fileKind, readFileBytes } from "../read-file-bytes.js";
 import { DEFAULT_MAX_TEXT_BYTES } from "../read-options.js";
 import { type TextRow, textRows } from "../text-rows.js";
 import type { Dataset, DatasetEntry, DatasetProblem } from "./dataset-types.js";
@@ -72,6 +72,20 @@ function headerColumns(header: TextRow, manifest: string): Columns {
     const name = cell.toLowerCase() as KnownColumn;
     if ((KNOWN_COLUMNS as readonly string[]).includes(name)) known[name] = k;
   });
+  const only = header.cells.length === 1 ? header.cells[0] : "";
+  const other = only.includes("\t") ? "tab" : only.includes(";") ? "semicolon" : undefined;
+  if (other !== undefined && known.id === undefined) {
+    const extension = extname(manifest).toLowerCase();
+    throw new InputFileError(
+      manifest,
+      "bad-header",
+      `the header line is ${other}-separated, but a ${extension} manifest is read as ${extension === ".tsv" ? "tab" : "comma"}-separated; ` +
+        (other === "tab"
+          ? "name the file .tsv, or separate its columns with commas"
+          : "separate its columns with commas"),
+      { line: header.line },
+    );
+  }
   for (const required of ["id", "file"] as const) {
     if (known[required] === undefined) {
       throw new InputFileError(
@@ -121,8 +135,9 @@ function readRow(
     report(column("file"), `cannot tell the format of "${fileCell}" from its extension`, id);
     return undefined;
   }
-  if (!isFile(file)) {
-    report(column("file"), `file not found: ${fileCell} (looked for ${file})`, id);
+  const fileProblem = notARegularFile(file);
+  if (fileProblem) {
+    report(column("file"), `${fileProblem}: ${fileCell} (looked for ${file})`, id);
     return undefined;
   }
   const entry: DatasetEntry = {
@@ -146,8 +161,9 @@ function readRow(
   const coords = cell("coords");
   if (coords !== "") {
     const coordinatesFile = isAbsolute(coords) ? coords : resolve(folder, coords);
-    if (!isFile(coordinatesFile)) {
-      report(column("coords"), `coordinates file not found: ${coords} (looked for ${coordinatesFile})`, id);
+    const coordsProblem = notARegularFile(coordinatesFile);
+    if (coordsProblem) {
+      report(column("coords"), `coordinates ${coordsProblem}: ${coords} (looked for ${coordinatesFile})`, id);
       return undefined;
     }
     entry.coordinatesFile = coordinatesFile;
@@ -159,10 +175,13 @@ function readRow(
   return entry;
 }
 
-function isFile(path: string): boolean {
+/** Why `path` cannot be read as a file ("file not found", "not a regular file (a directory)"), or undefined. */
+function notARegularFile(path: string): string | undefined {
+  let stat: ReturnType<typeof statSync>;
   try {
-    return statSync(path).isFile();
+    stat = statSync(path);
   } catch {
-    return false;
+    return "file not found";
   }
+  return stat.isFile() ? undefined : `not a regular file (${fileKind(stat)})`;
 }

@@ -5,7 +5,7 @@
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { zlibSync } from "fflate";
+import { deflateSync, zlibSync } from "fflate";
 import { afterAll, describe, expect, it } from "vitest";
 import { InputFileError } from "../input-file-error.js";
 import { readGraphFile } from "../read-graph-file.js";
@@ -258,6 +258,107 @@ describe("bad .npz files", () => {
     expect(e.problem).toBe("bad-checksum");
     expect(e.message).toMatch(
       /forged\.npz: array "w": zip member w\.npy fails its CRC-32 check \(the archive says 0x[0-9a-f]{8}, its bytes give 0x[0-9a-f]{8}\): the file is damaged$/,
+    );
+  });
+});
+
+/** A zip (PKWARE APPNOTE 4.3) of one deflated member whose directory declares `size` bytes and `crc`. */
+function zipOfOneMember(name: string, deflated: Uint8Array, size: number, crc: number): Uint8Array {
+  const nameBytes = new TextEncoder().encode(name);
+  const local = new Uint8Array(30 + nameBytes.length);
+  const lv = new DataView(local.buffer);
+  lv.setUint32(0, 0x04034b50, true);
+  lv.setUint16(4, 20, true);
+  lv.setUint16(8, 8, true); // deflated
+  lv.setUint32(14, crc, true);
+  lv.setUint32(18, deflated.length, true);
+  lv.setUint32(22, size, true);
+  lv.setUint16(26, nameBytes.length, true);
+  local.set(nameBytes, 30);
+  const central = new Uint8Array(46 + nameBytes.length);
+  const cv = new DataView(central.buffer);
+  cv.setUint32(0, 0x02014b50, true);
+  cv.setUint16(4, 20, true);
+  cv.setUint16(6, 20, true);
+  cv.setUint16(10, 8, true);
+  cv.setUint32(16, crc, true);
+  cv.setUint32(20, deflated.length, true);
+  cv.setUint32(24, size, true);
+  cv.setUint16(28, nameBytes.length, true);
+  central.set(nameBytes, 46);
+  const end = new Uint8Array(22);
+  const ev = new DataView(end.buffer);
+  ev.setUint32(0, 0x06054b50, true);
+  ev.setUint16(8, 1, true);
+  ev.setUint16(10, 1, true);
+  ev.setUint32(12, central.length, true);
+  ev.setUint32(16, local.length + deflated.length, true);
+  return concat(local, deflated, central, end);
+}
+
+describe("declared sizes are checked before anything is unpacked", () => {
+  // Only the first bytes are really there: unpacking the whole member (or variable) would fail on the
+  // missing data, so the too-large error below can only come from the header, read first.
+  it(".npz: a member declaring an 11000×11000 float64 matrix is refused from its header", () => {
+    const header = "{'descr': '<f8', 'fortran_order': False, 'shape': (11000, 11000), }";
+    const text = `${header}${" ".repeat(128 - 10 - header.length - 1)}\n`;
+    const npy = new Uint8Array(128 + 4096);
+    npy.set([0x93, 0x4e, 0x55, 0x4d, 0x50, 0x59, 1, 0]);
+    new DataView(npy.buffer).setUint16(8, text.length, true);
+    npy.set(new TextEncoder().encode(text), 10);
+    const declared = 128 + 11000 * 11000 * 8;
+    const path = put("huge.npz", zipOfOneMember("w.npy", deflateSync(npy), declared, 0));
+    const e = errorOf(() => readGraphFile(path));
+    expect(e.problem).toBe("too-large");
+    expect(e.message).toBe(
+      `${path}: array "w": a 11000×11000 matrix has 121000000 cells, more than the limit of 67108864; raise maxCells if you have the memory`,
+    );
+  });
+
+  it(".mat: a compressed variable declaring an 11000×11000 double matrix is refused from its header", () => {
+    const le = true;
+    const sub = (type: number, data: Uint8Array, declared = data.length) => {
+      const out = new Uint8Array(8 + Math.ceil(data.length / 8) * 8);
+      new DataView(out.buffer).setUint32(0, type, le);
+      new DataView(out.buffer).setUint32(4, declared, le);
+      out.set(data, 8);
+      return out;
+    };
+    const flags = new Uint8Array(8);
+    new DataView(flags.buffer).setUint32(0, 6, le); // mxDOUBLE_CLASS
+    const dims = new Uint8Array(8);
+    new DataView(dims.buffer).setInt32(0, 11000, le);
+    new DataView(dims.buffer).setInt32(4, 11000, le);
+    const dataTag = new Uint8Array(8);
+    new DataView(dataTag.buffer).setUint32(0, 9, le); // miDOUBLE
+    new DataView(dataTag.buffer).setUint32(4, 11000 * 11000 * 8, le);
+    const body = concat(sub(6, flags), sub(5, dims), sub(1, new TextEncoder().encode("C")), dataTag);
+    const tag = new Uint8Array(8);
+    new DataView(tag.buffer).setUint32(0, 14, le);
+    new DataView(tag.buffer).setUint32(4, body.length + 11000 * 11000 * 8 - 0, le);
+    const packed = zlibSync(concat(tag, body, new Uint8Array(4096)));
+    const outer = new Uint8Array(8);
+    new DataView(outer.buffer).setUint32(0, 15, le);
+    new DataView(outer.buffer).setUint32(4, packed.length, le);
+    const header = matFile("M", 1, 1, [0], true, false).subarray(0, 128);
+    const path = put("huge.mat", concat(header, outer, packed));
+    const e = errorOf(() => readGraphFile(path));
+    expect(e.problem).toBe("too-large");
+    expect(e.message).toBe(
+      `${path}: byte 128: variable "C": a 11000×11000 matrix has 121000000 cells, more than the limit of 67108864; raise maxCells if you have the memory`,
+    );
+  });
+});
+
+describe("random bytes after a valid .mat header", () => {
+  it("are reported as no MAT-file data, not as a truncated file", () => {
+    const header = matFile("M", 1, 1, [0], true, false).subarray(0, 128);
+    const noise = new Uint8Array(64).map((_, k) => (k * 151 + 89) % 256);
+    const path = put("noise.mat", concat(header, noise));
+    const e = errorOf(() => readGraphFile(path));
+    expect(e.problem).toBe("bad-header");
+    expect(e.message).toMatch(
+      /noise\.mat: byte 128: no MAT-file data element starts here: its tag \(0x[0-9a-f]{8}\) names no MATLAB data type; the bytes are damaged or not MAT-file data$/,
     );
   });
 });

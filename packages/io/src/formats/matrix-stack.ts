@@ -101,6 +101,13 @@ export function arrayGraphs(
       (e) => e,
     );
   }
+  if (array.shape.length === 3 && graphCount(array, axis) === 0) {
+    throw new InputFileError(
+      file,
+      "empty-file",
+      `${place.prefix}array of shape (${array.shape.join(", ")}) holds no matrices: there is no graph to read`,
+    );
+  }
   for (let g = 0; g < graphCount(array, axis); g++) {
     const one = arrayGraph(array, axis, g, file, options, place);
     graphs.push(one.graph);

@@ -72,6 +72,22 @@ for name, g in [("und", G), ("dir", D)]:
     nx.write_graphml(g, f"{d}/{name}.graphml"); nx.write_gexf(g, f"{d}/{name}.gexf")
     out[name] = {"nodes": list(g.nodes()), "directed": g.is_directed(),
                  "edges": [[u, v, a["weight"], a.get("strength")] for u, v, a in g.edges(data=True)]}
+# A flipped bit, in a stored member's data or in the CRC-32 the central directory keeps for it: Python's
+# zipfile (under numpy.load) refuses both with BadZipFile; we must refuse them too.
+np.savez(f"{d}/flip-data.npz", w=m)
+np.savez(f"{d}/flip-crc.npz", w=m)
+for name, where in [("flip-data", "data"), ("flip-crc", "crc")]:
+    raw = bytearray(open(f"{d}/{name}.npz", "rb").read())
+    if where == "data":
+        raw[raw.index(b"\\x93NUMPY") + 128 + 8 * 7] ^= 0x01
+    else:
+        raw[raw.rindex(b"PK\\x01\\x02") + 16] ^= 0x01
+    open(f"{d}/{name}.npz", "wb").write(bytes(raw))
+    try:
+        np.load(f"{d}/{name}.npz")["w"]
+        out[name] = "loaded"
+    except Exception as e:
+        out[name] = type(e).__name__
 print(json.dumps(out))
 `;
 
@@ -140,6 +156,18 @@ describe.skipIf(missing !== null)(
         expectGraphEqualsMatrix(graph, expected[g], directed, key.includes("logical"));
       });
     });
+
+    it.each(["flip-data", "flip-crc"])(
+      "%s.npz: one flipped bit is refused, as numpy refuses it, by the member's CRC-32",
+      (name) => {
+        expect((cases as unknown as Record<string, string>)[name]).toBe("BadZipFile");
+        expect(() => readGraphFile(join(dir, `${name}.npz`))).toThrow(
+          new RegExp(
+            `${name}\\.npz: array "w": zip member w\\.npy fails its CRC-32 check \\(the archive says 0x[0-9a-f]{8}, its bytes give 0x[0-9a-f]{8}\\): the file is damaged$`,
+          ),
+        );
+      },
+    );
 
     it("lists every member and variable with its shape and type", () => {
       const members = readNpzMembers(join(dir, "named.npz"));

@@ -107,7 +107,12 @@ describe("GraphML and GEXF weights follow the text readers' number rules", () =>
     ["trailing text", one("1.5kg"), "not-a-number", 'edge "e1" (a -- b): weight "1.5kg" is not a number'],
     ["decimal comma", one("0,5"), "not-a-number", 'edge "e1" (a -- b): weight "0,5" is not a number'],
     ["infinity", one("INF"), "not-finite", 'edge "e1" (a -- b): weight "INF" is not a finite weight'],
-    ["-Infinity", one("-Infinity"), "not-finite", 'edge "e1" (a -- b): weight "-Infinity" is not a finite weight'],
+    [
+      "-Infinity",
+      one("-Infinity"),
+      "not-finite",
+      'edge "e1" (a -- b): weight "-Infinity" is not a finite weight',
+    ],
   ])("GraphML, %s weight", (_, edges, problem, reason) => {
     const path = put(`w-${problem}-${reason.length}.graphml`, graphml(edges));
     try {

@@ -11,6 +11,39 @@ import { readFeatureTable, SMALL_DATASET, similarityDataset, similarityMatrix } 
 import { matrixCsv, runCli } from "./run-cli.js";
 
 describe("extract --spec", () => {
+  // A spec edited by hand (or tampered with) is checked for meaning, not only for shape.
+  it.each([
+    [
+      "a grid from -1e308 to 1e308 (areas would be infinite)",
+      { grid: { kind: "weights", values: [1e308, -1e308] } },
+      "at grid.values: the values are so far apart that their difference overflows float64",
+    ],
+    [
+      "a resolved grid from -1e308 to 1e308",
+      { grid: { kind: "weights", values: [0.5] }, resolvedGrid: { kind: "weight", values: [1e308, -1e308] } },
+      "at resolvedGrid.values: the values are so far apart",
+    ],
+    [
+      "a label name listed twice (two codes for one label)",
+      { labelNames: ["alpha", "beta", "alpha"] },
+      'at labelNames.2: label "alpha" is listed twice (also at 0); each label has one code',
+    ],
+    [
+      "an undirected node layout for a dataset with directed graphs",
+      { grid: { kind: "weights", values: [0.5] }, nodeLayout: "undirected" },
+      /nodeLayout: the spec says "undirected", but graph b1 \(.*manifest\.csv:4\) is read as directed; every bundle of a run has the same node columns/,
+    ],
+  ])("refuses %s before computing anything", (_, spec, message) => {
+    const dir = similarityDataset(SMALL_DATASET);
+    writeFileSync(join(dir, "tampered.json"), JSON.stringify(spec));
+    const args = ["extract", join(dir, "manifest.csv"), "--out", join(dir, "run")];
+    const run = runCli([...args, "--spec", join(dir, "tampered.json")]);
+    expect(run.status).toBe(2);
+    if (typeof message === "string") expect(run.stderr).toContain(message);
+    else expect(run.stderr).toMatch(message);
+    expect(() => readFileSync(join(dir, "run", "spec.json"))).toThrow();
+  });
+
   it("names every invalid setting by its JSON path and writes nothing", () => {
     const dir = similarityDataset(SMALL_DATASET.slice(0, 2));
     writeFileSync(

@@ -46,12 +46,23 @@ export async function resolveSpec(
   const seen = new Set<string>();
   for (const { label } of dataset.entries) if (label !== null && !knownSet.has(label)) seen.add(label);
   const labelNames = [...known, ...[...seen].sort()];
-  const anyDirected = dataset.entries.some(
+  const directedEntry = dataset.entries.find(
     (entry) => readOptionsFor(entry, spec.preparation, spec.connectivity).directed,
   );
   const nodeLayout =
     spec.nodeLayout ??
     (sameRequest ? previous?.nodeLayout : undefined) ??
-    (anyDirected ? "directed" : "undirected");
+    (directedEntry ? "directed" : "undirected");
+  // A directed graph has no place in undirected node tables: refuse now, not graph by graph.
+  if (nodeLayout === "undirected" && directedEntry) {
+    const where =
+      directedEntry.declaredAt.line === undefined
+        ? ""
+        : ` (${directedEntry.declaredAt.file}:${directedEntry.declaredAt.line})`;
+    throw new UsageError(
+      `nodeLayout: the spec says "undirected", but graph ${directedEntry.id}${where} is read as directed; ` +
+        `every bundle of a run has the same node columns: set nodeLayout to "directed" or leave it out`,
+    );
+  }
   return { ...spec, resolvedGrid, labelNames, nodeLayout, toolVersion: VERSION };
 }

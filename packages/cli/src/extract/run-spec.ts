@@ -11,6 +11,29 @@ import { DEFAULT_TIME_LIMIT_SECONDS } from "../options/complex-options.js";
 
 const positiveInt = z.number().int().min(1);
 
+/**
+ * Threshold values whose spread fits a float64: curve areas and spacings are differences of thresholds,
+ * and a grid from -1e308 to 1e308 would give infinite areas and NaN (a tampered or mistyped spec).
+ */
+const thresholdValues = z
+  .array(z.number())
+  .min(1)
+  .refine(
+    (values) => {
+      let low = Infinity;
+      let high = -Infinity;
+      for (const v of values) {
+        if (v < low) low = v;
+        if (v > high) high = v;
+      }
+      return Number.isFinite(high - low);
+    },
+    {
+      message:
+        "the values are so far apart that their difference overflows float64 (about 1.8e308): curve areas would be infinite; use thresholds in the range of the weights",
+    },
+  );
+
 export const EDGE_TRANSFORMS = ["none", "one-minus", "neg-log", "reciprocal"] as const;
 
 export const PreparationSchema = z
@@ -64,7 +87,7 @@ export const ComplexSchema = z
 
 export const GridRequestSchema = z
   .discriminatedUnion("kind", [
-    z.strictObject({ kind: z.literal("weights"), values: z.array(z.number()).min(1) }),
+    z.strictObject({ kind: z.literal("weights"), values: thresholdValues }),
     z.strictObject({
       kind: z.literal("quantiles"),
       /** Number of thresholds, evenly spaced in weight between the two dataset-wide quantiles. */
@@ -79,7 +102,7 @@ export const GridRequestSchema = z
 /** The axis the grid resolved to: the exact values every feature column is read at. */
 export const ResolvedGridSchema = z.strictObject({
   kind: z.enum(["weight", "density"]),
-  values: z.array(z.number()).min(1),
+  values: thresholdValues,
   /** For a quantile grid: the weights at the two quantiles, over all edges of the dataset's first pass. */
   quantileWeights: z.tuple([z.number(), z.number()]).optional(),
   /** For a quantile grid: edges the first pass looked at (a sample when the dataset is very large). */
@@ -157,7 +180,22 @@ export const RunSpecSchema = z.strictObject({
   vectorisation: VectorisationSchema,
   outputs: OutputsSchema,
   /** Label names in code order (y = index); resolved from the dataset when absent. */
-  labelNames: z.array(z.string()).optional(),
+  labelNames: z
+    .array(z.string())
+    .superRefine((names, context) => {
+      const first = new Map<string, number>();
+      names.forEach((name, k) => {
+        const before = first.get(name);
+        if (before === undefined) first.set(name, k);
+        else
+          context.addIssue({
+            code: "custom",
+            path: [k],
+            message: `label ${JSON.stringify(name)} is listed twice (also at ${before}); each label has one code`,
+          });
+      });
+    })
+    .optional(),
   /**
    * Column layout of every bundle's node table; resolved from the dataset when absent: "directed" (in/out
    * degrees and strengths, participation as source and sink) when any graph is directed, so that every

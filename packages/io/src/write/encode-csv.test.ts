@@ -4,7 +4,7 @@ import { spawnSync } from "node:child_process";
 import { describe, expect, it } from "vitest";
 import { missingPythonModules, PYTHON } from "../../../../test/support/python.js";
 import { textRows } from "../text-rows.js";
-import { encodeCell, encodeCsv } from "./encode-csv.js";
+import { encodeCell, encodeCsv, encodeCsvChunks } from "./encode-csv.js";
 
 const missing = missingPythonModules(["csv"]);
 const header = ["id", "label", "x", "note"];
@@ -27,6 +27,23 @@ describe("encodeCsv", () => {
     expect(encodeCell(null)).toBe("");
     expect(encodeCsv(["a"], [[""], [null]])).toBe('a\n""\n""\n');
     expect(() => encodeCsv(["a", "b"], [["1"]])).toThrow("row 0 has 1 cells but the header has 2");
+  });
+
+  it("gives the same text in pieces, consuming the rows as it goes", () => {
+    let produced = 0;
+    function* many() {
+      for (let k = 0; k < 20000; k++) {
+        produced++;
+        yield [`g${k}`, "", "", k / 7];
+      }
+    }
+    const pieces = encodeCsvChunks(header, many());
+    const first = pieces.next();
+    expect(first.done).toBe(false);
+    expect(produced).toBeLessThan(20000);
+    const rest = [...pieces];
+    expect(rest.length).toBeGreaterThan(1);
+    expect(first.value + rest.join("")).toBe(encodeCsv(header, many()));
   });
 
   it("reads back through our text-rows reader", () => {

@@ -17,12 +17,30 @@ describe("writeFileAtomic", () => {
     expect(readdirSync(join(dir, "a", "b"))).toEqual(["out.csv"]);
   });
 
+  it("writes pieces of text and bytes in order", () => {
+    const path = join(dir, "pieces.txt");
+    writeFileAtomic(path, ["a,", new Uint8Array([0x62, 0x0a]), "ü\n"]);
+    expect(readFileSync(path, "utf8")).toBe("a,b\nü\n");
+  });
+
   it("on failure keeps the old file and removes the temporary one", () => {
     const target = join(dir, "taken");
     mkdirSync(join(target, "inside"), { recursive: true });
     // Renaming a file over a non-empty folder fails: the write must fail cleanly.
     expect(() => writeFileAtomic(target, "data")).toThrow();
     expect(existsSync(join(target, "inside"))).toBe(true);
+    expect(readdirSync(dir).filter((name) => name.endsWith(".tmp"))).toEqual([]);
+  });
+
+  it("when the pieces fail halfway, the old file stays and no temporary file is left", () => {
+    const path = join(dir, "kept.txt");
+    writeFileAtomic(path, "old\n");
+    function* failing() {
+      yield "new, ";
+      throw new RangeError("row 3 has 2 cells but the header has 4");
+    }
+    expect(() => writeFileAtomic(path, failing())).toThrow("row 3 has 2 cells");
+    expect(readFileSync(path, "utf8")).toBe("old\n");
     expect(readdirSync(dir).filter((name) => name.endsWith(".tmp"))).toEqual([]);
   });
 });

@@ -202,34 +202,62 @@ function readMatrixHeader(
   le: boolean,
   file: string,
   elementOffset: number,
-): { variable: MatVariable; classNumber: number } | undefined {
+): MatrixFields | undefined {
+  const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   try {
-    const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
-    const sub = (at: number) => readTag(view, at, le, file, elementOffset, "inside the compressed element");
-    const flagsTag = sub(tag.dataStart);
-    const flagWord = view.getUint32(flagsTag.dataStart, le);
-    const classNumber = flagWord & 0xff;
-    const flags = (flagWord >>> 8) & 0xff;
-    const dimsTag = sub(flagsTag.next);
-    const dims: number[] = [];
-    for (let k = 0; k < dimsTag.size / 4; k++) dims.push(view.getInt32(dimsTag.dataStart + 4 * k, le));
-    const nameTag = sub(dimsTag.next);
-    const name = new TextDecoder("latin1").decode(
-      bytes.subarray(nameTag.dataStart, nameTag.dataStart + nameTag.size),
+    return matrixFields(view, bytes, tag, le, file, elementOffset, (at) =>
+      readTag(view, at, le, file, elementOffset, "inside the compressed element"),
     );
-    const logical = (flags & FLAG_LOGICAL) !== 0;
-    const complex = (flags & FLAG_COMPLEX) !== 0;
-    const className = logical ? "logical" : (ARRAY_CLASSES[classNumber] ?? `class ${classNumber}`);
-    return { variable: { name, className, dims, complex, byteOffset: elementOffset }, classNumber };
   } catch (error) {
     if (error instanceof InputFileError && error.problem === "truncated") return undefined;
     throw error;
   }
 }
 
+interface MatrixFields {
+  variable: MatVariable;
+  classNumber: number;
+  logical: boolean;
+  /** Where the sub-element after the name (the real part's data) starts. */
+  next: number;
+}
+
+/** An miMATRIX element's array flags, dimensions and name: all that comes before its data. */
+function matrixFields(
+  view: DataView,
+  bytes: Uint8Array,
+  tag: Tag,
+  le: boolean,
+  file: string,
+  elementOffset: number,
+  sub: (at: number) => Tag,
+): MatrixFields {
+  const flagsTag = sub(tag.dataStart);
+  if (flagsTag.size < 8) {
+    throw new InputFileError(file, "bad-header", "array flags sub-element is shorter than 8 bytes", {
+      byteOffset: elementOffset,
+    });
+  }
+  const flagWord = view.getUint32(flagsTag.dataStart, le);
+  const classNumber = flagWord & 0xff;
+  const flags = (flagWord >>> 8) & 0xff;
+  const dimsTag = sub(flagsTag.next);
+  const dims: number[] = [];
+  for (let k = 0; k < dimsTag.size / 4; k++) dims.push(view.getInt32(dimsTag.dataStart + 4 * k, le));
+  const nameTag = sub(dimsTag.next);
+  const name = new TextDecoder("latin1").decode(
+    bytes.subarray(nameTag.dataStart, nameTag.dataStart + nameTag.size),
+  );
+  const logical = (flags & FLAG_LOGICAL) !== 0;
+  const complex = (flags & FLAG_COMPLEX) !== 0;
+  const className = logical ? "logical" : (ARRAY_CLASSES[classNumber] ?? `class ${classNumber}`);
+  const variable: MatVariable = { name, className, dims, complex, byteOffset: elementOffset };
+  return { variable, classNumber, logical, next: nameTag.next };
+}
+
 /** The refusal of a real numeric variable whose matrices have more cells than `maxCells`, if it is one. */
 function oversizedMatrix(
-  header: { variable: MatVariable; classNumber: number },
+  header: MatrixFields,
   maxCells: number,
   file: string,
   elementOffset: number,
@@ -263,25 +291,12 @@ function readMatrix(
   };
   if (tag.size === 0)
     return { name: "", className: "empty", dims: [0, 0], complex: false, byteOffset: elementOffset };
-  const flagsTag = sub(tag.dataStart);
-  if (flagsTag.size < 8) bad("array flags sub-element is shorter than 8 bytes");
-  const flagWord = view.getUint32(flagsTag.dataStart, le);
-  const classNumber = flagWord & 0xff;
-  const flags = (flagWord >>> 8) & 0xff;
-  const dimsTag = sub(flagsTag.next);
-  const dims: number[] = [];
-  for (let k = 0; k < dimsTag.size / 4; k++) dims.push(view.getInt32(dimsTag.dataStart + 4 * k, le));
-  const nameTag = sub(dimsTag.next);
-  const name = new TextDecoder("latin1").decode(
-    bytes.subarray(nameTag.dataStart, nameTag.dataStart + nameTag.size),
-  );
-  const logical = (flags & FLAG_LOGICAL) !== 0;
-  const complex = (flags & FLAG_COMPLEX) !== 0;
-  const className = logical ? "logical" : (ARRAY_CLASSES[classNumber] ?? `class ${classNumber}`);
-  const variable: MatVariable = { name, className, dims, complex, byteOffset: elementOffset };
+  const fields = matrixFields(view, bytes, tag, le, file, elementOffset, sub);
+  const { variable, classNumber, logical } = fields;
+  const { name, dims, complex } = variable;
   if (!isNumericClass(classNumber) || complex) return variable;
   if (dims.some((d) => d < 0)) bad(`variable "${name}" has a negative dimension (${dims.join("×")})`);
-  const dataTag = sub(nameTag.next);
+  const dataTag = sub(fields.next);
   if (dataTag.dataStart + dataTag.size > end)
     bad(`variable "${name}": its data runs past the end of its element`);
   const type = NUMERIC_DATA_TYPES[dataTag.type];

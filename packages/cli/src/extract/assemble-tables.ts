@@ -86,12 +86,10 @@ export function assembleTables(
   return { featuresCsv, featuresNpz, errorsCsv, rows: done.length, errors };
 }
 
-/** Position of the label in the spec's label list; −1 for a graph without a label. */
-export function labelCode(label: string | null, labelNames: readonly string[]): number {
-  return labelCoder(labelNames)(label);
-}
-
-/** labelCode for many graphs: one lookup table, so coding a million graphs stays linear. */
+/**
+ * The label code of a graph: the label's position in the spec's label list, −1 for a graph without a label.
+ * One lookup table for all graphs, so coding a million graphs stays linear.
+ */
 export function labelCoder(labelNames: readonly string[]): (label: string | null) => number {
   const codes = new Map<string, number>();
   labelNames.forEach((name, k) => {

@@ -3,7 +3,7 @@ import { asymmetryReason } from "./asymmetry-reason.js";
 import { checkMatrixSize } from "./check-matrix-size.js";
 import { describePosition, InputFileError, type InputFilePosition } from "./input-file-error.js";
 import { nanCellsNote } from "./nan-cells-note.js";
-import { classifyCell, looksNumeric, notANumberHint } from "./parse-number.js";
+import { classifyCell, isDecimalComma, looksNumeric, notANumberHint } from "./parse-number.js";
 import { type GraphReadOptions, nanIsNoEdge, negativePolicy, zeroIsEdge } from "./read-options.js";
 import { type Delimiter, detectDelimiter, type TextRow, tableRows } from "./text-rows.js";
 
@@ -221,7 +221,7 @@ function isLabelRow(cells: readonly string[]): boolean {
  * commas would otherwise pass for a labelled matrix one row and column smaller.
  */
 function looksLikeData(cell: string): boolean {
-  return looksNumeric(cell) || /^[+-]?\d*,\d+$/.test(cell);
+  return looksNumeric(cell) || isDecimalComma(cell);
 }
 
 /**

@@ -24,12 +24,17 @@ export function classifyCell(cell: string): CellValue {
   return { kind: "text" };
 }
 
+/** A number written with a decimal comma ("0,5", "-,25"): never read as a number, but never a label either. */
+export function isDecimalComma(cell: string): boolean {
+  return /^[+-]?\d*,\d+$/.test(cell);
+}
+
 /**
  * What a text cell that is not a number probably is, for the error message: a decimal comma, or numbers
  * separated by spaces inside a tab-separated line. Empty when there is nothing to add.
  */
 export function notANumberHint(cell: string, delimiter: string): string {
-  if (/^[+-]?\d*,\d+$/.test(cell)) return "; decimal commas are not read: write a decimal point (0.5)";
+  if (isDecimalComma(cell)) return "; decimal commas are not read: write a decimal point (0.5)";
   if (delimiter === "\t" && cell.split(/[ \t]+/).every((part) => DECIMAL.test(part))) {
     return "; the line separates cells with spaces but the file with tabs: use one kind of separator throughout";
   }

@@ -29,9 +29,8 @@ export interface PoolOptions<Task = WorkerTask, Reply = WorkerReply, Setup = Wor
  * puts results in dataset order). Tasks go out in batches (worker-batches.ts), sized so that each worker
  * gets several before the end and the last ones go singly, to even out the finish; answers come back at
  * least every few tens of milliseconds. A worker that dies (a crash, its heap limit) is replaced and the
- * unanswered tasks of its batch are run again one by one, so the one that killed it fails alone; a task
- * still running well past the time limit is failed and its worker replaced. One pathological graph cannot
- * end or stall the run.
+ * unanswered tasks of its batch are run again one by one, so the one that killed it fails alone; so is a
+ * worker whose task runs well past the time limit. One pathological graph cannot end or stall the run.
  */
 export function runOnWorkers(
   tasks: readonly WorkerTask[],
@@ -100,16 +99,16 @@ export async function runOnWorkerScript<Task, Reply extends { kind: string }, Se
         unanswered--;
         onReply(reply);
       };
-      // The worker is lost. The task it was on fails with `message` when that task is known (it overran the
-      // time limit, ran alone, or was the last of its batch); the others of its batch go back to run alone.
-      // A fresh worker takes its place.
-      const lose = (message: string, blameFirst: boolean) => {
+      // The worker is lost. The task it was on fails with `message` when that task is known (it ran alone, or
+      // was the last unanswered of its batch); otherwise every unanswered task of the batch goes back to run
+      // alone, where the one at fault fails again and is named. A fresh worker takes its place.
+      const lose = (message: string) => {
         clearTimeout(timer);
         workers.delete(worker);
         if (settled) return;
         const left = inFlight.slice(answered);
         inFlight = [];
-        if (left.length > 0 && (blameFirst || ranAlone || left.length === 1)) {
+        if (left.length > 0 && (ranAlone || left.length === 1)) {
           answer(failedReply(left[0], message));
           left.shift();
         }
@@ -120,7 +119,6 @@ export async function runOnWorkerScript<Task, Reply extends { kind: string }, Se
         void worker.terminate();
         lose(
           `still running ${Math.round(hardLimitMs(timeLimitSeconds as number) / 1000)} s after it started, past the time limit of ${timeLimitSeconds} s; the graph was abandoned (raise --time-limit, 0: no limit)`,
-          true,
         );
       };
       worker.postMessage(setup);
@@ -135,7 +133,7 @@ export async function runOnWorkerScript<Task, Reply extends { kind: string }, Se
         clearTimeout(timer);
         feed();
       });
-      worker.on("error", (error) => lose(`worker stopped: ${error.message}`, false));
+      worker.on("error", (error) => lose(`worker stopped: ${error.message}`));
       feed();
     };
     signal.addEventListener("abort", () => settle("stopped"), { once: true });

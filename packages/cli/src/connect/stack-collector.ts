@@ -46,7 +46,11 @@ export class StackCollector {
   /** The .npy bytes of the stack (null when no matrix went in) and the recordings in it, in order. */
   finish(): { bytes: Uint8Array | null; slots: number[]; n: number | null } {
     // An interrupted run may stop before the size is decided: the first waiting recording decides then.
-    if (this.n === null && this.waiting.size > 0) this.settle(Math.min(...this.waiting.keys()));
+    if (this.n === null && this.waiting.size > 0) {
+      let first = Number.POSITIVE_INFINITY;
+      for (const index of this.waiting.keys()) if (index < first) first = index;
+      this.settle(first);
+    }
     if (!this.stack) return { bytes: null, slots: [], n: this.n };
     const slots = [...this.slots].sort((a, b) => a - b);
     return { bytes: this.stack.finish(slots), slots, n: this.n };

@@ -61,7 +61,8 @@ export function rewireDegreePreserving(
       stratum[e] = lo; // the first threshold at which the edge is present (gridF.length: never)
     }
   }
-  const strata = Math.max(0, ...stratum) + 1;
+  // reduce, not Math.max(...stratum): a graph of a few hundred thousand edges would overflow the call stack.
+  const strata = stratum.reduce((most, s) => Math.max(most, s), 0) + 1;
   const start = new Int32Array(strata + 1);
   for (let e = 0; e < m; e++) start[stratum[e] + 1]++;
   for (let s = 0; s < strata; s++) start[s + 1] += start[s];

@@ -26,5 +26,7 @@ export default defineConfig({
     pool: "forks",
     env: { CLIQUESCAPE_PYTHON_SKIPS: pythonSkips },
     reporters: ["default", new PythonSkipsReporter(pythonSkips)],
+    // the core imports the generated WebAssembly kernel module: rebuild it first if its source changed
+    globalSetup: ["test/support/kernel-setup.ts"],
   },
 });

@@ -525,12 +525,28 @@ function passCheckpoint(depth: number): void {
 
 /** `depth` 1: the check after a root's top-level expansion, so that root is finished. */
 function fail(depth: number): never {
+  throw plainBudgetError(budget, cnt, rootOffsets, nRoots, rootIndex, depth === 1, capDim);
+}
+
+/**
+ * The error of a plain count stopped by its budget at root `root` (`finished`: its subtree is done), with
+ * the counts so far (cnt[k], trailing zeros dropped). Shared by the TypeScript and WebAssembly counters.
+ */
+export function plainBudgetError(
+  budget: number,
+  cnt: Float64Array,
+  offsets: Int32Array,
+  n: number,
+  root: number,
+  finished: boolean,
+  capDim: number,
+): SimplexBudgetError {
   let top = cnt.length - 1;
   while (top > 0 && cnt[top] === 0) top--;
   // vertices and edges were all counted up front; only roots with ≥ 2 neighbours add more
-  const progress = rootProgress(rootOffsets, nRoots, rootIndex, depth === 1, 2);
+  const progress = rootProgress(offsets, n, root, finished, 2);
   const upFront = cnt[0] + (capDim >= 1 ? cnt[1] : 0);
-  throw new SimplexBudgetError(budget, cnt.slice(0, top + 1), progress, upFront);
+  return new SimplexBudgetError(budget, cnt.slice(0, top + 1), progress, upFront);
 }
 
 /** Local bit matrices are d×d bits; refuse clearly rather than run out of memory on a huge hub. */

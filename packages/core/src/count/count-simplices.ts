@@ -8,6 +8,7 @@ import { resolveLimits } from "./count-limits.js";
 import { buildEnumerationGraph, reverseSlots } from "./enumeration-graph.js";
 import { eulerCharacteristic } from "./euler.js";
 import type { CountOptions, SimplexCounts } from "./types.js";
+import { countWithWasm } from "./wasm/wasm-counter.js";
 
 export interface CountSimplicesOptions extends CountOptions {
   /** Keep only edges present at this threshold (user units); no threshold = all edges. */
@@ -18,6 +19,12 @@ export interface CountSimplicesOptions extends CountOptions {
   participation?: boolean;
   /** Per-edge-slot counts per dimension. */
   edgeParticipation?: boolean;
+  /**
+   * Which implementation counts plain simplices (no participation): "webassembly" (64-bit words), or
+   * "typescript" (the reference). Default "auto": WebAssembly where the runtime provides it, TypeScript
+   * otherwise. Both give identical results.
+   */
+  kernel?: "auto" | "webassembly" | "typescript";
 }
 
 /**
@@ -43,7 +50,11 @@ export function countSimplices(graph: WeightedGraph, options: CountSimplicesOpti
   const participation = options.participation === true;
   const edgeParticipation = options.edgeParticipation === true;
   if (!participation && !edgeParticipation) {
-    const { counts, truncated } = countWithBitsets(g, maxDim, budget, monitor);
+    const kernel = options.kernel ?? "auto";
+    const plain =
+      (kernel === "typescript" ? null : countWithWasm(g, maxDim, budget, monitor)) ??
+      (kernel === "webassembly" ? kernelMissing() : countWithBitsets(g, maxDim, budget, monitor));
+    const { counts, truncated } = plain;
     return { counts, euler: eulerCharacteristic(counts), truncated };
   }
   const r = enumerateAnnotated(g, {
@@ -66,4 +77,10 @@ export function countSimplices(graph: WeightedGraph, options: CountSimplicesOpti
   }
   if (edgeParticipation) result.edgeParticipation = r.edges!;
   return result;
+}
+
+function kernelMissing(): never {
+  throw new Error(
+    "the WebAssembly counting kernel is not available here (kernel: 'webassembly' was asked for)",
+  );
 }

@@ -11,7 +11,8 @@
 // imported as "count-kernel" "passCheckpoint"
 declare function passCheckpoint(depth: i32): void;
 
-// Layout table the caller writes at address 0 (i32 each): see LAYOUT in wasm-counter.ts.
+// Layout table the caller (countWithWasm) writes at address 0: 13 addresses, capDim, undirected,
+// truncated, then the four-member table's address (i32 each).
 let offsetsPtr: usize = 0; // i32 × (n + 1): list start of each root
 let targetsPtr: usize = 0; // i32: list entries
 let markPtr: usize = 0; // i32 × n, all −1 between roots: local index of a vertex in the current list
@@ -25,10 +26,12 @@ let kidsPtr: usize = 0; // 64 × (set u64, size u64) per depth: children with �
 let cntPtr: usize = 0; // f64 × (capDim + 2): simplices per dimension
 let statePtr: usize = 0; // f64 × 3: simplices so far, next checkpoint, root being counted
 let binomPtr: usize = 0; // f64 × 65 × 65: C(c, t) at c * 65 + t
+let fourPtr: usize = 0; // u32 × 4096: simplices inside a set of four members, by its 12 arc bits
 let capDim: i32 = 0; // highest dimension counted
 let undirected: bool = false;
 let truncated: bool = false;
 let W: i32 = 1; // words per row of the current root universe
+let tablesAt: usize = 0; // where the binomial and four-member tables were filled (0: not yet)
 
 export function setup(): void {
   offsetsPtr = load<u32>(0);
@@ -47,6 +50,10 @@ export function setup(): void {
   capDim = load<i32>(52);
   undirected = load<i32>(56) !== 0;
   truncated = load<i32>(60) !== 0;
+  fourPtr = load<u32>(64);
+  if (tablesAt === binomPtr + fourPtr) return; // this instance filled them at the same place before
+  tablesAt = binomPtr + fourPtr;
+  fillFourTable();
   // Pascal's rule in doubles (exact up to C(56, 28); larger values exceed any budget anyway)
   for (let c = 0; c <= 64; c++) {
     store<f64>(binomPtr + ((<usize>c * 65) << 3), 1);
@@ -56,6 +63,36 @@ export function setup(): void {
       store<f64>(binomPtr + ((<usize>c * 65 + t) << 3), left + right);
     }
   }
+}
+
+/**
+ * For each of the 2^12 arc patterns among four members (bit 3i + j' for the arc from member i to its j'-th
+ * other member, in ascending order), the simplices they span beyond the members themselves: arcs (bits
+ * 0–7), ordered triples with all three arcs forward (bits 8–15) and ordered quadruples (bits 16–23).
+ */
+function fillFourTable(): void {
+  for (let mask = 0; mask < 4096; mask++) {
+    let arcs = 0;
+    let triples = 0;
+    let quads = 0;
+    for (let i = 0; i < 4; i++)
+      for (let j = 0; j < 4; j++) {
+        if (!arcIn(mask, i, j)) continue;
+        arcs++;
+        for (let k = 0; k < 4; k++) {
+          if (!arcIn(mask, i, k) || !arcIn(mask, j, k)) continue;
+          triples++;
+          for (let l = 0; l < 4; l++)
+            if (arcIn(mask, i, l) && arcIn(mask, j, l) && arcIn(mask, k, l)) quads++;
+        }
+      }
+    store<u32>(fourPtr + ((<usize>mask) << 2), arcs | (triples << 8) | (quads << 16));
+  }
+}
+
+function arcIn(mask: i32, i: i32, j: i32): bool {
+  if (i === j) return false;
+  return ((mask >> (i * 3 + (j < i ? j : j - 1))) & 1) !== 0;
 }
 
 export function isTruncated(): i32 {
@@ -163,8 +200,10 @@ function expandWord(rows: usize, stride: usize, cand: u64, depth: i32): void {
   addProduced(<f64>total);
   const deeper = depth + 2 <= capDim;
   const three = depth + 3 <= capDim;
+  const four = depth + 4 <= capDim;
   let pairs: u64 = 0;
   let triples: u64 = 0;
+  let quads: u64 = 0;
   for (let i: usize = 0; i < n; i++) {
     const e = at + (i << 4);
     const x = load<u64>(e);
@@ -199,6 +238,37 @@ function expandWord(rows: usize, stride: usize, cand: u64, depth: i32): void {
       triples += (ab & ac) * (bc + cb) + (ba & bc) * (ac + ca) + (ca & cb) * (ab + ba);
       continue;
     }
+    if (c === 4 && four) {
+      // four candidates: the three remaining levels from a table over their twelve arc bits
+      const a = <i32>ctz(x);
+      const r1 = x & (x - 1);
+      const b = <i32>ctz(r1);
+      const r2 = r1 & (r1 - 1);
+      const cc = <i32>ctz(r2);
+      const d = <i32>ctz(r2 & (r2 - 1));
+      const ra = load<u64>(rows + <usize>a * stride);
+      const rb = load<u64>(rows + <usize>b * stride);
+      const rc = load<u64>(rows + <usize>cc * stride);
+      const rd = load<u64>(rows + <usize>d * stride);
+      const index =
+        bit(ra, b) |
+        (bit(ra, cc) << 1) |
+        (bit(ra, d) << 2) |
+        (bit(rb, a) << 3) |
+        (bit(rb, cc) << 4) |
+        (bit(rb, d) << 5) |
+        (bit(rc, a) << 6) |
+        (bit(rc, b) << 7) |
+        (bit(rc, d) << 8) |
+        (bit(rd, a) << 9) |
+        (bit(rd, b) << 10) |
+        (bit(rd, cc) << 11);
+      const v = load<u32>(fourPtr + ((<usize>index) << 2));
+      pairs += v & 255;
+      triples += (v >> 8) & 255;
+      quads += v >> 16;
+      continue;
+    }
     if (undirected && isClique(rows, stride, x)) countClique(<i32>c, depth + 1);
     else expandWord(rows, stride, x, depth + 1);
   }
@@ -208,6 +278,10 @@ function expandWord(rows: usize, stride: usize, cand: u64, depth: i32): void {
     if (triples !== 0) {
       addCount(depth + 3, <f64>triples);
       addProduced(<f64>triples);
+      if (quads !== 0) {
+        addCount(depth + 4, <f64>quads);
+        addProduced(<f64>quads);
+      }
     }
   }
   checkpointAfter(depth);

@@ -29,7 +29,7 @@ export function countWithWasm(
   const capDim = Math.min(maxDim, dmax + 1);
   const levels = Math.min(dmax, capDim) + 4;
   // memory layout (byte offsets), 8-byte aligned; the table at 0 tells the kernel where each part is
-  const at = { next: 64 };
+  const at = { next: 72 };
   const take = (bytes: number) => {
     const start = at.next;
     at.next += Math.ceil(bytes / 8) * 8;
@@ -38,6 +38,7 @@ export function countWithWasm(
   const STATE = take(3 * 8);
   const BINOM = take(65 * 65 * 8);
   const MEMBER = take(3 * 64 * 4);
+  const FOUR = take(4096 * 4);
   const PACKED = take(64 * 8);
   const CNT = take((capDim + 2) * 8);
   const KIDS = take(levels * 1024);
@@ -77,7 +78,7 @@ export function countWithWasm(
     work.check(state[2] + 1);
     state[1] = Math.min(budget, state[0] + CHECK_EVERY);
   };
-  const table = new Int32Array(buf, 0, 16);
+  const table = new Int32Array(buf, 0, 17);
   table.set([
     OFFSETS,
     TARGETS,
@@ -96,6 +97,7 @@ export function countWithWasm(
   table[13] = capDim;
   table[14] = g.directed ? 0 : 1;
   table[15] = truncated ? 1 : 0;
+  table[16] = FOUR;
   kernel.setup();
   setKernelCheckpoint(passCheckpoint);
   try {

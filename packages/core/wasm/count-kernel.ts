@@ -320,6 +320,10 @@ function expandWide(rows: usize, Wc: i32, at: usize, depth: i32): void {
   const deeper = depth + 2 <= capDim;
   const rowBytes = (<usize>Wc) << 3;
   let total: u64 = 0;
+  // A child of c members has about c * c / size members of its own: packing costs c * c bit tests, which
+  // pays off only when the child's subtree goes a few levels deeper (sparse universes: it does not).
+  let size: u64 = 0;
+  for (let k = 0; k < Wc; k++) size += popcnt(load<u64>(at + ((<usize>k) << 3)));
   for (let w = 0; w < Wc; w++) {
     let bits = load<u64>(at + ((<usize>w) << 3));
     while (bits !== 0) {
@@ -354,7 +358,8 @@ function expandWide(rows: usize, Wc: i32, at: usize, depth: i32): void {
         const base = rows + <usize>(only << 6) * rowBytes + ((<usize>only) << 3);
         expandWord(base, rowBytes, load<u64>(next + ((<usize>only) << 3)), depth + 1);
       } else if (c === 2) settlePair(rows, Wc, next, depth);
-      else if (c <= 64) expandPacked(rows, Wc, next, <i32>c, depth + 1);
+      else if (c <= 64 && c * c >= 2 * size) expandPacked(rows, Wc, next, <i32>c, depth + 1);
+      else if (c <= 64) expandWide(rows, Wc, next, depth + 1);
       else if (rows === locPtr && Wc > ((<i32>c + 63) >> 6) + 1) expandRepacked(next, <i32>c, depth + 1);
       else expandWide(rows, Wc, next, depth + 1);
     }

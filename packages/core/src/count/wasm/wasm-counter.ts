@@ -1,5 +1,6 @@
 import type { WorkMonitor } from "../../work/work-monitor.js";
 import { type PlainCounts, plainBudgetError } from "../bitset-counter.js";
+import { writeBreadthFirstOrder } from "../breadth-first-order.js";
 import { CHECK_EVERY } from "../count-limits.js";
 import type { EnumerationGraph } from "../enumeration-graph.js";
 import { countKernel, discardKernel, setKernelCheckpoint } from "./count-kernel.js";
@@ -63,8 +64,16 @@ export function countWithWasm(
   const buf = kernel.memory.buffer;
   const cnt = new Float64Array(buf, CNT, capDim + 2).fill(0);
   const state = new Float64Array(buf, STATE, 3); // simplices so far, next checkpoint, current root
-  new Int32Array(buf, OFFSETS, n + 1).set(offsets.subarray(0, n + 1));
-  new Int32Array(buf, TARGETS, targets.length).set(targets);
+  const kernelOffsets = new Int32Array(buf, OFFSETS, n + 1);
+  const kernelTargets = new Int32Array(buf, TARGETS, targets.length);
+  if (g.directed) {
+    // roots and lists in breadth-first order, for locality (roots then count in that order)
+    writeBreadthFirstOrder(n, offsets, targets, kernelOffsets, kernelTargets);
+  } else {
+    // undirected: the degeneracy numbering must stay (rows hold later members only)
+    kernelOffsets.set(offsets.subarray(0, n + 1));
+    kernelTargets.set(targets);
+  }
   new Int32Array(buf, MARK, n).fill(-1);
   let truncated = false;
   cnt[0] = n;
@@ -74,7 +83,8 @@ export function countWithWasm(
   state[1] = 0;
   state[2] = -1;
   const passCheckpoint = (depth: number) => {
-    if (state[0] > budget) throw plainBudgetError(budget, cnt, offsets, n, state[2], depth === 1, capDim);
+    if (state[0] > budget)
+      throw plainBudgetError(budget, cnt, kernelOffsets, n, state[2], depth === 1, capDim);
     work.check(state[2] + 1);
     state[1] = Math.min(budget, state[0] + CHECK_EVERY);
   };

@@ -1,6 +1,6 @@
 // One benchmark measurement in its own process, so its peak memory (maxRSS) is its own.
 //   node measure.mjs generate NAME DIR        write DIR/NAME.txt (+ NAME.weights.json sidecar)
-//   node measure.mjs count FILE REPEAT         time countSimplices on all edges
+//   node measure.mjs count FILE REPEAT [KERNEL] time countSimplices on all edges (kernel: auto, webassembly, typescript)
 //   node measure.mjs sweep FILE THRESHOLDS     time sweepSimplexCounts on an even grid vs a plain count
 //   node measure.mjs yardstick BIN FILE REPEAT run the yardstick binary; its time_s and its CPU time
 // Prints one JSON line on stdout.
@@ -81,6 +81,7 @@ if (mode === "generate") {
   writeFileSync(file.replace(/\.txt$/, ".json"), JSON.stringify({ semantics: g.semantics, note: g.note }));
   console.log(JSON.stringify({ file, n: g.n, edges: g.sources.length, note: g.note }));
 } else if (mode === "count") {
+  const kernel = process.argv[5] ?? "auto";
   const { graph, csrSeconds } = loadGraph(a);
   const times = [];
   const cpu = [];
@@ -88,7 +89,7 @@ if (mode === "generate") {
   for (let i = 0; i < Number(b ?? 1); i++) {
     const t0 = performance.now();
     const c0 = cpuSeconds();
-    r = countSimplices(graph);
+    r = countSimplices(graph, { kernel });
     times.push(seconds(t0));
     cpu.push(cpuSeconds() - c0);
   }
@@ -156,7 +157,7 @@ if (mode === "generate") {
   console.log(JSON.stringify({ seconds: median(times), cpuSeconds: median(cpu), counts }));
 } else {
   console.error(
-    "usage: measure.mjs generate NAME DIR | count FILE [REPEAT] | sweep FILE [THRESHOLDS] | yardstick BIN FILE [REPEAT]",
+    "usage: measure.mjs generate NAME DIR | count FILE [REPEAT [KERNEL]] | sweep FILE [THRESHOLDS] | yardstick BIN FILE [REPEAT]",
   );
   process.exit(2);
 }

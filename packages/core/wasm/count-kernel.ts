@@ -21,7 +21,7 @@ let stackPtr: usize = 0; // u64 × levels × W: candidate sets per depth
 let repackedPtr: usize = 0; // u64 × dmax × W: the universe of one large renumbered set
 let packedIndexPtr: usize = 0; // i32 × 64W: local index → position in a renumbered set
 let packedPtr: usize = 0; // u64 × 64: rows of one packed universe of ≤ 64 members
-let memberPtr: usize = 0; // i32 × 3 × 64: word, bit and row of the members being packed
+let memberPtr: usize = 0; // i32 × 64: local indices of the members being packed
 let kidsPtr: usize = 0; // 64 × (set u64, size u64) per depth: children with ≥ 2 members
 let cntPtr: usize = 0; // f64 × (capDim + 2): simplices per dimension
 let statePtr: usize = 0; // f64 × 3: simplices so far, next checkpoint, root being counted
@@ -433,28 +433,24 @@ function expandRepacked(at: usize, c: i32, depth: i32): void {
 
 /** Renumbers a candidate set of c ≤ 64 members into a one-word universe and runs its subtree there. */
 function expandPacked(rows: usize, Wc: i32, at: usize, c: i32, depth: i32): void {
-  const wordOf = memberPtr;
-  const shiftOf = memberPtr + 256;
-  const rowOf = memberPtr + 512;
+  const indexOf = memberPtr; // local index of each member, ascending
   let q: usize = 0;
   for (let k = 0; k < Wc; k++) {
     let y = load<u64>(at + ((<usize>k) << 3));
     while (y !== 0) {
-      const b = <i32>ctz(y);
+      store<i32>(indexOf + (q << 2), (k << 6) + <i32>ctz(y));
       y &= y - 1;
-      store<i32>(wordOf + (q << 2), k);
-      store<i32>(shiftOf + (q << 2), b);
-      store<i32>(rowOf + (q << 2), ((k << 6) + b) * Wc);
       q++;
     }
   }
-  // Bit p of packed row q is bit (member p) of row (member q): one test per pair, no data-dependent branch.
+  // Bit p of packed row r is bit (member p) of row (member r): one test per pair, no data-dependent branch
+  // (a 64-bit shift by the member's local index uses its low six bits, its place in the word).
   for (let r = 0; r < c; r++) {
-    const row = rows + ((<usize>load<i32>(rowOf + ((<usize>r) << 2))) << 3);
+    const row = rows + ((<usize>load<i32>(indexOf + ((<usize>r) << 2)) * Wc) << 3);
     let out: u64 = 0;
     for (let p = undirected ? r + 1 : 0; p < c; p++) {
-      const word = load<u64>(row + ((<usize>load<i32>(wordOf + ((<usize>p) << 2))) << 3));
-      out |= ((word >> <u64>load<i32>(shiftOf + ((<usize>p) << 2))) & 1) << (<u64>p);
+      const j = load<i32>(indexOf + ((<usize>p) << 2));
+      out |= ((load<u64>(row + ((<usize>(j >> 6)) << 3)) >> <u64>j) & 1) << (<u64>p);
     }
     store<u64>(packedPtr + ((<usize>r) << 3), out);
   }

@@ -38,7 +38,7 @@ export function countWithWasm(
   };
   const STATE = take(3 * 8);
   const BINOM = take(65 * 65 * 8);
-  const MEMBER = take(3 * 64 * 4);
+  const MEMBER = take(64 * 4);
   const FOUR = take(4096 * 4);
   const PACKED = take(64 * 8);
   const CNT = take((capDim + 2) * 8);

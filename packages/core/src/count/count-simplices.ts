@@ -51,6 +51,8 @@ export function countSimplices(graph: WeightedGraph, options: CountSimplicesOpti
   const edgeParticipation = options.edgeParticipation === true;
   if (!participation && !edgeParticipation) {
     const kernel = options.kernel ?? "auto";
+    if (kernel !== "auto" && kernel !== "webassembly" && kernel !== "typescript")
+      throw new RangeError(`kernel must be "auto", "webassembly" or "typescript", got ${String(kernel)}`);
     const plain =
       (kernel === "typescript" ? null : countWithWasm(g, maxDim, budget, monitor)) ??
       (kernel === "webassembly" ? kernelMissing() : countWithBitsets(g, maxDim, budget, monitor));
@@ -81,6 +83,7 @@ export function countSimplices(graph: WeightedGraph, options: CountSimplicesOpti
 
 function kernelMissing(): never {
   throw new Error(
-    "the WebAssembly counting kernel is not available here (kernel: 'webassembly' was asked for)",
+    "the WebAssembly counting kernel is not available here, or its memory cannot hold this graph's tables " +
+      '(kernel: "webassembly" was asked for; "auto" would count in TypeScript)',
   );
 }

@@ -83,4 +83,9 @@ describe("the WebAssembly counting kernel", () => {
     );
     expect(() => fresh.countSimplices(g, { kernel: "webassembly" })).toThrow(/WebAssembly counting kernel/);
   });
+
+  it("refuses an unknown kernel name", () => {
+    // @ts-expect-error: a caller from JavaScript can pass anything
+    expect(() => countSimplices(complete(4), { kernel: "wasm" })).toThrow(/kernel must be "auto"/);
+  });
 });

@@ -1,4 +1,4 @@
-import type { WorkControl, WorkProgress } from "@cliquescape/core";
+import { describeStage, type WorkControl, type WorkProgress } from "@cliquescape/core";
 
 /** A computation shorter than this prints no progress at all. */
 const QUIET_MS = 2000;
@@ -52,10 +52,7 @@ export function startGraphWork(
 
 /** "reducing columns of dimension 2: 1,200 of 4,000 (31 s)". */
 export function progressLine(p: WorkProgress): string {
-  const stage =
-    p.stage === "counting simplices"
-      ? "counting simplices (root vertices)"
-      : `${p.stage} of dimension ${p.dim}`;
+  const stage = p.stage === "counting simplices" ? "counting simplices (root vertices)" : describeStage(p);
   const done = p.done.toLocaleString("en-US");
   const count = Number.isFinite(p.total) ? `${done} of ${p.total.toLocaleString("en-US")}` : `${done} so far`;
   return `${stage}: ${count} (${Math.round(p.elapsedMs / 1000)} s)`;

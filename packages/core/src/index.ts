@@ -36,5 +36,5 @@ export { density, edgeCount, nodeLabel, possibleEdgeCount } from "./graph/weight
 export * from "./homology/index.js";
 export * from "./null-model/index.js";
 export * from "./vectorise/index.js";
-export { describeProgress, TimeLimitError } from "./work/time-limit-error.js";
+export { describeProgress, describeStage, TimeLimitError } from "./work/time-limit-error.js";
 export type { WorkControl, WorkProgress, WorkStage } from "./work/work-control.js";

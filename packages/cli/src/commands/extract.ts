@@ -1,4 +1,5 @@
 import { availableParallelism } from "node:os";
+import { NULL_MODELS, NULL_SCORE_FEATURES } from "@cliquescape/core";
 import { Command, Option } from "commander";
 import { cliMessage } from "../cli-message.js";
 import { exitCodeFor } from "../exit-codes.js";
@@ -8,7 +9,13 @@ import { runExtract } from "../extract/run-extract.js";
 import { EDGE_TRANSFORMS } from "../extract/run-spec.js";
 import { timeLimitOption } from "../options/complex-options.js";
 import { addConnectivityOptions } from "../options/connectivity-options.js";
-import { finiteNumber, numberList, positiveInteger, UsageError } from "../options/graph-options.js";
+import {
+  finiteNumber,
+  nonNegativeInteger,
+  numberList,
+  positiveInteger,
+  UsageError,
+} from "../options/graph-options.js";
 
 export function extractCommand(): Command {
   const command = new Command("extract")
@@ -162,6 +169,27 @@ export function extractCommand(): Command {
         "feature families, comma-separated (default: simplexCounts,euler,betti,curveSummaries,barcodeSummaries,network; also landscapes,images,entropy,persistenceCurves)",
       ).argParser((text) => text.split(",").map((s) => s.trim())),
     )
+    // z-scored columns against a null model.
+    .addOption(
+      new Option(
+        "--null-model <model>",
+        "add z-scored columns against this null model (none: no z columns; see docs/null-models.md)",
+      ).choices([...NULL_MODELS, "none"]),
+    )
+    .addOption(
+      new Option("--null-samples <n>", "null samples per graph for the z columns (default 100)").argParser(
+        positiveInteger,
+      ),
+    )
+    .addOption(
+      new Option("--null-seed <s>", "seed of the null samples (default 1)").argParser(nonNegativeInteger),
+    )
+    .addOption(
+      new Option(
+        "--null-features <list>",
+        `features that get a z column, comma-separated (default: ${NULL_SCORE_FEATURES.join(",")})`,
+      ).argParser((text) => text.split(",").map((s) => s.trim())),
+    )
     .addOption(new Option("--no-bundles", "do not write GNN bundles"))
     .addOption(new Option("--no-barcodes", "do not write barcodes"));
   // Recordings instead of matrices (recorded in the spec's connectivity section).
@@ -175,7 +203,7 @@ Examples:
   cliquescape extract scans/ --out runs/a --weights distance --transform one-minus --top-dim 2
   cliquescape extract new-subjects.csv --out runs/b --spec runs/a/spec.json
   cliquescape extract cohort.npy --labels participants.tsv --labels-column group --out runs/c
-
+  cliquescape extract demo-data/manifest.csv --out out/z --null-model rewire --null-samples 200
 Exit codes:
   0    every graph is in the tables
   1    some graph was left out (see errors.csv), or no graph could be read

@@ -1,14 +1,13 @@
 import { availableParallelism } from "node:os";
 import {
-  compareWithNull,
+  compareSampleTable,
   densityGrid,
-  explicitGrid,
-  gridFiltrationValues,
   NULL_MODELS,
   type NullComparison,
   type NullModel,
   nullFeatureNames,
   nullFeatures,
+  rewiringStrata,
 } from "@cliquescape/core";
 import { encodeCsv } from "@cliquescape/io";
 import { Command, Option } from "commander";
@@ -130,11 +129,6 @@ async function nullmodelAction(file: string, raw: Record<string, unknown>): Prom
     const seed = raw.seed as number;
     const swapsPerEdge = raw.swapsPerEdge as number;
     if (!(swapsPerEdge >= 0)) throw new UsageError("--swaps-per-edge must be ≥ 0");
-    // Rewiring keeps degrees within the edges entering between the same two thresholds (grid and threshold).
-    const strata = explicitGrid(
-      [...grid.thresholds, ...(threshold === undefined ? [] : [threshold])],
-      semantics,
-    );
     const setup: NullSetup = {
       graph: {
         n: graph.n,
@@ -147,7 +141,8 @@ async function nullmodelAction(file: string, raw: Record<string, unknown>): Prom
         model,
         seed,
         swapsPerEdge,
-        grid: gridFiltrationValues(strata).length > 0 ? strata : undefined,
+        // Rewiring keeps degrees among the edges entering between the same two thresholds.
+        grid: rewiringStrata(grid, threshold),
       },
       features: {
         semantics,
@@ -188,11 +183,7 @@ async function nullmodelAction(file: string, raw: Record<string, unknown>): Prom
       );
     progress.stop();
 
-    const features = names.map((name, f) => {
-      const column = new Float64Array(samples);
-      for (let s = 0; s < samples; s++) column[s] = values[s * names.length + f];
-      return { name, ...compareWithNull(observed[f], column) };
-    });
+    const features = compareSampleTable(observed, values).map((c, f) => ({ name: names[f], ...c }));
     const report: NullModelReport = {
       file,
       directed: graph.directed,

@@ -3,10 +3,13 @@ import {
   type Barcode,
   edgeCount,
   type FeatureConfig,
+  type NullScoreConfig,
+  nullScoreNames,
+  nullScoreValues,
   type WeightedGraph,
   type WorkControl,
 } from "@cliquescape/core";
-import { type DatasetEntry, graphFeatures } from "@cliquescape/io";
+import { type DatasetEntry, graphFeatureNames, graphFeatures } from "@cliquescape/io";
 import { cliMessage } from "../cli-message.js";
 import { type BarcodeReport, renderBarcode } from "../commands/barcode.js";
 import { gnnBundle } from "./gnn-bundle.js";
@@ -42,6 +45,19 @@ export function featureConfigOf(spec: ResolvedRunSpec): FeatureConfig {
   };
 }
 
+/** The z-scored columns' settings, or null when the spec asks for none. */
+export function nullScoreConfigOf(spec: ResolvedRunSpec): NullScoreConfig | null {
+  const { model, ...rest } = spec.nullScores;
+  return model === null ? null : { model, ...rest };
+}
+
+/** Every column of the feature tables: the core's families, the network family, then the z-scores. */
+export function runFeatureNames(spec: ResolvedRunSpec): string[] {
+  const names = graphFeatureNames(featureConfigOf(spec), spec.resolvedGrid);
+  const nulls = nullScoreConfigOf(spec);
+  return nulls ? names.concat(nullScoreNames(nulls, spec.complex.topDim)) : names;
+}
+
 /**
  * Reads, prepares and computes one graph. Never throws for a problem of the graph itself: the problem comes
  * back as a failure with file and position, so the rest of the dataset goes on.
@@ -59,14 +75,33 @@ export function computeGraph(
     warnings = read.warnings.map(cliMessage);
     const { graph, coordinates } = read;
     const semantics = spec.preparation.weights;
+    const countBudget = spec.complex.simplexBudget ?? undefined;
+    const homologyBudget = { maxBytes: spec.complex.homologyMemoryMiB * 2 ** 20 };
     const features = graphFeatures(graph, {
       config: featureConfigOf(spec),
       axis: spec.resolvedGrid,
       semantics,
-      countBudget: spec.complex.simplexBudget ?? undefined,
-      homologyBudget: { maxBytes: spec.complex.homologyMemoryMiB * 2 ** 20 },
+      countBudget,
+      homologyBudget,
       work,
     });
+    const nulls = nullScoreConfigOf(spec);
+    // Seeded per sample and computed in this one thread: the same values with any number of workers.
+    const values = nulls
+      ? concat(
+          features.values,
+          nullScoreValues(graph, {
+            config: nulls,
+            topDim: spec.complex.topDim,
+            prime: spec.complex.prime,
+            axis: spec.resolvedGrid,
+            semantics,
+            countBudget,
+            homologyBudget,
+            work,
+          }),
+        )
+      : features.values;
     const barcodeJson =
       spec.outputs.barcodes && features.barcode
         ? barcodeDocument(entry.id, relativeFile, graph, features.barcode, features.grid.thresholds, spec)
@@ -74,7 +109,7 @@ export function computeGraph(
     const bundle = spec.outputs.bundles ? gnnBundle(graph, labelCode, spec, coordinates, work) : null;
     return {
       ok: true,
-      values: features.values,
+      values,
       thresholds: Array.from(features.grid.thresholds),
       barcodeJson,
       bundle,
@@ -87,6 +122,13 @@ export function computeGraph(
   } catch (error) {
     return { ok: false, failure: graphFailureOf(error, relativeFile), warnings };
   }
+}
+
+function concat(a: Float64Array, b: Float64Array): Float64Array {
+  const out = new Float64Array(a.length + b.length);
+  out.set(a);
+  out.set(b, a.length);
+  return out;
 }
 
 /**

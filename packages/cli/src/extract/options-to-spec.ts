@@ -1,3 +1,4 @@
+import { NULL_SCORE_FEATURES } from "@cliquescape/core";
 import { connectivityFromOptions } from "../options/connectivity-options.js";
 import { UsageError } from "../options/graph-options.js";
 import { readSpecFile } from "./load-spec.js";
@@ -44,6 +45,19 @@ export function optionsToSpec(raw: Raw, given: (name: string) => boolean): { spe
   const gridChanged = gridFromOptions(raw, spec, base);
   nodeThresholdFromOptions(raw, spec);
   if (raw.families !== undefined) spec.families = familiesFromList(raw.families as string[]);
+  if (raw.nullFeatures !== undefined) nullFeaturesFromList(raw.nullFeatures as string[]);
+  section("nullScores", {
+    model: raw.nullModel === "none" ? null : raw.nullModel,
+    samples: raw.nullSamples,
+    seed: raw.nullSeed,
+    features: raw.nullFeatures,
+  });
+  const nullModel = (spec.nullScores as Raw | undefined)?.model;
+  const nullSettings = [raw.nullSamples, raw.nullSeed, raw.nullFeatures].some((x) => x !== undefined);
+  if (nullSettings && (nullModel === undefined || nullModel === null))
+    throw new UsageError(
+      "--null-samples, --null-seed and --null-features set the z-scored columns: add --null-model er|rewire|shuffle",
+    );
   section("outputs", {
     bundles: given("bundles") ? raw.bundles : undefined,
     barcodes: given("barcodes") ? raw.barcodes : undefined,
@@ -105,4 +119,14 @@ function familiesFromList(list: string[]): Raw {
     }
   }
   return Object.fromEntries(FAMILIES.map((name) => [name, list.includes(name)]));
+}
+
+function nullFeaturesFromList(list: string[]): void {
+  for (const name of list) {
+    if (!(NULL_SCORE_FEATURES as readonly string[]).includes(name)) {
+      throw new UsageError(
+        `--null-features: unknown feature "${name}"; choose from ${NULL_SCORE_FEATURES.join(", ")}`,
+      );
+    }
+  }
 }

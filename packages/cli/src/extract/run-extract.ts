@@ -2,7 +2,6 @@ import { existsSync, readFileSync } from "node:fs";
 import { dirname, relative, resolve, sep } from "node:path";
 import type { WorkProgress } from "@cliquescape/core";
 import {
-  graphFeatureNames,
   type OpenDatasetOptions,
   openDataset,
   openTimeSeriesDataset,
@@ -12,7 +11,7 @@ import { recordingOptions } from "../connect/connectivity-spec.js";
 import { UsageError } from "../options/graph-options.js";
 import { progressLine } from "../work-progress.js";
 import { assembleTables, type ErrorRow, labelCoder, problemRow } from "./assemble-tables.js";
-import { featureConfigOf } from "./graph-job.js";
+import { runFeatureNames } from "./graph-job.js";
 import { type GraphRecord, readRecord } from "./graph-record.js";
 import { hashInputs, hashOrNote } from "./input-hashes.js";
 import { validateSpec } from "./load-spec.js";
@@ -95,7 +94,7 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
       );
     }
   }
-  const featureNames = graphFeatureNames(featureConfigOf(spec), spec.resolvedGrid);
+  const featureNames = runFeatureNames(spec);
 
   createRunFolder(folder);
   removeLeftoverTemps(folder);

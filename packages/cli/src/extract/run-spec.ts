@@ -1,3 +1,4 @@
+import { NULL_MODELS, NULL_SCORE_FEATURES } from "@cliquescape/core";
 import { z } from "zod";
 import { ConnectivitySchema } from "../connect/connectivity-spec.js";
 import { DEFAULT_TIME_LIMIT_SECONDS } from "../options/complex-options.js";
@@ -147,6 +148,23 @@ export const VectorisationSchema = z
   })
   .prefault({});
 
+/** z-scored columns against a null model (off unless a model is named): see docs/null-models.md. */
+export const NullScoresSchema = z
+  .strictObject({
+    /** null: no z-scored columns. */
+    model: z.enum(NULL_MODELS).nullable().default(null),
+    /** Null samples per graph; each graph draws samples 0 … samples − 1 of the seed. */
+    samples: z.number().int().min(2).max(100000).default(100),
+    seed: z.number().int().min(0).default(1),
+    /** Which features get a z column: counts and Betti numbers at the threshold, Betti-curve areas. */
+    features: z.array(z.enum(NULL_SCORE_FEATURES)).min(1).default([...NULL_SCORE_FEATURES]),
+    /** Where counts and Betti numbers are read (same choices as nodeFeatures.threshold). */
+    threshold: NodeThresholdSchema,
+    /** Rewiring: swap attempts per edge. */
+    swapsPerEdge: z.number().min(0).max(1000).default(10),
+  })
+  .prefault({});
+
 export const OutputsSchema = z
   .strictObject({
     /** One GNN bundle (.npz) per graph. */
@@ -178,6 +196,7 @@ export const RunSpecSchema = z.strictObject({
   nodeFeatures: z.strictObject({ threshold: NodeThresholdSchema }).prefault({}),
   families: FamiliesSchema,
   vectorisation: VectorisationSchema,
+  nullScores: NullScoresSchema,
   outputs: OutputsSchema,
   /** Label names in code order (y = index); resolved from the dataset when absent. */
   labelNames: z

@@ -13,6 +13,7 @@ const COMPARED_KEYS = [
   "nodeFeatures",
   "families",
   "vectorisation",
+  "nullScores",
   "outputs",
   "labelNames",
   "nodeLayout",
@@ -60,9 +61,13 @@ function isPlainObject(value: unknown): value is Record<string, unknown> {
 
 /** A short hash of the compared settings: per-graph records carry it, so a stray record never mixes in. */
 export function settingsFingerprint(spec: Partial<RunSpec>): string {
-  // A spec without recordings has no connectivity section and keeps the fingerprint it had before there was one.
-  const picked = COMPARED_KEYS.filter((key) => key !== "connectivity" || spec.connectivity !== undefined).map(
-    (key) => [key, compared(spec, key) ?? null],
+  // Sections a spec may lack keep the fingerprint it had before they existed: connectivity (no recordings)
+  // and nullScores (no z-scored columns).
+  const keys = COMPARED_KEYS.filter(
+    (key) =>
+      (key !== "connectivity" || spec.connectivity !== undefined) &&
+      (key !== "nullScores" || Boolean(spec.nullScores?.model)),
   );
+  const picked = keys.map((key) => [key, compared(spec, key) ?? null]);
   return createHash("sha256").update(JSON.stringify(picked)).digest("hex").slice(0, 16);
 }

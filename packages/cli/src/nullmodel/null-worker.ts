@@ -2,8 +2,7 @@ import { parentPort } from "node:worker_threads";
 import {
   type NullFeatureOptions,
   type NullSampleOptions,
-  nullFeatures,
-  nullSample,
+  nullSampleBlock,
   type WeightedGraph,
 } from "@cliquescape/core";
 import { serveTasks } from "../parallel/map-on-workers.js";
@@ -31,19 +30,8 @@ export interface NullReply {
 
 /** Draws and measures a block of null samples; also used in the main thread when one worker is enough. */
 export function nullBlock(setup: NullSetup, task: NullTask): NullReply {
-  const rows: Float64Array[] = [];
-  let swaps = 0;
-  let refused = 0;
-  for (let s = task.from; s < task.to; s++) {
-    const sample = nullSample(setup.graph, s, setup.sampling);
-    swaps += sample.swaps;
-    refused += sample.refused;
-    rows.push(nullFeatures(sample.graph, setup.features));
-  }
-  const width = rows[0]?.length ?? 0;
-  const values = new Float64Array(rows.length * width);
-  for (let i = 0; i < rows.length; i++) values.set(rows[i], i * width);
-  return { from: task.from, values, swaps, refused };
+  const block = nullSampleBlock(setup.graph, task.from, task.to, setup.sampling, setup.features);
+  return { from: task.from, ...block };
 }
 
 if (parentPort) {

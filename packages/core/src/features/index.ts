@@ -28,6 +28,16 @@ export {
   nodeFeatureNames,
 } from "./node-edge-features.js";
 export {
+  checkNullScoreConfig,
+  NULL_SCORE_FEATURES,
+  type NullScoreConfig,
+  type NullScoreFeature,
+  type NullScoreFeatureOptions,
+  type NullScoreThreshold,
+  nullScoreNames,
+  nullScoreValues,
+} from "./null-score-features.js";
+export {
   type TopologicalFeatureOptions,
   type TopologicalFeatures,
   topologicalFeatures,

@@ -7,7 +7,10 @@ export {
   type NullSample,
   type NullSampleOptions,
   nullSample,
+  rewiringStrata,
 } from "./null-sample.js";
+export { type NullSampleBlock, nullSampleBlock } from "./null-sample-block.js";
+export { compareSampleTable, type NullScoreOptions, type NullScores, nullScores } from "./null-scores.js";
 export { compareWithNull, type NullComparison } from "./null-statistics.js";
 export { type SampleRandom, sampleRandom } from "./sample-random.js";
 export { shuffleWeights } from "./shuffle-weights.js";

@@ -7,6 +7,7 @@ import type { WeightedGraph } from "../graph/weighted-graph.js";
 import { bettiCurves, bettiFromBarcode } from "../homology/betti-curves.js";
 import { computeBarcode } from "../homology/compute-barcode.js";
 import type { HomologyBudget } from "../homology/homology-budget.js";
+import type { WorkControl } from "../work/work-control.js";
 
 export interface NullFeatureOptions {
   readonly semantics: WeightSemantics;
@@ -14,11 +15,19 @@ export interface NullFeatureOptions {
   readonly threshold?: number;
   /** The grid Betti-curve areas are taken over. */
   readonly grid: ThresholdGrid;
+  /**
+   * Where each grid threshold sits on the x-axis of the area, one per threshold; default the thresholds
+   * themselves (the area in weight units). extract passes its axis values, so on a density axis the area
+   * is over densities, as its own `betti_d{k}_area` column.
+   */
+  readonly areaPositions?: ArrayLike<number>;
   /** Simplices counted to this dimension; Betti numbers to topDim − 1. */
   readonly topDim: number;
   readonly prime?: number;
   readonly countBudget?: number;
   readonly homologyBudget?: HomologyBudget;
+  /** Time limit shared by the count and the barcode (give it a startedAt). */
+  readonly work?: WorkControl;
 }
 
 /** Names of the values nullFeatures returns, in order. */
@@ -37,7 +46,16 @@ export function nullFeatureNames(topDim: number): string[] {
  */
 export function nullFeatures(graph: WeightedGraph, options: NullFeatureOptions): Float64Array {
   const { semantics, threshold, grid, topDim } = options;
-  const counts = countSimplices(graph, { threshold, semantics, maxDim: topDim, budget: options.countBudget });
+  const positions = options.areaPositions ?? grid.thresholds;
+  if (positions.length !== grid.thresholds.length)
+    throw new RangeError(`${positions.length} area positions for ${grid.thresholds.length} thresholds`);
+  const counts = countSimplices(graph, {
+    ...options.work,
+    threshold,
+    semantics,
+    maxDim: topDim,
+    budget: options.countBudget,
+  });
   const gridEnd = grid.thresholds[grid.thresholds.length - 1];
   const end =
     threshold === undefined
@@ -46,6 +64,7 @@ export function nullFeatures(graph: WeightedGraph, options: NullFeatureOptions):
         ? threshold
         : gridEnd;
   const barcode = computeBarcode(end === undefined ? graph : thresholdSubgraph(graph, end, semantics), {
+    ...options.work,
     semantics,
     maxDim: topDim - 1,
     prime: options.prime,
@@ -60,7 +79,7 @@ export function nullFeatures(graph: WeightedGraph, options: NullFeatureOptions):
   const curve = new Float64Array(T);
   for (let k = 0; k < topDim; k++) {
     for (let t = 0; t < T; t++) curve[t] = curves[t][k];
-    values[2 * topDim + 1 + k] = summarizeCurve(curve, grid.thresholds).area;
+    values[2 * topDim + 1 + k] = summarizeCurve(curve, positions).area;
   }
   return values;
 }

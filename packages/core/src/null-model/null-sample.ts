@@ -1,4 +1,4 @@
-import type { ThresholdGrid } from "../filtration/threshold-grid.js";
+import { explicitGrid, type ThresholdGrid } from "../filtration/threshold-grid.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
 import { rewireDegreePreserving } from "./degree-preserving-rewire.js";
 import { erdosRenyiSample } from "./erdos-renyi.js";
@@ -46,4 +46,14 @@ export function nullSample(graph: WeightedGraph, sample: number, options: NullSa
         `unknown null model "${options.model as string}"; choose from ${NULL_MODELS.join(", ")}`,
       );
   }
+}
+
+/**
+ * The strata rewiring keeps degrees in when features are read at `threshold` and over `grid`: the grid's
+ * thresholds and that threshold together, so every degree the features see is the graph's own. Undefined
+ * (the whole graph is one stratum) when there are none.
+ */
+export function rewiringStrata(grid: ThresholdGrid, threshold: number | undefined): ThresholdGrid | undefined {
+  const values = [...grid.thresholds, ...(threshold === undefined ? [] : [threshold])];
+  return values.length > 0 ? explicitGrid(values, grid.semantics) : undefined;
 }

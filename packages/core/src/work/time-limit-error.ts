@@ -18,11 +18,18 @@ export class TimeLimitError extends Error {
 
 /** "while reducing columns of dimension 2 (1,200 of 4,000 done, after 31.2 s)". */
 export function describeProgress(p: WorkProgress): string {
-  const where = p.stage === "counting simplices" ? p.stage : `${p.stage} of dimension ${p.dim}`;
+  const where = describeStage(p);
   const count = Number.isFinite(p.total)
     ? `${p.done.toLocaleString("en-US")} of ${p.total.toLocaleString("en-US")} done`
     : `${p.done.toLocaleString("en-US")} so far`;
   return `while ${where} (${count}, after ${formatSeconds(p.elapsedMs)})`;
+}
+
+/** "reducing columns of dimension 2"; stages that span every dimension are named alone. */
+export function describeStage(p: WorkProgress): string {
+  return p.stage === "counting simplices" || p.stage === "drawing null samples"
+    ? p.stage
+    : `${p.stage} of dimension ${p.dim}`;
 }
 
 function formatSeconds(ms: number): string {

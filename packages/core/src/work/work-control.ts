@@ -4,7 +4,8 @@ export type WorkStage =
   | "listing simplices"
   | "pairing components"
   | "reducing columns"
-  | "building directed tables";
+  | "building directed tables"
+  | "drawing null samples";
 
 /** A snapshot of a computation's progress: `done` of `total` units of `stage` in dimension `dim`. */
 export interface WorkProgress {

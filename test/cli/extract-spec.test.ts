@@ -116,6 +116,38 @@ describe("extract --spec", () => {
       ...[0, 1].flatMap((k) => ["0.1", "0.2", "0.3"].map((d) => `betti_d${k}_dens${d}`)),
     ]);
   });
+
+  it("writes every setting into spec.json, so --spec spec.json resumes the run with the same columns", () => {
+    const dir = similarityDataset(SMALL_DATASET.slice(0, 2));
+    writeFileSync(
+      join(dir, "partial.json"),
+      JSON.stringify({
+        complex: { topDim: 2 },
+        families: { landscapes: true },
+        vectorisation: { landscapeLayers: 2 },
+        nullScores: { model: "er", samples: 3, features: ["betti"] },
+      }),
+    );
+    const out = join(dir, "run");
+    const args = ["extract", join(dir, "manifest.csv"), "--out", out, "--no-bundles"];
+    expect(runCli([...args, "--spec", join(dir, "partial.json")]).status).toBe(0);
+    const spec = JSON.parse(readFileSync(join(out, "spec.json"), "utf8"));
+    expect(spec.vectorisation.landscapeLayers).toBe(2);
+    expect(spec.nullScores).toMatchObject({ model: "er", samples: 3, features: ["betti"] });
+    const before = readFileSync(join(out, "features.csv"), "utf8");
+    const again = runCli([...args, "--spec", join(out, "spec.json")]);
+    expect(again.status, again.stderr).toBe(0);
+    expect(again.stdout).toContain("(2 already done before this run)");
+    expect(readFileSync(join(out, "features.csv"), "utf8")).toBe(before);
+    const header = readFeatureTable(join(out, "features.csv")).header;
+    expect(header.filter((name) => name.startsWith("landscape_d1_l"))).toHaveLength(
+      2 * spec.resolvedGrid.values.length,
+    );
+    expect(header.filter((name) => name.startsWith("z_er_"))).toEqual([
+      "z_er_betti_d0_dens0.1",
+      "z_er_betti_d1_dens0.1",
+    ]);
+  });
 });
 
 describe("extract --transform", () => {

@@ -21,6 +21,8 @@ export function specDocument(
     resolvedGrid: spec.resolvedGrid,
     nodeFeatures: spec.nodeFeatures,
     families: spec.families,
+    vectorisation: spec.vectorisation,
+    nullScores: spec.nullScores,
     outputs: spec.outputs,
     labelNames: spec.labelNames,
     nodeLayout: spec.nodeLayout,

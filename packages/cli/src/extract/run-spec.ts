@@ -157,7 +157,10 @@ export const NullScoresSchema = z
     samples: z.number().int().min(2).max(100000).default(100),
     seed: z.number().int().min(0).default(1),
     /** Which features get a z column: counts and Betti numbers at the threshold, Betti-curve areas. */
-    features: z.array(z.enum(NULL_SCORE_FEATURES)).min(1).default([...NULL_SCORE_FEATURES]),
+    features: z
+      .array(z.enum(NULL_SCORE_FEATURES))
+      .min(1)
+      .default([...NULL_SCORE_FEATURES]),
     /** Where counts and Betti numbers are read (same choices as nodeFeatures.threshold). */
     threshold: NodeThresholdSchema,
     /** Rewiring: swap attempts per edge. */

@@ -107,7 +107,8 @@ export function nullScoreValues(graph: WeightedGraph, options: NullScoreFeatureO
   const picked: number[] = [];
   if (config.features.includes("simplices")) for (let k = 1; k <= topDim; k++) picked.push(k);
   if (config.features.includes("betti")) for (let k = 0; k < topDim; k++) picked.push(topDim + 1 + k);
-  if (config.features.includes("bettiAreas")) for (let k = 0; k < topDim; k++) picked.push(2 * topDim + 1 + k);
+  if (config.features.includes("bettiAreas"))
+    for (let k = 0; k < topDim; k++) picked.push(2 * topDim + 1 + k);
   return Float64Array.from(picked, (i) => scores.comparisons[i].z ?? Number.NaN);
 }
 
@@ -116,12 +117,16 @@ export function checkNullScoreConfig(config: NullScoreConfig): void {
   if (!(NULL_MODELS as readonly string[]).includes(config.model))
     throw new RangeError(`unknown null model "${config.model}"; choose from ${NULL_MODELS.join(", ")}`);
   if (!Number.isInteger(config.samples) || config.samples < 2)
-    throw new RangeError(`null samples must be a whole number ≥ 2 (a z-score needs a spread), got ${config.samples}`);
+    throw new RangeError(
+      `null samples must be a whole number ≥ 2 (a z-score needs a spread), got ${config.samples}`,
+    );
   if (!Number.isSafeInteger(config.seed) || config.seed < 0)
     throw new RangeError(`the null-model seed must be a whole number ≥ 0, got ${config.seed}`);
   for (const f of config.features)
     if (!(NULL_SCORE_FEATURES as readonly string[]).includes(f))
-      throw new RangeError(`unknown null-model feature "${f}"; choose from ${NULL_SCORE_FEATURES.join(", ")}`);
+      throw new RangeError(
+        `unknown null-model feature "${f}"; choose from ${NULL_SCORE_FEATURES.join(", ")}`,
+      );
   const t = config.threshold;
   if (t.kind === "density" && !(t.value >= 0 && t.value <= 1))
     throw new RangeError(`the null-model density ${t.value} is outside [0, 1]`);

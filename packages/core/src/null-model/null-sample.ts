@@ -53,7 +53,10 @@ export function nullSample(graph: WeightedGraph, sample: number, options: NullSa
  * thresholds and that threshold together, so every degree the features see is the graph's own. Undefined
  * (the whole graph is one stratum) when there are none.
  */
-export function rewiringStrata(grid: ThresholdGrid, threshold: number | undefined): ThresholdGrid | undefined {
+export function rewiringStrata(
+  grid: ThresholdGrid,
+  threshold: number | undefined,
+): ThresholdGrid | undefined {
   const values = [...grid.thresholds, ...(threshold === undefined ? [] : [threshold])];
   return values.length > 0 ? explicitGrid(values, grid.semantics) : undefined;
 }

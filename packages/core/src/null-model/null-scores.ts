@@ -2,8 +2,8 @@ import type { WeightedGraph } from "../graph/weighted-graph.js";
 import type { WorkControl } from "../work/work-control.js";
 import { WorkMonitor } from "../work/work-monitor.js";
 import { type NullFeatureOptions, nullFeatureNames, nullFeatures } from "./null-features.js";
-import { nullSampleBlock } from "./null-sample-block.js";
 import type { NullSampleOptions } from "./null-sample.js";
+import { nullSampleBlock } from "./null-sample-block.js";
 import { compareWithNull, type NullComparison } from "./null-statistics.js";
 
 export interface NullScoreOptions {
@@ -45,9 +45,7 @@ export function nullScores(graph: WeightedGraph, options: NullScoreOptions): Nul
   };
   monitor.begin("drawing null samples", 0, samples);
   const observed = nullFeatures(graph, features);
-  const block = nullSampleBlock(graph, 0, samples, options.sampling, features, (done) =>
-    monitor.check(done),
-  );
+  const block = nullSampleBlock(graph, 0, samples, options.sampling, features, (done) => monitor.check(done));
   return {
     names: nullFeatureNames(options.features.topDim),
     comparisons: compareSampleTable(observed, block.values),

@@ -1,11 +1,21 @@
 /**
  * Minimum-cost assignment of every row to its own column in a sparse cost matrix (rows ≤ columns; the
- * allowed entries as compressed rows; costs may be negative): successive shortest augmenting paths with
- * row and column potentials, each path found by Dijkstra's method over reduced costs — the Hungarian
- * method (H. W. Kuhn, 1955) in its shortest-path form (J. Edmonds, R. M. Karp, 1972; R. Jonker,
- * A. Volgenant, 1987). Rows are added one at a time; column potentials only decrease from 0, so free
- * columns keep potential 0 and the final assignment with its potentials satisfies the optimality
- * conditions of the rectangular assignment problem.
+ * allowed entries as compressed rows; costs may be negative), in two phases after R. Jonker, A. Volgenant,
+ * "A shortest augmenting path algorithm for dense and sparse linear assignment problems", Computing 38,
+ * 1987:
+ *
+ * 1. augmenting row reduction: a free row takes the column of its smallest reduced cost c_ij − v_j and
+ *    lowers that column's potential by the gap to its second smallest, displacing the column's row, which
+ *    tries again at once; cheap auction-like steps that assign most rows of a clustered diagram;
+ * 2. successive shortest augmenting paths for the rows still free, each path found by Dijkstra's method over
+ *    reduced costs with row and column potentials — the Hungarian method (H. W. Kuhn, 1955) in its
+ *    shortest-path form (J. Edmonds, R. M. Karp, 1972).
+ *
+ * Invariants of both phases: every assigned row's column has the smallest reduced cost of its row, and
+ * column potentials start at 0 and only decrease, and only on columns that are (and then stay) assigned, so
+ * free columns keep potential 0 and the final assignment with its potentials satisfies the optimality
+ * conditions of the rectangular assignment problem. (Jonker and Volgenant's column reduction, which sets
+ * potentials of columns that may stay free, is for square problems and is not used.)
  *
  * Returns the column of each row and the total cost. Throws when some row cannot be assigned.
  */
@@ -20,6 +30,7 @@ export function sparseAssignment(
   const v = new Float64Array(columns);
   const rowOf = new Int32Array(columns).fill(-1);
   const columnOf = new Int32Array(rows).fill(-1);
+  const free = augmentingRowReduction(rows, offsets, targets, costs, u, v, rowOf, columnOf);
   const dist = new Float64Array(columns).fill(Infinity);
   const via = new Int32Array(columns); // the row a column was reached from
   const done = new Uint8Array(columns);
@@ -29,7 +40,7 @@ export function sparseAssignment(
   const heap = new Int32Array(columns);
   const place = new Int32Array(columns).fill(-1);
 
-  for (let r = 0; r < rows; r++) {
+  for (const r of free) {
     let start = Infinity;
     let nearest = -1;
     for (let e = offsets[r]; e < offsets[r + 1]; e++) {
@@ -142,4 +153,87 @@ export function sparseAssignment(
     }
   }
   return { columnOf, total };
+}
+
+/** Steps of the row reduction per row before the rest is left to shortest paths (a price war can be long). */
+const REDUCTION_STEPS_PER_ROW = 8;
+
+/**
+ * Phase 1 (Jonker and Volgenant's augmenting row reduction, two passes over the free rows): fills u, v,
+ * rowOf and columnOf and returns the rows left free, in increasing order.
+ */
+function augmentingRowReduction(
+  rows: number,
+  offsets: Int32Array,
+  targets: Int32Array,
+  costs: Float64Array,
+  u: Float64Array,
+  v: Float64Array,
+  rowOf: Int32Array,
+  columnOf: Int32Array,
+): Int32Array {
+  const free = new Int32Array(rows);
+  for (let i = 0; i < rows; i++) free[i] = i;
+  let freeCount = rows;
+  let budget = REDUCTION_STEPS_PER_ROW * rows;
+  for (let pass = 0; pass < 2 && freeCount > 0; pass++) {
+    const listed = freeCount;
+    freeCount = 0;
+    let k = 0;
+    while (k < listed) {
+      const i = free[k++];
+      if (budget-- <= 0) {
+        free[freeCount++] = i;
+        continue;
+      }
+      // The smallest and second smallest reduced cost of row i, ties to a free column.
+      let u1 = Infinity;
+      let u2 = Infinity;
+      let j1 = -1;
+      let j2 = -1;
+      let e1 = -1;
+      let e2 = -1;
+      for (let e = offsets[i]; e < offsets[i + 1]; e++) {
+        const j = targets[e];
+        const h = costs[e] - v[j];
+        if (h < u1 || (h === u1 && rowOf[j] < 0 && j1 >= 0 && rowOf[j1] >= 0)) {
+          u2 = u1;
+          j2 = j1;
+          e2 = e1;
+          u1 = h;
+          j1 = j;
+          e1 = e;
+        } else if (h < u2) {
+          u2 = h;
+          j2 = j;
+          e2 = e;
+        }
+      }
+      if (j1 < 0) throw new RangeError(`row ${i} has no allowed column`);
+      let displaced = rowOf[j1];
+      if (u1 < u2 && u2 < Infinity) {
+        // Take j1 at the price of the next best: row i's reduced cost there becomes u2, still its smallest.
+        v[j1] -= u2 - u1;
+      } else if (displaced >= 0) {
+        if (u2 === Infinity) {
+          free[freeCount++] = i; // its only column is taken: shortest paths will place it
+          continue;
+        }
+        // A tie between two columns, the first taken: take the second (its row, if any, waits its turn).
+        j1 = j2;
+        e1 = e2;
+        displaced = rowOf[j2];
+      }
+      u[i] = costs[e1] - v[j1]; // exactly: the assigned entry's reduced cost is 0
+      rowOf[j1] = i;
+      columnOf[i] = j1;
+      if (displaced >= 0) {
+        columnOf[displaced] = -1;
+        if (u1 < u2)
+          free[--k] = displaced; // its column got dearer: it bids again at once
+        else free[freeCount++] = displaced;
+      }
+    }
+  }
+  return free.subarray(0, freeCount).sort();
 }

@@ -23,14 +23,15 @@ export function sparseAssignment(
   rows: number,
   columns: number,
   offsets: Int32Array,
-  targets: Int32Array,
-  costs: Float64Array,
+  entryTargets: Int32Array,
+  entryCosts: Float64Array,
 ): { columnOf: Int32Array; total: number } {
+  const { targets, costs, floor } = sortedRows(rows, offsets, entryTargets, entryCosts);
   const u = new Float64Array(rows);
   const v = new Float64Array(columns);
   const rowOf = new Int32Array(columns).fill(-1);
   const columnOf = new Int32Array(rows).fill(-1);
-  const free = augmentingRowReduction(rows, offsets, targets, costs, u, v, rowOf, columnOf);
+  const free = augmentingRowReduction(rows, offsets, targets, costs, floor, u, v, rowOf, columnOf);
   const dist = new Float64Array(columns).fill(Infinity);
   const via = new Int32Array(columns); // the row a column was reached from
   const done = new Uint8Array(columns);
@@ -44,6 +45,7 @@ export function sparseAssignment(
     let start = Infinity;
     let nearest = -1;
     for (let e = offsets[r]; e < offsets[r + 1]; e++) {
+      if (floor[e] > start) break; // v ≤ 0: no later entry can be cheaper
       const c = costs[e] - v[targets[e]];
       if (c < start || (c === start && rowOf[targets[e]] < 0)) {
         start = c;
@@ -65,14 +67,19 @@ export function sparseAssignment(
     let reach = 0;
     let i = r;
     let base = 0;
+    // The nearest free column seen so far: an entry that cannot beat it is of no use to this path.
+    let bestFree = Infinity;
     for (;;) {
-      // Relax the entries of row i, reached at distance `base`.
+      // Relax the entries of row i, reached at distance `base`, cheapest first.
       const ui = u[i];
+      const useless = bestFree - base + ui;
       for (let e = offsets[i]; e < offsets[i + 1]; e++) {
+        if (floor[e] >= useless) break; // d ≥ base + cost − u_i ≥ bestFree, as v ≤ 0
         const j = targets[e];
         if (done[j]) continue;
         const d = base + costs[e] - ui - v[j];
         if (d >= dist[j]) continue;
+        if (rowOf[j] < 0 && d < bestFree) bestFree = d;
         let at: number;
         if (dist[j] === Infinity) {
           touched[touchedCount++] = j;
@@ -155,6 +162,62 @@ export function sparseAssignment(
   return { columnOf, total };
 }
 
+/** A row's entries nearly in increasing cost, with the exact least cost from each entry to the row's end. */
+interface SortedRows {
+  readonly targets: Int32Array;
+  readonly costs: Float64Array;
+  /** floor[e]: the least cost among entries e … row end; since potentials v ≤ 0, a bound on their reduced costs. */
+  readonly floor: Float64Array;
+}
+
+/**
+ * Orders every row's entries by cost, so that scans can stop at the first entry whose floor rules out the
+ * rest of the row: a counting sort into as many buckets as the row has entries, by position between its
+ * least and greatest cost (monotone in the cost), in linear time. Within a bucket the order is the input's;
+ * the floors keep the bounds exact.
+ */
+function sortedRows(rows: number, offsets: Int32Array, targets: Int32Array, costs: Float64Array): SortedRows {
+  const total = costs.length;
+  const sortedTargets = new Int32Array(total);
+  const sortedCosts = new Float64Array(total);
+  const floor = new Float64Array(total);
+  const bucketOf = new Int32Array(total);
+  let longest = 0;
+  for (let i = 0; i < rows; i++) longest = Math.max(longest, offsets[i + 1] - offsets[i]);
+  const next = new Int32Array(longest + 1);
+  for (let i = 0; i < rows; i++) {
+    const from = offsets[i];
+    const to = offsets[i + 1];
+    const length = to - from;
+    if (length === 0) continue;
+    let low = Infinity;
+    let high = -Infinity;
+    for (let e = from; e < to; e++) {
+      if (costs[e] < low) low = costs[e];
+      if (costs[e] > high) high = costs[e];
+    }
+    const scale = high > low ? (length - 1) / (high - low) : 0;
+    next.fill(0, 0, length + 1);
+    for (let e = from; e < to; e++) {
+      const bucket = Math.min(length - 1, Math.floor((costs[e] - low) * scale));
+      bucketOf[e] = bucket;
+      next[bucket + 1]++;
+    }
+    for (let b = 1; b < length; b++) next[b] += next[b - 1];
+    for (let e = from; e < to; e++) {
+      const at = from + next[bucketOf[e]]++;
+      sortedTargets[at] = targets[e];
+      sortedCosts[at] = costs[e];
+    }
+    let least = Infinity;
+    for (let e = to - 1; e >= from; e--) {
+      if (sortedCosts[e] < least) least = sortedCosts[e];
+      floor[e] = least;
+    }
+  }
+  return { targets: sortedTargets, costs: sortedCosts, floor };
+}
+
 /** Steps of the row reduction per row before the rest is left to shortest paths (a price war can be long). */
 const REDUCTION_STEPS_PER_ROW = 8;
 
@@ -167,6 +230,7 @@ function augmentingRowReduction(
   offsets: Int32Array,
   targets: Int32Array,
   costs: Float64Array,
+  floor: Float64Array,
   u: Float64Array,
   v: Float64Array,
   rowOf: Int32Array,
@@ -194,6 +258,7 @@ function augmentingRowReduction(
       let e1 = -1;
       let e2 = -1;
       for (let e = offsets[i]; e < offsets[i + 1]; e++) {
+        if (floor[e] > u2) break; // v ≤ 0: no later entry can be among the two cheapest
         const j = targets[e];
         const h = costs[e] - v[j];
         if (h < u1 || (h === u1 && rowOf[j] < 0 && j1 >= 0 && rowOf[j1] >= 0)) {

@@ -90,4 +90,35 @@ suite(`diagram distances equal scipy.optimize.linear_sum_assignment${missing ? `
       expect(wassersteinDistance(a, b, c.p), `pair ${k}`).toBeCloseTo(expected[k].wasserstein, 10);
     });
   });
+  it("on ~300-bar H1 diagrams of complete graphs (clustered short bars, deaths tied at one edge)", () => {
+    // The shape of the benchmark's diagrams: every pair of 90 nodes an edge with a uniform distance.
+    const random = seededRandom(2026);
+    const diagrams: Points[] = [];
+    for (let g = 0; g < 4; g++) {
+      const barcode = computeBarcode(randomGraph(90, 1, random, { weighted: true }), {
+        semantics: "distance",
+        maxDim: 1,
+      });
+      diagrams.push(toPoints(diagramOf(barcode, 1, { kind: "drop" })));
+    }
+    for (const d of diagrams) expect(d.length).toBeGreaterThan(200);
+    const deaths = diagrams[0].map((x) => x[1]);
+    expect(new Set(deaths).size).toBeLessThan(deaths.length); // ties the row reduction must get through
+    const cases = [
+      { a: diagrams[0], b: diagrams[1], p: 1 },
+      { a: diagrams[2], b: diagrams[3], p: 1 },
+      { a: diagrams[1], b: diagrams[2], p: 2 },
+    ];
+    const expected = runPythonScript<{ wasserstein: number; bottleneck: number }[]>(
+      "diagram_distances.py",
+      cases,
+    );
+    cases.forEach((c, k) => {
+      const a = toDiagram(c.a);
+      const b = toDiagram(c.b);
+      expect(bottleneckDistance(a, b), `pair ${k}`).toBe(expected[k].bottleneck);
+      expect(wassersteinDistance(a, b, c.p), `pair ${k}`).toBeCloseTo(expected[k].wasserstein, 10);
+      expect(wassersteinDistance(b, a, c.p), `pair ${k} reversed`).toBeCloseTo(expected[k].wasserstein, 10);
+    });
+  });
 });

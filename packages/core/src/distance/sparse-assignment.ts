@@ -15,7 +15,9 @@
  * column potentials start at 0 and only decrease, and only on columns that are (and then stay) assigned, so
  * free columns keep potential 0 and the final assignment with its potentials satisfies the optimality
  * conditions of the rectangular assignment problem. (Jonker and Volgenant's column reduction, which sets
- * potentials of columns that may stay free, is for square problems and is not used.)
+ * potentials of columns that may stay free, is for square problems and is not used.) Since v ≤ 0, an
+ * entry's cost bounds its reduced cost from below: with each row's entries ordered by cost, every scan
+ * stops at the first entry that cannot beat what it has already found.
  *
  * Returns the column of each row and the total cost. Throws when some row cannot be assigned.
  */

@@ -15,22 +15,19 @@
 //
 //   node test/bench/compare-bench.mjs [--graphs 200] [--nodes 90] [--samples 100] [--workers 1,2]
 //                                     [--only distances|nullmodel] [--no-docs]
-import { execFileSync } from "node:child_process";
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { cpus, loadavg, tmpdir, totalmem } from "node:os";
+import { cpus, tmpdir, totalmem } from "node:os";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { densityGrid, fromDenseMatrix } from "../../packages/core/dist/index.js";
 import { seededRandom } from "./random.mjs";
+import { optionReader, timedCommand } from "./timed-command.mjs";
 
 const here = dirname(fileURLToPath(import.meta.url));
 const root = join(here, "..", "..");
 const bin = join(root, "packages", "cli", "bin", "cliquescape.js");
 const args = process.argv.slice(2);
-const option = (name, fallback) => {
-  const i = args.indexOf(name);
-  return i >= 0 && i + 1 < args.length ? args[i + 1] : fallback;
-};
+const option = optionReader(args);
 const graphs = Number(option("--graphs", "200"));
 const nodes = Number(option("--nodes", "90"));
 const samples = Number(option("--samples", "100"));
@@ -43,36 +40,17 @@ const NULL_DENSITY = 0.05;
 
 const base = join(tmpdir(), "cliquescape-compare-bench");
 
-/** Runs the command line under /usr/bin/time; wall and CPU seconds, peak MiB, load average after. */
+/** Runs the command line under /usr/bin/time (see timedCommand) and says how it went. */
 function timed(label, cliArgs, workers) {
-  const timeFile = join(base, "time.txt");
-  let stdout;
+  let measured;
   try {
-    stdout = execFileSync(
-      "/usr/bin/time",
-      ["-f", "%e %M %U %S", "-o", timeFile, process.execPath, bin, ...cliArgs],
-      { stdio: ["ignore", "pipe", "inherit"], maxBuffer: 1 << 30 },
-    );
+    measured = timedCommand(process.execPath, [bin, ...cliArgs], join(base, "time.txt"));
   } catch (error) {
-    throw new Error(`${label} failed with ${workers} worker(s): exit ${error.status}`);
+    throw new Error(`${label} failed with ${workers} worker(s): ${error.message}`);
   }
-  const [seconds, maxRssKiB, user, system] = readFileSync(timeFile, "utf8")
-    .trim()
-    .split("\n")
-    .pop()
-    .split(" ")
-    .map(Number);
-  const result = {
-    label,
-    workers,
-    seconds,
-    cpuSeconds: user + system,
-    peakMiB: maxRssKiB / 1024,
-    load: loadavg()[0],
-    stdout,
-  };
+  const result = { label, workers, ...measured };
   console.error(
-    `${label}, ${workers} worker(s): ${seconds.toFixed(1)} s wall, ${result.cpuSeconds.toFixed(1)} s CPU, ` +
+    `${label}, ${workers} worker(s): ${result.seconds.toFixed(1)} s wall, ${result.cpuSeconds.toFixed(1)} s CPU, ` +
       `${result.peakMiB.toFixed(0)} MiB, load ${result.load.toFixed(1)}`,
   );
   return result;

@@ -6,22 +6,19 @@
 //
 //   node test/bench/extract-bench.mjs [--graphs 1000] [--nodes 100] [--workers 1,2] [--no-docs]
 //                                     [--also "--quantiles 0.5:0.95"]   one more run (2 workers) with these options
-import { execFileSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { cpus, loadavg, tmpdir, totalmem } from "node:os";
+import { cpus, tmpdir, totalmem } from "node:os";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { writeDocsSection } from "./docs-section.mjs";
 import { seededRandom } from "./random.mjs";
+import { optionReader, timedCommand } from "./timed-command.mjs";
 
 const here = dirname(fileURLToPath(import.meta.url));
 const root = join(here, "..", "..");
 const bin = join(root, "packages", "cli", "bin", "cliquescape.js");
 const args = process.argv.slice(2);
-const option = (name, fallback) => {
-  const i = args.indexOf(name);
-  return i >= 0 && i + 1 < args.length ? args[i + 1] : fallback;
-};
+const option = optionReader(args);
 const graphs = Number(option("--graphs", "1000"));
 const nodes = Number(option("--nodes", "100"));
 const workerCounts = option("--workers", "1,2").split(",").map(Number);
@@ -72,48 +69,26 @@ function makeDataset(dir) {
 
 function run(dataset, out, workers, extra = []) {
   rmSync(out, { recursive: true, force: true });
-  const timeFile = `${out}.time`;
+  let measured;
   try {
-    execFileSync(
-      "/usr/bin/time",
-      [
-        "-f",
-        "%e %M %U %S",
-        "-o",
-        timeFile,
-        process.execPath,
-        bin,
-        "extract",
-        dataset,
-        "--out",
-        out,
-        "--workers",
-        String(workers),
-        ...extra,
-      ],
-      { stdio: ["ignore", "pipe", "inherit"] },
+    measured = timedCommand(
+      process.execPath,
+      [bin, "extract", dataset, "--out", out, "--workers", String(workers), ...extra],
+      `${out}.time`,
     );
   } catch (error) {
-    throw new Error(`extract failed with ${workers} worker(s): exit ${error.status}`);
+    throw new Error(`extract failed with ${workers} worker(s): ${error.message}`);
   }
-  const [seconds, maxRssKiB, user, system] = readFileSync(timeFile, "utf8")
-    .trim()
-    .split("\n")
-    .pop()
-    .split(" ")
-    .map(Number);
   const rows = readFileSync(join(out, "features.csv"), "utf8").trimEnd().split("\n").length - 1;
-  const load = loadavg()[0];
-  const cpuSeconds = user + system;
   return {
     workers,
     label: extra.length > 0 ? `${workers}, \`${extra.join(" ")}\`` : String(workers),
-    seconds,
-    cpuSeconds,
-    graphsPerSecond: graphs / seconds,
-    peakMiB: maxRssKiB / 1024,
+    seconds: measured.seconds,
+    cpuSeconds: measured.cpuSeconds,
+    graphsPerSecond: graphs / measured.seconds,
+    peakMiB: measured.peakMiB,
     rows,
-    load,
+    load: measured.load,
   };
 }
 

@@ -20,6 +20,7 @@ import { cpus, tmpdir, totalmem } from "node:os";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { densityGrid, fromDenseMatrix } from "../../packages/core/dist/index.js";
+import { writeDocsSection } from "./docs-section.mjs";
 import { seededRandom } from "./random.mjs";
 import { optionReader, timedCommand } from "./timed-command.mjs";
 
@@ -262,11 +263,4 @@ lines.push("<!-- compare-bench:end -->");
 const section = lines.join("\n");
 console.log(section);
 
-if (writeDocs) {
-  const docs = join(root, "docs", "benchmarks.md");
-  const text = existsSync(docs) ? readFileSync(docs, "utf8") : "# Benchmarks\n";
-  const pattern = /<!-- compare-bench:start -->[\s\S]*<!-- compare-bench:end -->/;
-  const next = pattern.test(text) ? text.replace(pattern, section) : `${text.trimEnd()}\n\n${section}\n`;
-  writeFileSync(docs, next);
-  console.error(`wrote the section into ${docs}`);
-}
+if (writeDocs) writeDocsSection("compare-bench", section);

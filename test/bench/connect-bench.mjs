@@ -1,30 +1,18 @@
-// Benchmark of `cliquescape connect` (not a test): seeded recordings of `--subjects` subjects × `--time`
-// time points × `--channels` channels, one .npy (float64, time × channels) per subject in a folder, turned
-// into Pearson matrices and into shrinkage partial correlations with 1 and 2 workers, against numpy on the
-// same files in the same run (test/bench/connect_numpy.py: numpy.corrcoef; sklearn's LedoitWolf precision),
-// numpy with OpenBLAS on 1 thread and on 2. Wall and CPU time and peak memory from /usr/bin/time; the largest
-// difference between cliquescape's stack and numpy's is printed as a check. Writes a section of
-// docs/benchmarks.md (other sections stay). Needs `npm run build` first.
-//
-//   node test/bench/connect-bench.mjs [--subjects 500] [--channels 200] [--time 1200] [--no-docs]
-import { execFileSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { cpus, loadavg, tmpdir, totalmem } from "node:os";
+import { cpus, tmpdir, totalmem } from "node:os";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { encodeNpy } from "../../packages/io/dist/index.js";
 import { writeDocsSection } from "./docs-section.mjs";
 import { seededRandom } from "./random.mjs";
+import { optionReader, timedCommand } from "./timed-command.mjs";
 
 const here = dirname(fileURLToPath(import.meta.url));
 const root = join(here, "..", "..");
 const bin = join(root, "packages", "cli", "bin", "cliquescape.js");
 const python = process.env.PYTHON ?? "/usr/bin/python3";
 const args = process.argv.slice(2);
-const option = (name, fallback) => {
-  const i = args.indexOf(name);
-  return i >= 0 && i + 1 < args.length ? args[i + 1] : fallback;
-};
+const option = optionReader(args);
 const subjects = Number(option("--subjects", "500"));
 const channels = Number(option("--channels", "200"));
 const timePoints = Number(option("--time", "1200"));
@@ -69,26 +57,10 @@ function makeDataset(dir) {
   writeFileSync(stamp, wanted);
 }
 
-/** Runs a command under /usr/bin/time: wall s, CPU s, peak MiB, the load average after, and its stdout. */
+/** Runs a command under /usr/bin/time (see timedCommand), its stdout as text. */
 function timed(command, commandArgs, env = {}) {
-  const timeFile = join(base, "time.txt");
-  const stdout = execFileSync(
-    "/usr/bin/time",
-    ["-f", "%e %M %U %S", "-o", timeFile, command, ...commandArgs],
-    {
-      encoding: "utf8",
-      env: { ...process.env, ...env },
-      stdio: ["ignore", "pipe", "inherit"],
-      maxBuffer: 1 << 26,
-    },
-  );
-  const [seconds, maxRssKiB, user, system] = readFileSync(timeFile, "utf8")
-    .trim()
-    .split("\n")
-    .pop()
-    .split(" ")
-    .map(Number);
-  return { seconds, cpuSeconds: user + system, peakMiB: maxRssKiB / 1024, load: loadavg()[0], stdout };
+  const measured = timedCommand(command, commandArgs, join(base, "time.txt"), env);
+  return { ...measured, stdout: measured.stdout.toString("utf8") };
 }
 
 const base = join(tmpdir(), "cliquescape-connect-bench");

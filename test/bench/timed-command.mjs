@@ -14,13 +14,14 @@ export function optionReader(args) {
 /**
  * Runs `command args` under /usr/bin/time, writing its report to `timeFile`: wall seconds, CPU seconds (user
  * + system of the whole process, every thread), peak memory (maximum resident set size, MiB), the 1-minute
- * load average right after, and the command's stdout. stderr passes through. Throws naming the exit status
- * when the command fails.
+ * load average right after, and the command's stdout (a Buffer). stderr passes through; `env` is added to
+ * the environment. Throws naming the exit status when the command fails.
  */
-export function timedCommand(command, args, timeFile) {
+export function timedCommand(command, args, timeFile, env = {}) {
   let stdout;
   try {
     stdout = execFileSync("/usr/bin/time", ["-f", "%e %M %U %S", "-o", timeFile, command, ...args], {
+      env: { ...process.env, ...env },
       stdio: ["ignore", "pipe", "inherit"],
       maxBuffer: 1 << 30,
     });

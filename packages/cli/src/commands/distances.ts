@@ -87,7 +87,7 @@ async function distancesAction(root: string, raw: Record<string, unknown>): Prom
   const matrix = new Float64Array(n * n);
   const tasks: DistanceTask[] = Array.from({ length: Math.max(0, n - 1) }, (_, row) => ({ row }));
   const pairs = (n * (n - 1)) / 2;
-  const progress = startProgress("pairs", pairs);
+  const progress = startProgress("distances", pairs, process.stderr, "pairs");
   let done = 0;
   const take = (reply: DistanceReply) => {
     const i = reply.row;

@@ -161,7 +161,7 @@ async function nullmodelAction(file: string, raw: Record<string, unknown>): Prom
     for (let from = 0; from < samples; from += SAMPLES_PER_TASK)
       tasks.push({ from, to: Math.min(samples, from + SAMPLES_PER_TASK) });
     const workers = (raw.workers as number | undefined) ?? availableParallelism();
-    const progress = startProgress("null samples", samples);
+    const progress = startProgress("null model", samples, process.stderr, "samples");
     let done = 0;
     let swaps = 0;
     let refused = 0;

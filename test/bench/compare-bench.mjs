@@ -15,6 +15,7 @@
 //
 //   node test/bench/compare-bench.mjs [--graphs 200] [--nodes 90] [--samples 100] [--workers 1,2]
 //                                     [--only distances|nullmodel] [--no-docs]
+import { execFileSync } from "node:child_process";
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { cpus, tmpdir, totalmem } from "node:os";
 import { dirname, join } from "node:path";
@@ -201,6 +202,14 @@ const row = (r) =>
 mkdirSync(base, { recursive: true });
 const distances = only === "nullmodel" ? null : distancesBenchmark();
 const nulls = only === "distances" ? null : nullmodelBenchmark();
+// The commit measured (the build in packages/*/dist is assumed to be of it).
+const commit = (() => {
+  try {
+    return execFileSync("git", ["rev-parse", "--short", "HEAD"], { cwd: root, encoding: "utf8" }).trim();
+  } catch {
+    return "unknown";
+  }
+})();
 const crowded = [...(distances?.results ?? []), ...(nulls?.results ?? [])].some(
   (r) => r.load > cpus().length,
 );
@@ -209,7 +218,7 @@ const lines = [
   "<!-- compare-bench:start -->",
   "## Comparing graphs: `cliquescape distances` and `cliquescape nullmodel`",
   "",
-  `Measured by \`npm run bench:compare\` (\`node test/bench/compare-bench.mjs\`) on ${new Date().toISOString().slice(0, 10)}, through the`,
+  `Measured by \`npm run bench:compare\` (\`node test/bench/compare-bench.mjs\`) on ${new Date().toISOString().slice(0, 10)}, commit ${commit}, through the`,
   "command line as a user runs it. Wall time of the whole command; CPU time is user + system of the process",
   "(main thread and workers) and peak memory its maximum resident set size, both from /usr/bin/time; the",
   "1-minute load average right after each run shows whether other work shared the CPUs.",

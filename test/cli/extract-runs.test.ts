@@ -37,7 +37,8 @@ describe("extract run folders", () => {
     const a = folderContents(join(dir, "w1"));
     const b = folderContents(join(dir, "w2"));
     expect([...b.keys()]).toEqual([...a.keys()]);
-    expect(a.size).toBe(4 + 3 * SMALL_DATASET.length); // spec, two feature tables, errors + 3 per graph
+    // marker, spec, two feature tables, errors + 3 per graph
+    expect(a.size).toBe(5 + 3 * SMALL_DATASET.length);
     for (const [name, bytes] of a) expect(b.get(name)!.equals(bytes), name).toBe(true);
   });
 

@@ -12,9 +12,9 @@ export interface CliRun {
   stderr: string;
 }
 
-/** Runs the built command line (npm test builds first) with stderr not a terminal. */
-export function runCli(args: string[]): CliRun {
-  const run = spawnSync(process.execPath, [BIN, ...args], { encoding: "utf8" });
+/** Runs the built command line (npm test builds first) with stderr not a terminal; `cwd`: where it runs. */
+export function runCli(args: string[], options: { cwd?: string } = {}): CliRun {
+  const run = spawnSync(process.execPath, [BIN, ...args], { encoding: "utf8", cwd: options.cwd });
   return { status: run.status, stdout: run.stdout, stderr: run.stderr };
 }
 

@@ -35,7 +35,10 @@ export function extractCommand(): Command {
       "<dataset>",
       "manifest CSV/TSV (id,file[,label,split,directed,coords,…]), folder of graph files (or holding one manifest), or stack (.npy .npz .mat)",
     )
-    .requiredOption("--out <dir>", "run folder to write (created; an existing one is resumed)")
+    .requiredOption(
+      "--out <dir>",
+      "run folder to write (created, or an empty folder; a run folder of ours is resumed, any other folder refused)",
+    )
     .addOption(new Option("--spec <file>", "run spec JSON: a partial one, or a previous run's spec.json"))
     .addOption(
       new Option(
@@ -207,7 +210,9 @@ Examples:
 Exit codes:
   0    every graph is in the tables
   1    some graph was left out (see errors.csv), or no graph could be read
-  2    bad command line or spec, or the run folder holds results made under other settings
+  2    bad command line or spec, the run folder holds results made under other settings, or --out holds
+       files that are not a cliquescape run folder, or is the dataset's folder
+  74   a write failed: disk full, read-only, no permission, --out is a file (finished graphs kept)
   130  interrupted (finished graphs kept)`,
   );
   command.action((dataset: string, raw: Record<string, unknown>, self: Command) => {

@@ -2,6 +2,7 @@ import { existsSync, readFileSync } from "node:fs";
 import { dirname, relative, resolve, sep } from "node:path";
 import type { WorkProgress } from "@cliquescape/core";
 import {
+  type Dataset,
   type OpenDatasetOptions,
   openDataset,
   openTimeSeriesDataset,
@@ -11,13 +12,21 @@ import { recordingOptions } from "../connect/connectivity-spec.js";
 import { UsageError } from "../options/graph-options.js";
 import { progressLine } from "../work-progress.js";
 import { assembleTables, type ErrorRow, labelCoder, problemRow } from "./assemble-tables.js";
+import { checkInputsOutside, checkOutFolder } from "./check-out-folder.js";
 import { runFeatureNames } from "./graph-job.js";
 import { type GraphRecord, readRecord } from "./graph-record.js";
 import { hashInputs, hashOrNote } from "./input-hashes.js";
 import { validateSpec } from "./load-spec.js";
 import { startProgress } from "./progress.js";
 import { resolveSpec } from "./resolve-spec.js";
-import { createRunFolder, graphPaths, type RunFolder, removeLeftoverTemps, runFolder } from "./run-folder.js";
+import {
+  createRunFolder,
+  graphPaths,
+  markRunFolder,
+  type RunFolder,
+  removeLeftoverTemps,
+  runFolder,
+} from "./run-folder.js";
 import { renderSummary } from "./run-summary.js";
 import { outputsIntact, saveGraph } from "./save-graph.js";
 import { settingsFingerprint, specDifferences } from "./spec-differences.js";
@@ -54,6 +63,8 @@ export interface ExtractResult {
  */
 export async function runExtract(request: ExtractRequest): Promise<ExtractResult> {
   const requested = validateSpec(request.spec, request.specSource);
+  // Before anything is read or computed: --out is a file, or someone else's folder.
+  checkOutFolder(request.out, request.dataset);
   const maxFileMiB = requested.preparation.maxFileMiB;
   const maxBytes = maxFileMiB === null ? {} : { maxBytes: maxFileMiB * 2 ** 20 };
   // Recordings are opened as such: a stack of recordings counts along its subject axis, one file is one entry.
@@ -73,6 +84,8 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
   const base = dataset.kind === "folder" ? dataset.root : dirname(dataset.root);
   const relativeFile = (file: string) => relative(base, file).split(sep).join("/");
   const folder = runFolder(request.out);
+  checkInputsOutside(request.out, base, inputFiles(dataset));
+  markRunFolder(folder);
   const previous = existsSync(folder.spec) ? validateSpec(readJson(folder.spec), folder.spec) : null;
   const hashes = hashInputs(dataset.entries.map((entry) => entry.file));
 
@@ -209,6 +222,18 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
     skipped,
     interrupted,
   };
+}
+
+/**
+ * The run's input files to keep out of --out: the manifest or stack itself and the graph files it names.
+ * A folder dataset's graph files lie directly in the dataset's folder, which is compared on its own.
+ */
+function inputFiles(dataset: Dataset): string[] {
+  if (dataset.kind === "folder") return [];
+  if (dataset.kind !== "manifest") return [dataset.root];
+  const files = new Set<string>([dataset.root]);
+  for (const entry of dataset.entries) files.add(entry.file);
+  return [...files];
 }
 
 /** Raised when an output folder holds results made under different settings. */

@@ -1,10 +1,12 @@
 import { createHash } from "node:crypto";
-import { existsSync, mkdirSync, readdirSync, rmSync } from "node:fs";
+import { existsSync, mkdirSync, readdirSync, rmSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 
 /**
  * The run folder. Tables at the top, one file per graph below:
  *
+ *   cliquescape-run.json the marker: this folder is a run folder of ours (nothing else is ever written into)
+ *   run.lock             while a run works here: its pid, host and start time (run-folder-lock.ts)
  *   spec.json            every setting, the resolved grid, label codes, tool version, input hashes
  *   features.csv         one row per finished graph, dataset order
  *   features.npz         X, y, ids, feature_names, label_names, splits
@@ -15,6 +17,8 @@ import { join } from "node:path";
  */
 export interface RunFolder {
   root: string;
+  marker: string;
+  lock: string;
   spec: string;
   featuresCsv: string;
   featuresNpz: string;
@@ -27,6 +31,8 @@ export interface RunFolder {
 export function runFolder(root: string): RunFolder {
   return {
     root,
+    marker: join(root, RUN_FOLDER_MARKER),
+    lock: join(root, "run.lock"),
     spec: join(root, "spec.json"),
     featuresCsv: join(root, "features.csv"),
     featuresNpz: join(root, "features.npz"),
@@ -35,6 +41,16 @@ export function runFolder(root: string): RunFolder {
     bundles: join(root, "bundles"),
     records: join(root, "graphs"),
   };
+}
+
+/** The marker file's name, and its content (fixed: two runs of the same job give byte-identical folders). */
+export const RUN_FOLDER_MARKER = "cliquescape-run.json";
+export const RUN_FOLDER_MARKER_TEXT = `${JSON.stringify({ kind: "cliquescape run folder", version: 1 })}\n`;
+
+/** Creates the folder (if need be) and marks it as ours; call only after checkOutFolder accepted it. */
+export function markRunFolder(folder: RunFolder): void {
+  mkdirSync(folder.root, { recursive: true });
+  if (!existsSync(folder.marker)) writeFileSync(folder.marker, RUN_FOLDER_MARKER_TEXT);
 }
 
 export function createRunFolder(folder: RunFolder): void {
@@ -72,7 +88,10 @@ export function fileStem(id: string): string {
 /** Temporary files of io's writeFileAtomic (`.<name>.<pid>.<n>.tmp`) and of saveGraph (`…x<n>.tmp`). */
 export const TEMPORARY_FILE = /^\..+\.\d+\.x?\d+\.tmp$/;
 
-/** Removes temporary files a killed process may have left (they are never a finished output). */
+/**
+ * Removes temporary files a killed process may have left (they are never a finished output). Only ever
+ * called on a folder that carries our marker and whose lock this process holds.
+ */
 export function removeLeftoverTemps(folder: RunFolder): void {
   for (const dir of [folder.root, folder.barcodes, folder.bundles, folder.records]) {
     if (!existsSync(dir)) continue;

@@ -213,6 +213,7 @@ Exit codes:
   2    bad command line or spec, the run folder holds results made under other settings, or --out holds
        files that are not a cliquescape run folder, or is the dataset's folder
   74   a write failed: disk full, read-only, no permission, --out is a file (finished graphs kept)
+  75   another run is working in the same --out folder (it holds run.lock)
   130  interrupted (finished graphs kept)`,
   );
   command.action((dataset: string, raw: Record<string, unknown>, self: Command) => {

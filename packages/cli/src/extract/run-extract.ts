@@ -26,7 +26,9 @@ import {
   type RunFolder,
   removeLeftoverTemps,
   runFolder,
+  unmarkIfEmpty,
 } from "./run-folder.js";
+import { lockRunFolder } from "./run-folder-lock.js";
 import { renderSummary } from "./run-summary.js";
 import { outputsIntact, saveGraph } from "./save-graph.js";
 import { settingsFingerprint, specDifferences } from "./spec-differences.js";
@@ -62,9 +64,27 @@ export interface ExtractResult {
  * as it finishes, then assemble the tables from the per-graph records in dataset order.
  */
 export async function runExtract(request: ExtractRequest): Promise<ExtractResult> {
-  const requested = validateSpec(request.spec, request.specSource);
   // Before anything is read or computed: --out is a file, or someone else's folder.
-  checkOutFolder(request.out, request.dataset);
+  const { resumed } = checkOutFolder(request.out, request.dataset);
+  const folder = runFolder(request.out);
+  const existed = existsSync(folder.root);
+  markRunFolder(folder);
+  // One run per folder at a time: a second one refuses at once, naming the holder.
+  const lock = lockRunFolder(folder, request.out);
+  try {
+    const result = await extractInto(folder, request);
+    lock.release();
+    return result;
+  } catch (error) {
+    lock.release();
+    // A run that stopped before writing anything leaves the folder as it found it.
+    if (!resumed) unmarkIfEmpty(folder, existed);
+    throw error;
+  }
+}
+
+async function extractInto(folder: RunFolder, request: ExtractRequest): Promise<ExtractResult> {
+  const requested = validateSpec(request.spec, request.specSource);
   const maxFileMiB = requested.preparation.maxFileMiB;
   const maxBytes = maxFileMiB === null ? {} : { maxBytes: maxFileMiB * 2 ** 20 };
   // Recordings are opened as such: a stack of recordings counts along its subject axis, one file is one entry.
@@ -83,9 +103,7 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
   // Files are named relative to the dataset's folder, so records and tables do not depend on where it sits.
   const base = dataset.kind === "folder" ? dataset.root : dirname(dataset.root);
   const relativeFile = (file: string) => relative(base, file).split(sep).join("/");
-  const folder = runFolder(request.out);
   checkInputsOutside(request.out, base, inputFiles(dataset));
-  markRunFolder(folder);
   const previous = existsSync(folder.spec) ? validateSpec(readJson(folder.spec), folder.spec) : null;
   const hashes = hashInputs(dataset.entries.map((entry) => entry.file));
 

@@ -1,5 +1,5 @@
 import { createHash } from "node:crypto";
-import { existsSync, mkdirSync, readdirSync, rmSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, readdirSync, rmdirSync, rmSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 
 /**
@@ -51,6 +51,21 @@ export const RUN_FOLDER_MARKER_TEXT = `${JSON.stringify({ kind: "cliquescape run
 export function markRunFolder(folder: RunFolder): void {
   mkdirSync(folder.root, { recursive: true });
   if (!existsSync(folder.marker)) writeFileSync(folder.marker, RUN_FOLDER_MARKER_TEXT);
+}
+
+/**
+ * Undoes markRunFolder when a run stopped before writing anything (a bad spec, no usable graph): the
+ * marker goes, and the folder too if this run created it. Anything else in it leaves it as it is.
+ */
+export function unmarkIfEmpty(folder: RunFolder, existed: boolean): void {
+  try {
+    const names = readdirSync(folder.root).filter((name) => name !== "run.lock");
+    if (names.length !== 1 || names[0] !== RUN_FOLDER_MARKER) return;
+    rmSync(folder.marker, { force: true });
+    if (!existed) rmdirSync(folder.root);
+  } catch {
+    // left as it is: the marker only says the folder is ours, which it still is
+  }
 }
 
 export function createRunFolder(folder: RunFolder): void {

@@ -37,8 +37,8 @@ describe("extract run folders", () => {
     const a = folderContents(join(dir, "w1"));
     const b = folderContents(join(dir, "w2"));
     expect([...b.keys()]).toEqual([...a.keys()]);
-    // marker, spec, two feature tables, errors + 3 per graph
-    expect(a.size).toBe(5 + 3 * SMALL_DATASET.length);
+    // marker, spec, two feature tables, errors, tables.json + 3 per graph
+    expect(a.size).toBe(6 + 3 * SMALL_DATASET.length);
     for (const [name, bytes] of a) expect(b.get(name)!.equals(bytes), name).toBe(true);
   });
 

@@ -97,5 +97,5 @@ export type { NpzArray, NpzEncodeOptions } from "./write/encode-npz.js";
 export { encodeNpz } from "./write/encode-npz.js";
 export { npyHeader } from "./write/npy-header.js";
 export { createNpyStack, type NpyStack } from "./write/npy-stack.js";
-export { writeFileAtomic } from "./write/write-file-atomic.js";
+export { type StagedFile, stageFile, writeFileAtomic } from "./write/write-file-atomic.js";
 export { writeNpyFile } from "./write-npy-file.js";

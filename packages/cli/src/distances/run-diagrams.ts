@@ -2,6 +2,7 @@ import { existsSync, readFileSync } from "node:fs";
 import { diagramOf, type EssentialRule, type PersistenceDiagram } from "@cliquescape/core";
 import { textRows } from "@cliquescape/io";
 import { graphPaths, runFolder } from "../extract/run-folder.js";
+import { tableSetProblem } from "../extract/table-set.js";
 import { UsageError } from "../options/graph-options.js";
 
 /** How `distances` treats essential bars: cut at each barcode's end (or at a weight), dropped, or separate. */
@@ -22,6 +23,11 @@ export function runDiagrams(
   const folder = runFolder(root);
   if (!existsSync(folder.featuresCsv))
     throw new UsageError(`${root} is not a finished extract run folder: it has no features.csv`);
+  const unfinished = tableSetProblem(folder);
+  if (unfinished !== null)
+    throw new UsageError(
+      `${root}: the tables are not a whole set (${unfinished}); run the same extract command again to rewrite them`,
+    );
   const ids: string[] = [];
   let first = true;
   for (const row of textRows(readFileSync(folder.featuresCsv, "utf8"), ",", folder.featuresCsv)) {

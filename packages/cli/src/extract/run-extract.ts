@@ -17,6 +17,7 @@ import { runFeatureNames } from "./graph-job.js";
 import { type GraphRecord, readRecord } from "./graph-record.js";
 import { hashInputs, hashOrNote } from "./input-hashes.js";
 import { validateSpec } from "./load-spec.js";
+import { isOutputIOError, OutputIOError } from "./output-io-error.js";
 import { startProgress } from "./progress.js";
 import { resolveSpec } from "./resolve-spec.js";
 import {
@@ -33,6 +34,7 @@ import { renderSummary } from "./run-summary.js";
 import { outputsIntact, saveGraph } from "./save-graph.js";
 import { settingsFingerprint, specDifferences } from "./spec-differences.js";
 import { specDocument } from "./spec-document.js";
+import { tableSetProblem, writeTableSet } from "./table-set.js";
 import { runOnWorkers } from "./worker-pool.js";
 
 export interface ExtractRequest {
@@ -71,19 +73,33 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
   markRunFolder(folder);
   // One run per folder at a time: a second one refuses at once, naming the holder.
   const lock = lockRunFolder(folder, request.out);
+  const kept = { graphs: 0 };
   try {
-    const result = await extractInto(folder, request);
+    const result = await extractInto(folder, request, kept);
     lock.release();
     return result;
   } catch (error) {
     lock.release();
     // A run that stopped before writing anything leaves the folder as it found it.
     if (!resumed) unmarkIfEmpty(folder, existed);
+    if (isOutputIOError(error, request.out))
+      throw new OutputIOError(
+        error,
+        request.out,
+        kept.graphs > 0
+          ? `the ${kept.graphs} graphs finished are kept; run the same command again to finish`
+          : "run the same command again once it can be written",
+      );
     throw error;
   }
 }
 
-async function extractInto(folder: RunFolder, request: ExtractRequest): Promise<ExtractResult> {
+/** The run itself, in a folder that is ours and locked; `kept.graphs` counts the graphs saved so far. */
+async function extractInto(
+  folder: RunFolder,
+  request: ExtractRequest,
+  kept: { graphs: number },
+): Promise<ExtractResult> {
   const requested = validateSpec(request.spec, request.specSource);
   const maxFileMiB = requested.preparation.maxFileMiB;
   const maxBytes = maxFileMiB === null ? {} : { maxBytes: maxFileMiB * 2 ** 20 };
@@ -129,6 +145,11 @@ async function extractInto(folder: RunFolder, request: ExtractRequest): Promise<
 
   createRunFolder(folder);
   removeLeftoverTemps(folder);
+  const unfinished = tableSetProblem(folder);
+  if (unfinished !== null)
+    process.stderr.write(
+      `cliquescape: the tables in ${folder.root} are not a whole set (${unfinished}); they are rewritten from the graphs' records\n`,
+    );
   writeFileAtomic(
     folder.spec,
     specDocument(
@@ -157,6 +178,7 @@ async function extractInto(folder: RunFolder, request: ExtractRequest): Promise<
     else todo.push(i);
   });
   const skipped = records.size;
+  kept.graphs = skipped;
 
   let failed = 0;
   const progress = startProgress("graphs", todo.length);
@@ -184,6 +206,7 @@ async function extractInto(folder: RunFolder, request: ExtractRequest): Promise<
       const entry = dataset.entries[reply.index];
       const record = saveGraph(folder, entry, reply.outcome, hashes[reply.index], fingerprint, relativeFile);
       records.set(entry.id, record);
+      kept.graphs++;
       if (!record.ok) failed++;
       progress.update(records.size - skipped, failed, working());
     },
@@ -210,9 +233,7 @@ async function extractInto(folder: RunFolder, request: ExtractRequest): Promise<
   progress.stop();
 
   const tables = assembleTables(dataset.entries, records, featureNames, spec.labelNames, problems);
-  writeFileAtomic(folder.featuresCsv, tables.featuresCsv);
-  writeFileAtomic(folder.featuresNpz, tables.featuresNpz);
-  writeFileAtomic(folder.errorsCsv, tables.errorsCsv);
+  writeTableSet(folder, tables);
 
   const interrupted = ended === "stopped";
   const doneRecords = dataset.entries

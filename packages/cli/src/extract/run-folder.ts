@@ -11,6 +11,7 @@ import { join } from "node:path";
  *   features.csv         one row per finished graph, dataset order
  *   features.npz         X, y, ids, feature_names, label_names, splits
  *   errors.csv           one row per graph (or manifest row) left out, with file, line, column, reason
+ *   tables.json          length and SHA-256 of the three tables above, written after them (table-set.ts)
  *   barcodes/<id>.json   persistence barcode of each graph
  *   bundles/<id>.npz     GNN bundle of each graph
  *   graphs/<id>.json     the per-graph record the tables are assembled from (and resuming reads)
@@ -23,6 +24,7 @@ export interface RunFolder {
   featuresCsv: string;
   featuresNpz: string;
   errorsCsv: string;
+  tablesManifest: string;
   barcodes: string;
   bundles: string;
   records: string;
@@ -37,6 +39,7 @@ export function runFolder(root: string): RunFolder {
     featuresCsv: join(root, "features.csv"),
     featuresNpz: join(root, "features.npz"),
     errorsCsv: join(root, "errors.csv"),
+    tablesManifest: join(root, "tables.json"),
     barcodes: join(root, "barcodes"),
     bundles: join(root, "bundles"),
     records: join(root, "graphs"),

@@ -10,7 +10,9 @@ import {
 } from "@cliquescape/io";
 import { readSpecFile, validateSpec } from "../extract/load-spec.js";
 import { readPreparedGraph } from "../extract/read-prepared-graph.js";
+import { runFolder } from "../extract/run-folder.js";
 import type { RunSpec } from "../extract/run-spec.js";
+import { tableSetProblem } from "../extract/table-set.js";
 import { loadGraph } from "../load-graph.js";
 import { type ComplexOptions, homologyDimOf } from "../options/complex-options.js";
 import { type GraphOptions, UsageError } from "../options/graph-options.js";
@@ -76,6 +78,11 @@ function graphTarget(path: string, options: ViewOptions): ViewTarget {
 }
 
 function runTarget(root: string, options: ViewOptions): ViewTarget {
+  const unfinished = tableSetProblem(runFolder(root));
+  if (unfinished !== null)
+    throw new UsageError(
+      `${root}: the tables are not a whole set (${unfinished}); run the same extract command again to rewrite them`,
+    );
   const files: Record<string, string> = {};
   for (const name of RUN_FILES) {
     const file = fileInside(root, name);

@@ -44,3 +44,24 @@ describe("writeFileAtomic", () => {
     expect(readdirSync(dir).filter((name) => name.endsWith(".tmp"))).toEqual([]);
   });
 });
+
+describe("stageFile", () => {
+  it("writes the whole content under a temporary name, with its length and SHA-256, until committed", async () => {
+    const { createHash } = await import("node:crypto");
+    const { stageFile } = await import("./write-file-atomic.js");
+    const path = join(dir, "staged.csv");
+    const staged = stageFile(path, ["id,x\n", new Uint8Array([0x61, 0x2c, 0x31, 0x0a])]);
+    expect(existsSync(path)).toBe(false);
+    expect(readFileSync(staged.temporary, "utf8")).toBe("id,x\na,1\n");
+    expect(staged.bytes).toBe(9);
+    // Reference: node:crypto's SHA-256 of the same bytes (FIPS 180-4).
+    expect(staged.sha256).toBe(createHash("sha256").update("id,x\na,1\n").digest("hex"));
+    staged.commit();
+    expect(readFileSync(path, "utf8")).toBe("id,x\na,1\n");
+    expect(existsSync(staged.temporary)).toBe(false);
+    const dropped = stageFile(path, "other\n");
+    dropped.discard();
+    expect(readFileSync(path, "utf8")).toBe("id,x\na,1\n");
+    expect(existsSync(dropped.temporary)).toBe(false);
+  });
+});

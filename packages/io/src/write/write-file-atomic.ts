@@ -1,3 +1,4 @@
+import { createHash } from "node:crypto";
 import { closeSync, fsyncSync, mkdirSync, openSync, renameSync, rmSync, writeSync } from "node:fs";
 import { basename, dirname, join } from "node:path";
 import { threadId } from "node:worker_threads";
@@ -15,29 +16,74 @@ export function writeFileAtomic(
   path: string,
   data: string | Uint8Array | Iterable<string | Uint8Array>,
 ): void {
+  stageFile(path, data).commit();
+}
+
+/** A file written and flushed under a temporary name, waiting to be renamed into place. */
+export interface StagedFile {
+  path: string;
+  temporary: string;
+  /** Its length and SHA-256 (hex), computed as the bytes were written. */
+  bytes: number;
+  sha256: string;
+  /** Renames it into place and flushes the folder's entry. */
+  commit(): void;
+  /** Removes the temporary file (nothing changes at `path`). */
+  discard(): void;
+}
+
+/**
+ * The first half of writeFileAtomic: the whole content on disk under a temporary name, nothing at `path`
+ * changed yet. Several files staged first and committed together can only disagree if the process stops
+ * between their renames, never because one of them could not be written (a full disk fails here).
+ */
+export function stageFile(
+  path: string,
+  data: string | Uint8Array | Iterable<string | Uint8Array>,
+): StagedFile {
   const folder = dirname(path);
   mkdirSync(folder, { recursive: true });
   // Unique per process, worker thread and call, so concurrent writers never share a temporary file.
   const temporary = join(folder, `.${basename(path)}.${process.pid}.${threadId}.${counter++}.tmp`);
   const pieces = typeof data === "string" || data instanceof Uint8Array ? [data] : data;
+  const hash = createHash("sha256");
+  let total = 0;
   let fd: number | undefined;
   try {
     fd = openSync(temporary, "w");
     for (const piece of pieces) {
       const bytes = typeof piece === "string" ? Buffer.from(piece, "utf8") : piece;
+      hash.update(bytes);
+      total += bytes.length;
       let written = 0;
       while (written < bytes.length) written += writeSync(fd, bytes, written, bytes.length - written);
     }
     fsyncSync(fd);
     closeSync(fd);
     fd = undefined;
-    renameSync(temporary, path);
   } catch (error) {
     if (fd !== undefined) closeSync(fd);
     rmSync(temporary, { force: true });
+    // Errors of writeSync name no file: say which one could not be written.
+    if (error && typeof error === "object" && !("path" in error)) Object.assign(error, { path: temporary });
     throw error;
   }
-  syncFolder(folder);
+  return {
+    path,
+    temporary,
+    bytes: total,
+    sha256: hash.digest("hex"),
+    commit: () => {
+      try {
+        renameSync(temporary, path);
+      } catch (error) {
+        rmSync(temporary, { force: true });
+        throw error;
+      }
+      syncFolder(folder);
+    },
+    discard: () => rmSync(temporary, { force: true }),
+  };
 }
 
 // The rename itself lives in the folder's entry list; flushing the folder makes it survive a power cut.

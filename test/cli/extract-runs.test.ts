@@ -5,6 +5,7 @@
  * single-worker run of the same command.
  */
 import { spawn } from "node:child_process";
+import { createHash } from "node:crypto";
 import { cpSync, existsSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
@@ -53,7 +54,7 @@ describe("extract run folders", () => {
     for (const [name, bytes] of before) expect(after.get(name)!.equals(bytes), name).toBe(true);
   });
 
-  it("a damaged bundle is noticed (its size disagrees with the record) and that graph redone", () => {
+  it("a truncated bundle is noticed (its size disagrees with the record) and that graph redone", () => {
     const out = join(dir, "damaged");
     expect(runCli(["extract", join(dir, "manifest.csv"), "--out", out]).status).toBe(0);
     const before = folderContents(out);
@@ -64,6 +65,35 @@ describe("extract run folders", () => {
     expect(again.stdout).toContain(`(${SMALL_DATASET.length - 1} already done before this run)`);
     const after = folderContents(out);
     for (const [name, bytes] of before) expect(after.get(name)!.equals(bytes), name).toBe(true);
+  });
+
+  it("a zero-filled bundle, barcode or record of the right length is noticed by its checksum and redone", () => {
+    const out = join(dir, "zeroed");
+    expect(runCli(["extract", join(dir, "manifest.csv"), "--out", out]).status).toBe(0);
+    const before = folderContents(out);
+    // What a power cut can leave of a file whose data never reached the disk: its length, all zeros.
+    const zeroFill = (path: string) => writeFileSync(path, Buffer.alloc(readFileSync(path).length));
+    zeroFill(join(out, "bundles", `${SMALL_DATASET[0].id}.npz`));
+    zeroFill(join(out, "barcodes", `${SMALL_DATASET[2].id}.json`));
+    zeroFill(join(out, "graphs", `${SMALL_DATASET[4].id}.json`));
+    // And a bundle of the right length holding another graph's bytes.
+    const other = readFileSync(join(out, "bundles", `${SMALL_DATASET[5].id}.npz`));
+    const target = join(out, "bundles", `${SMALL_DATASET[6].id}.npz`);
+    const sameLength = Buffer.alloc(readFileSync(target).length);
+    other.copy(sameLength, 0, 0, Math.min(other.length, sameLength.length));
+    writeFileSync(target, sameLength);
+    const again = runCli(["extract", join(dir, "manifest.csv"), "--out", out]);
+    expect(again.status).toBe(0);
+    expect(again.stdout).toContain(`(${SMALL_DATASET.length - 4} already done before this run)`);
+    const after = folderContents(out);
+    for (const [name, bytes] of before) expect(after.get(name)!.equals(bytes), name).toBe(true);
+    const record = JSON.parse(readFileSync(join(out, "graphs", `${SMALL_DATASET[0].id}.json`), "utf8"));
+    // Reference: node:crypto's SHA-256 (FIPS 180-4) of the bundle as it is on disk now.
+    expect(record.digests.bundle).toBe(
+      createHash("sha256")
+        .update(readFileSync(join(out, "bundles", `${SMALL_DATASET[0].id}.npz`)))
+        .digest("hex"),
+    );
   });
 
   it("a changed spec is refused, naming the settings that differ", () => {

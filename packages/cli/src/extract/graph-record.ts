@@ -24,6 +24,8 @@ export interface GraphRecord {
   truncated?: boolean | null;
   /** Sizes of the barcode and bundle files written with this record. */
   bytes?: { barcode?: number; bundle?: number };
+  /** SHA-256 (hex) of the barcode and bundle files written with this record: resuming reuses only these. */
+  digests?: { barcode?: string; bundle?: string };
   failure?: GraphFailure;
   warnings: string[];
 }

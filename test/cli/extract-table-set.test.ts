@@ -114,7 +114,7 @@ describe("extract: the three tables as one set", () => {
       const full = runCli(["extract", eight, "--out", run, "--no-bundles", "--no-barcodes"]);
       expect(full.status).toBe(74);
       expect(full.stderr.trim().split("\n")).toHaveLength(1);
-      expect(full.stderr).toContain(`cliquescape: --out ${run}: cannot write ${run}/.features.`);
+      expect(full.stderr).toContain(`cliquescape: --out ${run}: cannot write ${run}/features.csv: `);
       expect(full.stderr).toContain("no space left on the device (ENOSPC)");
       const after = tablesOf(run);
       for (const [name, bytes] of before) expect(after.get(name)!.equals(bytes), name).toBe(true);

@@ -29,7 +29,7 @@ import {
   runFolder,
   unmarkIfEmpty,
 } from "./run-folder.js";
-import { lockRunFolder } from "./run-folder-lock.js";
+import { lockRunFolder, type RunFolderLock } from "./run-folder-lock.js";
 import { renderSummary } from "./run-summary.js";
 import { outputsIntact, saveGraph } from "./save-graph.js";
 import { settingsFingerprint, specDifferences } from "./spec-differences.js";
@@ -70,10 +70,26 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
   const { resumed } = checkOutFolder(request.out, request.dataset);
   const folder = runFolder(request.out);
   const existed = existsSync(folder.root);
-  markRunFolder(folder);
-  // One run per folder at a time: a second one refuses at once, naming the holder.
-  const lock = lockRunFolder(folder, request.out);
   const kept = { graphs: 0 };
+  // A write the system refuses (full, read-only, no permission) becomes one line naming --out and the path.
+  const restated = (error: unknown) =>
+    isOutputIOError(error, request.out)
+      ? new OutputIOError(
+          error,
+          request.out,
+          kept.graphs > 0
+            ? `the ${kept.graphs} graphs finished are kept; run the same command again to finish`
+            : "nothing in the folder was lost; run the same command again once it can be written",
+        )
+      : error;
+  let lock: RunFolderLock;
+  try {
+    markRunFolder(folder);
+    // One run per folder at a time: a second one refuses at once, naming the holder.
+    lock = lockRunFolder(folder, request.out);
+  } catch (error) {
+    throw restated(error);
+  }
   try {
     const result = await extractInto(folder, request, kept);
     lock.release();
@@ -82,15 +98,7 @@ export async function runExtract(request: ExtractRequest): Promise<ExtractResult
     lock.release();
     // A run that stopped before writing anything leaves the folder as it found it.
     if (!resumed) unmarkIfEmpty(folder, existed);
-    if (isOutputIOError(error, request.out))
-      throw new OutputIOError(
-        error,
-        request.out,
-        kept.graphs > 0
-          ? `the ${kept.graphs} graphs finished are kept; run the same command again to finish`
-          : "run the same command again once it can be written",
-      );
-    throw error;
+    throw restated(error);
   }
 }
 
@@ -198,13 +206,26 @@ async function extractInto(
     relativeFile: relativeFile(dataset.entries[i].file),
     labelCode: codeOf(dataset.entries[i].label),
   }));
+  // A graph's files that cannot be written stop the run (the disk is full, or read-only): every graph
+  // saved before stays, and the tables keep their previous whole set.
+  let writeFailure: unknown = null;
+  const stopOnFailure = new AbortController();
   const ended = await runOnWorkers(
     tasks,
     (reply) => {
       if (reply.kind !== "extract") return;
       inFlight.delete(reply.index);
       const entry = dataset.entries[reply.index];
-      const record = saveGraph(folder, entry, reply.outcome, hashes[reply.index], fingerprint, relativeFile);
+      if (writeFailure !== null) return;
+      let record: GraphRecord;
+      try {
+        record = saveGraph(folder, entry, reply.outcome, hashes[reply.index], fingerprint, relativeFile);
+      } catch (error) {
+        // Thrown here it would escape the worker's message handler: stop the run and report it below.
+        writeFailure = error;
+        stopOnFailure.abort();
+        return;
+      }
       records.set(entry.id, record);
       kept.graphs++;
       if (!record.ok) failed++;
@@ -213,7 +234,7 @@ async function extractInto(
     {
       size: Math.max(1, Math.min(request.workers, todo.length)),
       setup: { kind: "setup", preparation: spec.preparation, spec },
-      signal: request.signal,
+      signal: AbortSignal.any([request.signal, stopOnFailure.signal]),
       timeLimitSeconds: spec.complex.timeLimitSeconds,
       onProgress: (index, p) => {
         inFlight.set(index, p);
@@ -231,6 +252,7 @@ async function extractInto(
     },
   );
   progress.stop();
+  if (writeFailure !== null) throw writeFailure;
 
   const tables = assembleTables(dataset.entries, records, featureNames, spec.labelNames, problems);
   writeTableSet(folder, tables);

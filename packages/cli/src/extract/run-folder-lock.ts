@@ -42,7 +42,12 @@ export function lockRunFolder(
   };
   const text = `${JSON.stringify(mine)}\n`;
   const temporary = join(folder.root, `.run.lock.${process.pid}.tmp`);
-  writeFileSync(temporary, text);
+  try {
+    writeFileSync(temporary, text);
+  } catch (error) {
+    rmSync(temporary, { force: true });
+    throw Object.assign(error as Error, { path: folder.lock });
+  }
   try {
     for (let attempt = 0; ; attempt++) {
       try {

@@ -1,6 +1,6 @@
 import { createHash } from "node:crypto";
-import { existsSync, mkdirSync, readdirSync, rmdirSync, rmSync, writeFileSync } from "node:fs";
-import { join } from "node:path";
+import { existsSync, mkdirSync, readdirSync, rmdirSync, rmSync, statSync, writeFileSync } from "node:fs";
+import { dirname, join } from "node:path";
 
 /**
  * The run folder. Tables at the top, one file per graph below:
@@ -52,8 +52,24 @@ export const RUN_FOLDER_MARKER_TEXT = `${JSON.stringify({ kind: "cliquescape run
 
 /** Creates the folder (if need be) and marks it as ours; call only after checkOutFolder accepted it. */
 export function markRunFolder(folder: RunFolder): void {
-  mkdirSync(folder.root, { recursive: true });
+  makeFolder(folder.root);
   if (!existsSync(folder.marker)) writeFileSync(folder.marker, RUN_FOLDER_MARKER_TEXT);
+}
+
+/**
+ * mkdir -p that reports the system's own reason: Node's recursive mkdir says ENOENT on a read-only file
+ * system, where the truth is EROFS.
+ */
+function makeFolder(path: string): void {
+  try {
+    mkdirSync(path);
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    if (code === "EEXIST" && statSync(path).isDirectory()) return;
+    if (code !== "ENOENT" || dirname(path) === path) throw error;
+    makeFolder(dirname(path));
+    mkdirSync(path);
+  }
 }
 
 /**

@@ -100,6 +100,8 @@ function writeRenamed(path: string, data: string | Uint8Array): [number, string]
     renameSync(temporary, path);
   } catch (error) {
     rmSync(temporary, { force: true });
+    // Name the file being written, not its temporary name.
+    if (error && typeof error === "object") Object.assign(error, { path });
     throw error;
   }
   return [bytes.length, sha256Of(bytes)];

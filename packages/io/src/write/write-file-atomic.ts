@@ -64,8 +64,8 @@ export function stageFile(
   } catch (error) {
     if (fd !== undefined) closeSync(fd);
     rmSync(temporary, { force: true });
-    // Errors of writeSync name no file: say which one could not be written.
-    if (error && typeof error === "object" && !("path" in error)) Object.assign(error, { path: temporary });
+    // Name the file being written, not its temporary name (writeSync's errors name no file at all).
+    if (error && typeof error === "object") Object.assign(error, { path });
     throw error;
   }
   return {

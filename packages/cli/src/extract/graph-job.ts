@@ -120,7 +120,8 @@ export function computeGraph(
       warnings,
     };
   } catch (error) {
-    return { ok: false, failure: graphFailureOf(error, relativeFile), warnings };
+    // The absolute file, like a reader error's: saveGraph makes every failure's file relative once.
+    return { ok: false, failure: graphFailureOf(error, entry.file), warnings };
   }
 }
 

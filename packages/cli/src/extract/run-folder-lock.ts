@@ -106,9 +106,7 @@ function takeOver(lock: string, temporary: string, holder: LockHolder | null, mi
   try {
     const now = readHolder(lock);
     if (now !== "gone" && JSON.stringify(now) !== JSON.stringify(holder)) return false;
-    const copy = `${temporary}.copy`;
-    writeFileSync(copy, readFileSync(temporary));
-    renameSync(copy, lock);
+    renameSync(temporary, lock);
     return true;
   } finally {
     rmSync(guard, { force: true });

@@ -4,7 +4,7 @@
  * named like our temporary files; a file given as --out fails before any graph is read; the dataset's own
  * folder, or a run folder holding an input, is refused.
  */
-import { mkdirSync, readFileSync, rmSync, statSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { folderContents, SMALL_DATASET, similarityDataset } from "./extract-fixtures.js";
@@ -60,6 +60,27 @@ describe("extract --out: whose folder it is", () => {
     expect(run.stderr).toContain("written by an earlier cliquescape, mark it as one");
     writeFileSync(marker, text);
     expect(runCli(["extract", join(dir, "manifest.csv"), "--out", out]).status).toBe(0);
+  });
+
+  it("a run that stops before writing anything (a bad spec) leaves no folder and no marker behind", () => {
+    const root = scratchFiles({ "bad.json": '{"complex":{"topDim":"x"}}\n' });
+    const fresh = join(root, "run");
+    const empty = join(root, "empty");
+    mkdirSync(empty);
+    for (const out of [fresh, empty]) {
+      const run = runCli([
+        "extract",
+        join(dir, "manifest.csv"),
+        "--out",
+        out,
+        "--spec",
+        join(root, "bad.json"),
+      ]);
+      expect(run.status).toBe(2);
+      expect(run.stderr).toContain("invalid run spec");
+    }
+    expect(existsSync(fresh)).toBe(false);
+    expect(readdirSync(empty)).toEqual([]);
   });
 
   it("--out naming a file fails at once, before the first pass reads any graph", () => {

@@ -69,7 +69,11 @@ export async function showGraphPage(
     h("span", { class: "toggle" }, "Save"),
     button("PNG", () => void canvas.png().then((png) => download(`${stem}.png`, png))),
     button("SVG", () =>
-      download(`${stem}.svg`, graphSvg(canvas.cy, title, canvas.loopEdgeNumbers()), "image/svg+xml"),
+      download(
+        `${stem}.svg`,
+        graphSvg(canvas.cy, analysis, canvas.shownEdgeCount(), title, canvas.loopEdgeNumbers()),
+        "image/svg+xml",
+      ),
     ),
     button("loop CSV", () => {
       if (chosen === null || !loops.has(chosen)) {

@@ -1,15 +1,22 @@
 import type { Core } from "cytoscape";
+import type { GraphAnalysis } from "../compute/graph-analysis.js";
 import { PALETTE } from "../palette.js";
 
 const escapeXml = (text: string) =>
   text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 
 /**
- * The graph as drawn, as an SVG document: the edges shown at the current threshold, the nodes, and the
- * loop (given by its edge numbers; none when empty) emphasised as on screen. Positions are cytoscape's
- * model positions.
+ * The graph as drawn, as an SVG document: the edges shown at the current threshold (the first `shownEdges`
+ * in entering order), the nodes, and the loop (given by its edge numbers; none when empty) emphasised as on
+ * screen. Positions are cytoscape's model positions.
  */
-export function graphSvg(cy: Core, title: string, loopEdgeNumbers: number[]): string {
+export function graphSvg(
+  cy: Core,
+  analysis: Pick<GraphAnalysis, "sources" | "targets" | "directed">,
+  shownEdges: number,
+  title: string,
+  loopEdgeNumbers: number[],
+): string {
   const nodes = cy.nodes();
   const box = nodes.boundingBox({});
   const pad = 20;
@@ -17,23 +24,26 @@ export function graphSvg(cy: Core, title: string, loopEdgeNumbers: number[]): st
   const y0 = box.y1 - pad;
   const width = Math.max(1, box.w + 2 * pad);
   const height = Math.max(1, box.h + 2 * pad);
-  const directed = cy.edges().some((edge) => edge.style("target-arrow-shape") !== "none");
+  const { sources, targets, directed } = analysis;
   // While a loop is shown, everything else is drawn faded, as on screen.
-  let loopEdges = cy.collection();
-  for (const e of loopEdgeNumbers) loopEdges = loopEdges.union(cy.getElementById(`e${e}`));
-  const faded = loopEdges.nonempty();
-  const loopNodes = loopEdges.connectedNodes();
+  const loopEdges = new Set(loopEdgeNumbers);
+  const faded = loopEdges.size > 0;
+  let loopNodes = cy.collection();
+  for (const e of loopEdges)
+    loopNodes = loopNodes
+      .union(cy.getElementById(`n${sources[e]}`))
+      .union(cy.getElementById(`n${targets[e]}`));
+  const at = nodes.map((node) => node.position());
   const lines: string[] = [];
-  cy.edges().forEach((edge) => {
-    if (edge.hasClass("absent")) return;
-    const s = edge.source().position();
-    const t = edge.target().position();
-    const loop = loopEdges.contains(edge);
+  for (let e = 0; e < shownEdges; e++) {
+    const s = at[sources[e]];
+    const t = at[targets[e]];
+    const loop = loopEdges.has(e);
     const colour = loop ? PALETTE.loop : faded ? PALETTE.edgeDimmed : PALETTE.edge;
     lines.push(
       `<line x1="${s.x.toFixed(1)}" y1="${s.y.toFixed(1)}" x2="${t.x.toFixed(1)}" y2="${t.y.toFixed(1)}" stroke="${colour}" stroke-width="${loop ? 4 : 1}"${directed ? ' marker-end="url(#arrow)"' : ""}${loop ? ' class="loop"' : ""}/>`,
     );
-  });
+  }
   const circles: string[] = [];
   nodes.forEach((node) => {
     const p = node.position();

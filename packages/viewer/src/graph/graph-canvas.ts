@@ -1,23 +1,23 @@
-import type { Core, EdgeCollection, ElementDefinition } from "cytoscape";
+import type { Core, ElementDefinition } from "cytoscape";
 import type { GraphAnalysis } from "../compute/graph-analysis.js";
 import { cytoscape } from "./cytoscape-setup.js";
-import { graphStyle, loopLayerStyle } from "./graph-style.js";
+import { EdgeLayer } from "./edge-layer.js";
+import { graphStyle, loopLayerStyle, NODE_SIZE } from "./graph-style.js";
 import { layoutEdgeCount, placeNodes } from "./node-placement.js";
 
 /**
- * The graph drawn with cytoscape. Every edge is added once and shown or hidden as the threshold moves, so
- * node positions never change with the threshold; a threshold change touches only the edges that enter or
- * leave. A loop is drawn on a second, small cytoscape layer above a veil that fades the graph, and the
- * graph itself is not touched: the cost depends on the loop's length, not on the size of the graph
- * (restyling 40,000 edges to fade them took seconds, and any change to the main drawing redraws every edge).
+ * The graph drawn in three layers: the edges on a canvas of their own (EdgeLayer: the first edges in
+ * entering order, as the threshold says), the nodes with cytoscape (which also owns pan, zoom and the
+ * viewport), and a loop on a second, small cytoscape over a veil that fades the rest. Node positions never
+ * change with the threshold. Cytoscape drew tens of thousands of edges one element at a time and redrew
+ * them all on every change (a slider move took a second or more at 40,000 edges); the edge canvas strokes
+ * them as a few long paths and, when the threshold adds edges, only the new ones. A loop costs what its
+ * length costs: the main drawing is not touched.
  */
 export class GraphCanvas {
   readonly cy: Core;
   private readonly analysis: GraphAnalysis;
-  /** Every edge, in entering order (edge number e is edges[e]). */
-  private readonly edges: EdgeCollection;
-  /** Edges shown: the first `shown` edges in entering order. */
-  private shown: number;
+  private readonly edgeLayer: EdgeLayer;
   /** Edge number by node pair (u * n + v; both orders for undirected graphs). */
   private readonly edgeByPair = new Map<number, number>();
   private loopEdges: number[] = [];
@@ -31,14 +31,12 @@ export class GraphCanvas {
     const elements: ElementDefinition[] = [];
     for (let v = 0; v < n; v++) elements.push({ group: "nodes", data: { id: `n${v}`, label: labels[v] } });
     for (let e = 0; e < sources.length; e++) {
-      elements.push({
-        group: "edges",
-        data: { id: `e${e}`, source: `n${sources[e]}`, target: `n${targets[e]}` },
-      });
       this.edgeByPair.set(sources[e] * n + targets[e], e);
       if (!analysis.directed) this.edgeByPair.set(targets[e] * n + sources[e], e);
     }
     const large = sources.length > 5000;
+    const pixelRatio = large ? 1 : window.devicePixelRatio || 1;
+    this.edgeLayer = new EdgeLayer(container, analysis, pixelRatio);
     const layer = (name: string) => {
       const div = document.createElement("div");
       div.className = `graph-layer ${name}`;
@@ -59,12 +57,9 @@ export class GraphCanvas {
       maxZoom: 8,
       wheelSensitivity: 0.3,
       boxSelectionEnabled: false,
-      // Large graphs: draw cached textures while panning or zooming instead of every edge.
       textureOnViewport: large,
-      hideEdgesOnViewport: large,
-      pixelRatio: large ? 1 : "auto",
+      pixelRatio,
     });
-    this.edges = this.cy.edges();
     this.loopLayer = cytoscape({
       container: layer("graph-loop"),
       style: loopLayerStyle(analysis.directed),
@@ -74,7 +69,11 @@ export class GraphCanvas {
       autoungrabify: true,
       autounselectify: true,
     });
-    this.cy.on("viewport", () => this.loopLayer.viewport({ zoom: this.cy.zoom(), pan: this.cy.pan() }));
+    this.cy.on("viewport", () => {
+      const viewport = { zoom: this.cy.zoom(), pan: this.cy.pan() };
+      this.loopLayer.viewport(viewport);
+      this.edgeLayer.setViewport(viewport);
+    });
     // The drawing follows its box: refit on resize until the person pans or zooms it themselves.
     let moved = false;
     this.cy.on("scrollzoom pinchzoom dragpan", () => {
@@ -83,30 +82,56 @@ export class GraphCanvas {
     new ResizeObserver(() => {
       this.cy.resize();
       this.loopLayer.resize();
+      this.edgeLayer.resize();
       if (!moved) this.cy.fit(undefined, 24);
     }).observe(container);
-    // Every edge starts hidden; the threshold control shows the first ones.
-    this.edges.addClass("absent");
-    this.shown = 0;
+    this.edgeLayer.resize();
+    this.edgeLayer.setViewport({ zoom: this.cy.zoom(), pan: this.cy.pan() });
   }
 
   /** Places the nodes: the data's coordinates when given, else a force layout of the strongest edges. */
   async place(coordinates: Float64Array | null): Promise<void> {
-    const layoutEdges = this.edges.slice(0, layoutEdgeCount(this.analysis));
+    const { sources, targets } = this.analysis;
+    // The force layout pulls along the strongest edges: they join cytoscape for the layout only.
+    const layoutEdges = this.cy.add(
+      Array.from({ length: coordinates ? 0 : layoutEdgeCount(this.analysis) }, (_, e) => ({
+        group: "edges" as const,
+        data: { id: `e${e}`, source: `n${sources[e]}`, target: `n${targets[e]}` },
+      })),
+    );
     await placeNodes(this.cy, coordinates, layoutEdges);
+    this.cy.remove(layoutEdges);
     this.cy.fit(undefined, 24);
+    this.updateEdgeEnds();
   }
 
   /** Shows exactly the first `count` edges (those present at the current threshold). */
   showEdges(count: number): void {
-    if (count === this.shown) return;
-    const [from, to] = count > this.shown ? [this.shown, count] : [count, this.shown];
-    const changing = this.edges.slice(from, to);
-    this.cy.batch(() => {
-      if (count > this.shown) changing.removeClass("absent");
-      else changing.addClass("absent");
+    this.edgeLayer.show(count);
+  }
+
+  /** Edges shown at the current threshold. */
+  shownEdgeCount(): number {
+    return this.edgeLayer.shownCount();
+  }
+
+  /** Edges in the drawing on screen (drawing now what waits for the next frame). */
+  drawnEdgeCount(): number {
+    return this.edgeLayer.drawnEdges();
+  }
+
+  /** Tells the edge layer where the nodes are and how large they are drawn. */
+  private updateEdgeEnds(): void {
+    const n = this.analysis.n;
+    const xy = new Float64Array(2 * n);
+    const radii = new Float64Array(n);
+    this.cy.nodes().forEach((node, v) => {
+      const p = node.position();
+      xy[2 * v] = p.x;
+      xy[2 * v + 1] = p.y;
+      radii[v] = (node.hasClass("sized") ? Number(node.data("size")) : NODE_SIZE) / 2;
     });
-    this.shown = count;
+    this.edgeLayer.setNodes(xy, radii);
   }
 
   /** Draws the loop given as node pairs [u0, v0, u1, v1, …] above the faded graph; null clears it. */
@@ -124,10 +149,9 @@ export class GraphCanvas {
       if (e === undefined) continue;
       this.loopEdges.push(e);
       nodes.add(pairs[i]).add(pairs[i + 1]);
-      const edge = this.edges[e];
       elements.push({
         group: "edges",
-        data: { id: `e${e}`, source: edge.source().id(), target: edge.target().id() },
+        data: { id: `e${e}`, source: `n${this.analysis.sources[e]}`, target: `n${this.analysis.targets[e]}` },
       });
     }
     for (const v of nodes) {
@@ -147,19 +171,28 @@ export class GraphCanvas {
     return this.loopLayer.edges().map((edge) => [edge.source().data("label"), edge.target().data("label")]);
   }
 
-  /** The drawing as one PNG: the graph, and over it the veil and the loop when one is shown. */
+  /** The drawing as one PNG: the edges and nodes, and over them the veil and the loop when one is shown. */
   async png(): Promise<Blob> {
-    const options = { output: "blob-promise" as const, full: false, scale: 2, bg: "#ffffff" };
-    const base = await this.cy.png(options);
-    if (this.loopEdges.length === 0) return base;
-    const loop = await this.loopLayer.png({ ...options, bg: undefined });
-    const [under, over] = await Promise.all([createImageBitmap(base), createImageBitmap(loop)]);
-    const canvas = new OffscreenCanvas(under.width, under.height);
+    const scale = 2;
+    const options = { output: "blob-promise" as const, full: false, scale };
+    const nodes = await createImageBitmap(await this.cy.png(options));
+    const canvas = new OffscreenCanvas(nodes.width, nodes.height);
     const context = canvas.getContext("2d")!;
-    context.drawImage(under, 0, 0);
-    context.fillStyle = getComputedStyle(this.veil).backgroundColor;
+    context.fillStyle = "#ffffff";
     context.fillRect(0, 0, canvas.width, canvas.height);
-    context.drawImage(over, 0, 0, under.width, under.height);
+    // The edges at the saved picture's scale, under the nodes, as on screen.
+    const zoom = this.cy.zoom();
+    const pan = this.cy.pan();
+    context.setTransform(zoom * scale, 0, 0, zoom * scale, pan.x * scale, pan.y * scale);
+    this.edgeLayer.strokeEdges(context, 0, this.edgeLayer.shownCount());
+    context.setTransform(1, 0, 0, 1, 0, 0);
+    context.drawImage(nodes, 0, 0);
+    if (this.loopEdges.length > 0) {
+      const loop = await createImageBitmap(await this.loopLayer.png(options));
+      context.fillStyle = getComputedStyle(this.veil).backgroundColor;
+      context.fillRect(0, 0, canvas.width, canvas.height);
+      context.drawImage(loop, 0, 0, canvas.width, canvas.height);
+    }
     return canvas.convertToBlob({ type: "image/png" });
   }
 
@@ -188,10 +221,12 @@ export class GraphCanvas {
       });
       nodes.addClass("sized");
     });
+    this.updateEdgeEnds();
   }
 
   destroy(): void {
     this.cy.destroy();
     this.loopLayer.destroy();
+    this.edgeLayer.destroy();
   }
 }

@@ -1,6 +1,9 @@
 import type { StylesheetJson } from "cytoscape";
 import { PALETTE } from "../palette.js";
 
+/** Node diameter in model units (unless sized by participation). */
+export const NODE_SIZE = 9;
+
 /**
  * How the graph is drawn. Directed graphs get arrowheads (straight edges), undirected ones the cheaper
  * haystack edges. Nodes sized by participation read their size from `data(size)`.
@@ -10,8 +13,8 @@ export function graphStyle(directed: boolean, showLabels: boolean): StylesheetJs
     {
       selector: "node",
       style: {
-        width: 9,
-        height: 9,
+        width: NODE_SIZE,
+        height: NODE_SIZE,
         "background-color": PALETTE.node,
         "border-width": 0,
         label: showLabels ? "data(label)" : "",
@@ -35,7 +38,6 @@ export function graphStyle(directed: boolean, showLabels: boolean): StylesheetJs
           : {}),
       },
     },
-    { selector: "edge.absent", style: { display: "none" } },
   ];
 }
 

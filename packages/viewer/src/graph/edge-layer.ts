@@ -1,0 +1,198 @@
+import { PALETTE } from "../palette.js";
+
+/** Cytoscape's viewport: model coordinates times zoom, plus pan, give CSS pixels. */
+export interface Viewport {
+  zoom: number;
+  pan: { x: number; y: number };
+}
+
+/** Edges stroked per path: long enough to batch, short enough to keep each path's rasterisation cheap. */
+const EDGES_PER_PATH = 2000;
+/** Arrowheads as cytoscape draws `triangle` at arrow-scale 0.7 on a 1-unit edge: about 6 units long and wide. */
+const ARROW_LENGTH = 6;
+const ARROW_HALF_WIDTH = 3;
+
+/**
+ * The graph's edges, drawn on one canvas under cytoscape's nodes: the first `count` edges in entering order,
+ * stroked as a few long paths in model coordinates (width 1 model unit, as cytoscape draws them), arrowheads
+ * for directed graphs. Cytoscape drew each edge as an element and redrew them all on any change (about a
+ * second at 20,000 edges); here a threshold that adds edges strokes only the new ones over the drawing,
+ * and one that removes edges redraws the rest at once. Drawing waits for the next animation frame, so many
+ * moves within one frame cost one drawing.
+ */
+export class EdgeLayer {
+  readonly canvas: HTMLCanvasElement;
+  private readonly context: CanvasRenderingContext2D;
+  private readonly sources: Int32Array;
+  private readonly targets: Int32Array;
+  private readonly directed: boolean;
+  private readonly pixelRatio: number;
+  /** Node centres (x, y per node) and radii, in model units. */
+  private readonly xy: Float64Array;
+  private readonly radii: Float64Array;
+  private viewport: Viewport = { zoom: 1, pan: { x: 0, y: 0 } };
+  /** Edges that should be drawn, and edges the canvas holds now (null: it must be cleared first). */
+  private count = 0;
+  private drawn: number | null = null;
+  private frame = 0;
+
+  constructor(
+    container: HTMLElement,
+    edges: { sources: Int32Array; targets: Int32Array; directed: boolean; n: number },
+    pixelRatio: number,
+  ) {
+    this.sources = edges.sources;
+    this.targets = edges.targets;
+    this.directed = edges.directed;
+    this.pixelRatio = pixelRatio;
+    this.xy = new Float64Array(2 * edges.n);
+    this.radii = new Float64Array(edges.n).fill(4.5);
+    this.canvas = document.createElement("canvas");
+    this.canvas.className = "graph-layer graph-edges";
+    container.append(this.canvas);
+    this.context = this.canvas.getContext("2d")!;
+  }
+
+  /** Node centres and radii (model units), after the nodes are placed or resized. */
+  setNodes(xy: Float64Array, radii: Float64Array): void {
+    this.xy.set(xy);
+    this.radii.set(radii);
+    this.invalidate();
+  }
+
+  setViewport(viewport: Viewport): void {
+    this.viewport = { zoom: viewport.zoom, pan: { ...viewport.pan } };
+    this.invalidate();
+  }
+
+  /** Matches the canvas to its box (CSS pixels times the pixel ratio). */
+  resize(): void {
+    const width = Math.max(1, Math.round(this.canvas.clientWidth * this.pixelRatio));
+    const height = Math.max(1, Math.round(this.canvas.clientHeight * this.pixelRatio));
+    if (width === this.canvas.width && height === this.canvas.height) return;
+    this.canvas.width = width;
+    this.canvas.height = height;
+    this.invalidate();
+  }
+
+  /** Shows exactly the first `count` edges; drawn at the next animation frame. */
+  show(count: number): void {
+    if (count === this.count) return;
+    // Fewer edges than drawn: start again from a clear canvas.
+    if (this.drawn !== null && count < this.drawn) this.drawn = null;
+    this.count = count;
+    this.schedule();
+  }
+
+  /** How many edges are drawn (drawing now what is pending). */
+  drawnEdges(): number {
+    this.flush();
+    return this.drawn ?? 0;
+  }
+
+  /** Draws what is pending now instead of at the next frame. */
+  flush(): void {
+    if (this.frame) cancelAnimationFrame(this.frame);
+    this.frame = 0;
+    const from = this.drawn ?? 0;
+    if (this.drawn === null) {
+      this.context.setTransform(1, 0, 0, 1, 0, 0);
+      this.context.clearRect(0, 0, this.canvas.width, this.canvas.height);
+    } else if (this.drawn === this.count) return;
+    const { zoom, pan } = this.viewport;
+    const r = this.pixelRatio;
+    this.context.setTransform(zoom * r, 0, 0, zoom * r, pan.x * r, pan.y * r);
+    this.strokeEdges(this.context, from, this.count);
+    this.drawn = this.count;
+  }
+
+  /**
+   * Strokes edges [from, to) in model coordinates on a context whose transform maps the model to its
+   * pixels (also used to draw the edges into a saved picture).
+   */
+  strokeEdges(
+    context: CanvasRenderingContext2D | OffscreenCanvasRenderingContext2D,
+    from: number,
+    to: number,
+  ) {
+    const { sources, targets, xy, radii, directed } = this;
+    context.lineWidth = 1;
+    context.strokeStyle = PALETTE.edge;
+    context.fillStyle = PALETTE.edge;
+    context.lineCap = "butt";
+    for (let start = from; start < to; start += EDGES_PER_PATH) {
+      const end = Math.min(to, start + EDGES_PER_PATH);
+      context.beginPath();
+      for (let e = start; e < end; e++) {
+        const s = sources[e];
+        const t = targets[e];
+        const x0 = xy[2 * s];
+        const y0 = xy[2 * s + 1];
+        const x1 = xy[2 * t];
+        const y1 = xy[2 * t + 1];
+        if (!directed) {
+          // Centre to centre, as cytoscape's haystack edges.
+          context.moveTo(x0, y0);
+          context.lineTo(x1, y1);
+          continue;
+        }
+        // Border to the arrowhead's base; the arrowhead's tip touches the target's border.
+        const dx = x1 - x0;
+        const dy = y1 - y0;
+        const length = Math.hypot(dx, dy) || 1;
+        const ux = dx / length;
+        const uy = dy / length;
+        const tip = length - radii[t];
+        const base = tip - ARROW_LENGTH;
+        if (base <= radii[s]) continue;
+        context.moveTo(x0 + ux * radii[s], y0 + uy * radii[s]);
+        context.lineTo(x0 + ux * base, y0 + uy * base);
+      }
+      context.stroke();
+      if (!directed) continue;
+      context.beginPath();
+      for (let e = start; e < end; e++) {
+        const s = sources[e];
+        const t = targets[e];
+        const x0 = xy[2 * s];
+        const y0 = xy[2 * s + 1];
+        const dx = xy[2 * t] - x0;
+        const dy = xy[2 * t + 1] - y0;
+        const length = Math.hypot(dx, dy) || 1;
+        const ux = dx / length;
+        const uy = dy / length;
+        const tip = length - radii[t];
+        const base = tip - ARROW_LENGTH;
+        if (base <= radii[s]) continue;
+        context.moveTo(x0 + ux * tip, y0 + uy * tip);
+        context.lineTo(x0 + ux * base - uy * ARROW_HALF_WIDTH, y0 + uy * base + ux * ARROW_HALF_WIDTH);
+        context.lineTo(x0 + ux * base + uy * ARROW_HALF_WIDTH, y0 + uy * base - ux * ARROW_HALF_WIDTH);
+        context.closePath();
+      }
+      context.fill();
+    }
+  }
+
+  /** Edges shown at the current threshold. */
+  shownCount(): number {
+    return this.count;
+  }
+
+  private invalidate(): void {
+    this.drawn = null;
+    this.schedule();
+  }
+
+  private schedule(): void {
+    if (this.frame) return;
+    this.frame = requestAnimationFrame(() => {
+      this.frame = 0;
+      this.flush();
+    });
+  }
+
+  destroy(): void {
+    if (this.frame) cancelAnimationFrame(this.frame);
+    this.canvas.remove();
+  }
+}

@@ -8,6 +8,12 @@ export interface Viewport {
 
 /** Edges stroked per path: long enough to batch, short enough to keep each path's rasterisation cheap. */
 const EDGES_PER_PATH = 2000;
+/**
+ * The drawing of the first k × CHECKPOINT_EDGES edges is kept as a picture, so a move that removes edges
+ * starts from the nearest kept picture below it instead of a clear canvas: any move strokes fewer than this
+ * many edges, plus the edges it adds. About 2 MB of pixels per picture at 1000 × 500.
+ */
+const CHECKPOINT_EDGES = 4000;
 /** Arrowheads as cytoscape draws `triangle` at arrow-scale 0.7 on a 1-unit edge: about 6 units long and wide. */
 const ARROW_LENGTH = 6;
 const ARROW_HALF_WIDTH = 3;
@@ -35,6 +41,8 @@ export class EdgeLayer {
   private count = 0;
   private drawn: number | null = null;
   private frame = 0;
+  /** checkpoints[k]: the canvas's pixels with the first k × CHECKPOINT_EDGES edges drawn (k ≥ 1). */
+  private checkpoints: (OffscreenCanvas | undefined)[] = [];
 
   constructor(
     container: HTMLElement,
@@ -78,7 +86,7 @@ export class EdgeLayer {
   /** Shows exactly the first `count` edges; drawn at the next animation frame. */
   show(count: number): void {
     if (count === this.count) return;
-    // Fewer edges than drawn: start again from a clear canvas.
+    // Fewer edges than drawn: start again from a kept picture or a clear canvas.
     if (this.drawn !== null && count < this.drawn) this.drawn = null;
     this.count = count;
     this.schedule();
@@ -94,16 +102,38 @@ export class EdgeLayer {
   flush(): void {
     if (this.frame) cancelAnimationFrame(this.frame);
     this.frame = 0;
-    const from = this.drawn ?? 0;
-    if (this.drawn === null) {
-      this.context.setTransform(1, 0, 0, 1, 0, 0);
-      this.context.clearRect(0, 0, this.canvas.width, this.canvas.height);
-    } else if (this.drawn === this.count) return;
+    const count = this.count;
+    if (this.drawn === count) return;
+    const context = this.context;
+    // Start from the kept picture nearest below the goal when it is ahead of what the canvas holds.
+    let k = Math.min(Math.floor(count / CHECKPOINT_EDGES), this.checkpoints.length - 1);
+    while (k > 0 && !this.checkpoints[k]) k--;
+    const kept = k > 0 ? k * CHECKPOINT_EDGES : 0;
+    if (this.drawn === null || kept > this.drawn) {
+      context.setTransform(1, 0, 0, 1, 0, 0);
+      context.clearRect(0, 0, this.canvas.width, this.canvas.height);
+      if (k > 0) context.drawImage(this.checkpoints[k]!, 0, 0);
+      this.drawn = kept;
+    }
     const { zoom, pan } = this.viewport;
     const r = this.pixelRatio;
-    this.context.setTransform(zoom * r, 0, 0, zoom * r, pan.x * r, pan.y * r);
-    this.strokeEdges(this.context, from, this.count);
-    this.drawn = this.count;
+    let from = this.drawn;
+    while (from < count) {
+      // Stroke up to the next checkpoint, and keep the picture there if it is not kept yet.
+      const next = (Math.floor(from / CHECKPOINT_EDGES) + 1) * CHECKPOINT_EDGES;
+      const to = Math.min(count, next);
+      context.setTransform(zoom * r, 0, 0, zoom * r, pan.x * r, pan.y * r);
+      this.strokeEdges(context, from, to);
+      if (to === next && !this.checkpoints[to / CHECKPOINT_EDGES]) this.keep(to / CHECKPOINT_EDGES);
+      from = to;
+    }
+    this.drawn = count;
+  }
+
+  private keep(k: number): void {
+    const picture = new OffscreenCanvas(this.canvas.width, this.canvas.height);
+    picture.getContext("2d")!.drawImage(this.canvas, 0, 0);
+    this.checkpoints[k] = picture;
   }
 
   /**
@@ -180,6 +210,7 @@ export class EdgeLayer {
 
   private invalidate(): void {
     this.drawn = null;
+    this.checkpoints = [];
     this.schedule();
   }
 

@@ -121,7 +121,7 @@ export async function showGraphPage(
     download(`${stem}-barcode.svg`, chartSvg(barcode.chart), "image/svg+xml"),
   );
   diagramFigure.save.addEventListener("click", () =>
-    download(`${stem}-diagram.svg`, chartSvg(diagram.chart), "image/svg+xml"),
+    download(`${stem}-diagram.svg`, diagram.svg(), "image/svg+xml"),
   );
 
   let participationRequest = 0;

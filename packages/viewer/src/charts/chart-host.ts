@@ -12,8 +12,11 @@ export function createChart(element: HTMLElement): EChartsType {
   return chart;
 }
 
-/** The chart as a standalone SVG document, for saving: the same option, drawn by ECharts' SVG renderer. */
-export function chartSvg(chart: EChartsType): string {
+/**
+ * The chart as a standalone SVG document, for saving: the same option, drawn by ECharts' SVG renderer, with
+ * `extra` merged in (what the chart draws on screen outside its option).
+ */
+export function chartSvg(chart: EChartsType, extra?: Record<string, unknown>): string {
   const box = document.createElement("div");
   box.style.cssText = `position: absolute; left: -100000px; width: ${chart.getWidth()}px; height: ${chart.getHeight()}px`;
   document.body.append(box);
@@ -24,6 +27,7 @@ export function chartSvg(chart: EChartsType): string {
   });
   try {
     copy.setOption({ ...chart.getOption(), animation: false });
+    if (extra) copy.setOption(extra);
     return copy.renderToSVGString();
   } finally {
     copy.dispose();

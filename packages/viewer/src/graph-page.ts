@@ -115,7 +115,7 @@ export async function showGraphPage(
   const barcode = new BarcodeChart(barcodeFigure.body, analysis, (bar) => void chooseBar(bar));
   const diagram = new DiagramChart(diagramFigure.body, analysis, (bar) => void chooseBar(bar));
   curvesFigure.save.addEventListener("click", () =>
-    download(`${stem}-curves.svg`, chartSvg(curves.chart), "image/svg+xml"),
+    download(`${stem}-curves.svg`, curves.svg(), "image/svg+xml"),
   );
   barcodeFigure.save.addEventListener("click", () =>
     download(`${stem}-barcode.svg`, chartSvg(barcode.chart), "image/svg+xml"),

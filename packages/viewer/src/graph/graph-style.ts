@@ -5,8 +5,10 @@ import { PALETTE } from "../palette.js";
 export const NODE_SIZE = 9;
 
 /**
- * How the graph is drawn. Directed graphs get arrowheads (straight edges), undirected ones the cheaper
- * haystack edges. Nodes sized by participation read their size from `data(size)`.
+ * How cytoscape draws the graph's nodes (nodes sized by participation read their size from `data(size)`),
+ * and the edges it holds: the loop layer's, and the strongest edges while the force layout runs. The graph's
+ * own edges are drawn by the edge layer (edge-layer.ts), in the same manner: arrowheads on straight edges
+ * for directed graphs, centre-to-centre lines (haystack) for undirected ones.
  */
 export function graphStyle(directed: boolean, showLabels: boolean): StylesheetJson {
   return [

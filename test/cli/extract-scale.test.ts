@@ -15,10 +15,10 @@ import { afterAll, describe, expect, it } from "vitest";
 import { readFeatureTable } from "./extract-fixtures.js";
 import { runCli, scratchFiles } from "./run-cli.js";
 
-// A million graphs run in about 4 minutes of CPU on 2 cores, most of it the million per-graph record files
-// of the run folder (docs/benchmarks.md); the suite runs 150,000 (more than the 130,000 that once failed),
-// CLIQUESCAPE_SCALE_GRAPHS=1000000 runs the million.
-const GRAPHS = Number(process.env.CLIQUESCAPE_SCALE_GRAPHS ?? 150_000);
+// The issue asks for a million graphs end to end, so the suite runs a million: about 3 minutes of CPU on 2
+// cores, most of it the million per-graph record files of the run folder (docs/benchmarks.md).
+// CLIQUESCAPE_SCALE_GRAPHS=N runs another size while working on the writers.
+const GRAPHS = Number(process.env.CLIQUESCAPE_SCALE_GRAPHS ?? 1_000_000);
 const dirs: string[] = [];
 const manyFiles: string[] = [];
 afterAll(() => {

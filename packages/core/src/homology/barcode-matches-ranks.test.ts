@@ -93,13 +93,17 @@ describe("barcode against direct ranks", () => {
 });
 
 describe("barcode against direct ranks on larger complete graphs", () => {
-  // Complete graphs of 18–24 vertices with random weights make long reductions: stored columns are
-  // regenerated from their chains many times over, and the lazy column widens its horizon repeatedly.
+  // Complete graphs of 18–36 vertices with random weights make long reductions: stored columns are
+  // regenerated from their chains many times over, the lazy column widens its horizon repeatedly, and from
+  // 24 vertices on some finished columns keep their sorted reduced entries (stats.storedColumns), read by
+  // cursors and continued from their chains past the stored cover.
   for (const [n, seed, prime] of [
     [18, 3, 2],
     [20, 4, 2],
     [22, 5, 3],
     [24, 6, 2],
+    [30, 7, 3],
+    [36, 8, 2],
   ]) {
     it(`n=${n}, seed ${seed}, Z/${prime}`, () => {
       const g = randomGraph(n, 1, 1000, seed, false);
@@ -109,6 +113,7 @@ describe("barcode against direct ranks on larger complete graphs", () => {
       const sparse = computeBarcode(g, { semantics: "distance", maxDim: 2, prime, cliqueLayout: "sparse" });
       expect(sparse.bars).toEqual(dense.bars);
       expect(dense.stats.columnAdditions[2]).toBeGreaterThan(0);
+      if (n >= 30) expect(dense.stats.storedColumns[2]).toBeGreaterThan(0);
       for (const threshold of thresholds) {
         expect(bettiFromBarcode(dense, threshold)).toEqual(
           bettiAt(g, { threshold, semantics: "distance", maxDim: 2, prime }),

@@ -32,6 +32,11 @@ export interface BarcodeStats {
   readonly columnsReduced: number[];
   /** Column additions performed during the reduction. */
   readonly columnAdditions: number[];
+  /**
+   * Finished columns with long chains that kept their sorted reduced entries, so that adding them reads
+   * entries instead of regenerating the coboundaries of their chains.
+   */
+  readonly storedColumns: number[];
   /** Highest number of bytes held in tables, heaps and columns. */
   readonly peakBytes: number;
   /** How coboundaries were produced. */

@@ -6,6 +6,7 @@ import type { ByteLedger } from "./homology-budget.js";
 import { KeyMap } from "./key-map.js";
 import { LazyColumn } from "./lazy-column.js";
 import { modP, type PrimeField } from "./prime-field.js";
+import { ReducedEntries } from "./reduced-entries.js";
 import type { PairSink } from "./union-find-pairs.js";
 
 /** Work counters of one dimension. */
@@ -16,6 +17,7 @@ export interface ReductionCounters {
   emergent: number;
   reduced: number;
   additions: number;
+  stored: number;
 }
 
 /**
@@ -33,6 +35,10 @@ export interface ReductionCounters {
  *   facet is σ is paired with τ without touching the matrix;
  * - emergent pairs: when the earliest coface of σ enters with σ and no earlier column claimed it, σ pairs
  *   with it at once and the rest of the coboundary is never produced.
+ *
+ * Finished columns whose chains are long also keep their reduced entries, sorted, up to a cover value;
+ * adding one reads them through a cursor only as far as the pivot search goes, and continues from its
+ * chain past the cover (see ReducedEntries and LazyColumn.addStored).
  *
  * Returns the pivots found (keys of dim+1 simplices that killed a class): the next dimension clears them.
  */
@@ -56,6 +62,7 @@ export function reduceDimension(
     emergent: 0,
     reduced: 0,
     additions: 0,
+    stored: 0,
   };
 
   // Which columns need work.
@@ -98,6 +105,25 @@ export function reduceDimension(
   const store = new ColumnStore(ledger);
   const work = new LazyColumn(ledger);
   const chain = new ChainBuilder(ledger);
+  // Columns with long chains also keep their sorted reduced entries (up to a cover value): adding one
+  // then reads entries only as far as the pivot search goes, instead of regenerating the coboundary of
+  // every chain simplex. The stored columns added to the working column are listed apart from its chain.
+  const entries = new ReducedEntries(ledger);
+  let storedAdded: Int32Array = new Int32Array(64);
+  let storedFactor: Int32Array = new Int32Array(64);
+  let storedDone: Uint8Array = new Uint8Array(64);
+  let storedCount = 0;
+  // A stored column whose cursor ran out: its entries past the cover, up to the horizon, go to the heap.
+  work.attach(entries, (a) => {
+    storedDone[a] = 1;
+    const owner = storedAdded[a];
+    const cover = entries.cover[owner];
+    if (cover >= work.horizon) return;
+    const bandLow = work.bandLow;
+    work.bandLow = cover;
+    pushChain(model, dim, store, owner, storedFactor[a], p, work);
+    work.bandLow = bandLow;
+  });
   let compactAt = 1024;
   ledger.reserve(todoCount * 8, `sorting the ${dim}-simplex values`);
   const sortedCount = todoCount;
@@ -105,6 +131,32 @@ export function reduceDimension(
   for (let c = 0; c < todoCount; c++) sortedF[c] = lf[columns[c]];
   sortedF.sort();
   const firstWindow = 64;
+  let window = firstWindow;
+  let horizonRank = 0;
+  // The heap ran dry below the horizon: double the window and push every source again for the new band.
+  const raiseHorizon = (): void => {
+    window *= 2;
+    horizonRank += window;
+    const oldHorizon = work.horizon;
+    work.bandLow = oldHorizon;
+    work.horizon = horizonRank < sortedCount ? sortedF[horizonRank] : Number.POSITIVE_INFINITY;
+    if (chain.size > compactAt) {
+      chain.compact(p);
+      compactAt = Math.max(1024, chain.size * 2);
+    }
+    for (let e = 0; e < chain.size; e++)
+      model.pushCoboundary(dim, chain.key[e], chain.f[e], chain.coef[e], p, work);
+    // Stored columns read their entries up to their cover; past it (once read), their chains are pushed.
+    for (let a = 0; a < storedCount; a++) {
+      if (storedDone[a] === 0) continue;
+      const owner = storedAdded[a];
+      const cover = entries.cover[owner];
+      if (cover >= work.horizon) continue;
+      work.bandLow = Math.max(cover, oldHorizon);
+      pushChain(model, dim, store, owner, storedFactor[a], p, work);
+    }
+    work.bandLow = Number.NEGATIVE_INFINITY;
+  };
 
   // Progress counts every column: those settled while choosing, then the ones reduced here.
   const settledUpFront = list.count - todoCount;
@@ -116,6 +168,7 @@ export function reduceDimension(
     chain.clear();
     chain.push(key, f, 1);
     compactAt = 1024;
+    storedCount = 0;
 
     // Emergent pair: the earliest coface enters with σ and nobody has claimed it.
     const first = model.zeroCoface(dim, key, f);
@@ -143,24 +196,14 @@ export function reduceDimension(
       if (sortedF[mid] <= f) lo = mid + 1;
       else hi = mid;
     }
-    let window = firstWindow;
-    let horizonRank = lo + window;
+    window = firstWindow;
+    horizonRank = lo + window;
     work.horizon = horizonRank < sortedCount ? sortedF[horizonRank] : Number.POSITIVE_INFINITY;
     model.pushCoboundary(dim, key, f, 1, p, work);
     for (;;) {
       if (!work.settle()) {
         if (work.deferred) {
-          window *= 2;
-          horizonRank += window;
-          work.bandLow = work.horizon;
-          work.horizon = horizonRank < sortedCount ? sortedF[horizonRank] : Number.POSITIVE_INFINITY;
-          if (chain.size > compactAt) {
-            chain.compact(p);
-            compactAt = Math.max(1024, chain.size * 2);
-          }
-          for (let e = 0; e < chain.size; e++)
-            model.pushCoboundary(dim, chain.key[e], chain.f[e], chain.coef[e], p, work);
-          work.bandLow = Number.NEGATIVE_INFINITY;
+          raiseHorizon();
           continue;
         }
         sink.essential(dim, key, f);
@@ -174,6 +217,23 @@ export function reduceDimension(
         // Cancel the pivot with the column that owns it: add -(c / c_owner) times that column, regenerated
         // from its chain.
         const factor = ((p - pivotCoef) * inverse[store.pivotCoef[owner]]) % p;
+        if (entries.has(owner)) {
+          if (storedCount === storedAdded.length) {
+            storedAdded = grownInt(storedAdded, storedCount * 2);
+            storedFactor = grownInt(storedFactor, storedCount * 2);
+            const done = new Uint8Array(storedCount * 2);
+            done.set(storedDone);
+            storedDone = done;
+          }
+          storedAdded[storedCount] = owner;
+          storedFactor[storedCount] = factor;
+          storedDone[storedCount++] = 0;
+          const from = entries.start[owner];
+          work.addStored(from, from + entries.length[owner], factor);
+          if ((counters.additions & 63) === 0) monitor.check(settledUpFront + c);
+          counters.additions++;
+          continue;
+        }
         const chainFrom = store.chainStart[owner];
         const chainTo = chainFrom + store.chainLength[owner];
         const ck = store.chainKey;
@@ -204,10 +264,26 @@ export function reduceDimension(
           continue;
         }
       }
-      // A new pivot: keep the chain.
+      // A new pivot: keep the chain (with the chains of the stored columns added), and the reduced
+      // entries up to the horizon when the chain is long.
+      for (let a = 0; a < storedCount; a++) {
+        const owner = storedAdded[a];
+        const factor = storedFactor[a];
+        const chainTo = store.chainStart[owner] + store.chainLength[owner];
+        for (let e = store.chainStart[owner]; e < chainTo; e++)
+          chain.push(store.chainKey[e], store.chainF[e], (factor * store.chainCoef[e]) % p);
+      }
       const id = store.open(pivotCoef);
       chain.compact(p);
       store.setChain(id, chain.key, chain.f, chain.coef, chain.size);
+      if (chain.size >= STORE_ENTRIES_FROM_CHAIN) {
+        const from = entries.used;
+        const cover = work.drainInto(entries, STORED_ENTRIES_PER_COLUMN, Number.NEGATIVE_INFINITY);
+        if (cover !== Number.NEGATIVE_INFINITY) {
+          entries.close(id, from, cover);
+          counters.stored++;
+        } else entries.used = from;
+      }
       pivots.set(pivotKey, id);
       if (pivotF > f || keepZeroLength) sink.pair(dim, key, f, pivotKey, pivotF);
       break;
@@ -215,10 +291,40 @@ export function reduceDimension(
   }
   work.dispose();
   chain.dispose();
+  entries.dispose();
   ledger.release(sortedCount * 8);
   store.dispose();
   ledger.release(list.count * 4);
   return { pivots, counters };
+}
+
+/** Chains at least this long keep their reduced entries (regenerating a short chain costs little). */
+const STORE_ENTRIES_FROM_CHAIN = 16;
+/** Reduced entries kept per column (more when entries tie at the last value). */
+const STORED_ENTRIES_PER_COLUMN = 2048;
+
+/** Pushes factor × the coboundary of a finished column, regenerated from its chain. */
+function pushChain(
+  model: CoboundaryModel,
+  dim: number,
+  store: ColumnStore,
+  owner: number,
+  factor: number,
+  p: number,
+  work: LazyColumn,
+): void {
+  const chainTo = store.chainStart[owner] + store.chainLength[owner];
+  const ck = store.chainKey;
+  const cf = store.chainF;
+  const cc = store.chainCoef;
+  for (let e = store.chainStart[owner]; e < chainTo; e++)
+    model.pushCoboundary(dim, ck[e], cf[e], (factor * cc[e]) % p, p, work);
+}
+
+function grownInt(a: Int32Array, size: number): Int32Array {
+  const b = new Int32Array(size);
+  b.set(a);
+  return b;
 }
 
 /** Whether `coface` is the partner of an apparent pair with a facet other than `self`. */

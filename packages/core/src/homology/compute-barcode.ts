@@ -93,6 +93,7 @@ export function computeBarcode(graph: WeightedGraph, options: BarcodeOptions): B
     emergentPairs: zeros(),
     columnsReduced: zeros(),
     columnAdditions: zeros(),
+    storedColumns: zeros(),
     peakBytes: 0,
     representation,
   };
@@ -119,6 +120,7 @@ export function computeBarcode(graph: WeightedGraph, options: BarcodeOptions): B
     stats.emergentPairs[dim] = counters.emergent;
     stats.columnsReduced[dim] = counters.reduced;
     stats.columnAdditions[dim] = counters.additions;
+    stats.storedColumns[dim] = counters.stored;
   }
   cleared.dispose();
   stats.peakBytes = ledger.peak;

@@ -1,6 +1,7 @@
 import { CofaceHeap } from "./coface-heap.js";
 import type { CofaceSink } from "./coface-sink.js";
 import type { ByteLedger } from "./homology-budget.js";
+import type { ReducedEntries } from "./reduced-entries.js";
 
 /**
  * The column being reduced in implicit matrix reduction: a binary min-heap of (f, key, coefficient) entries
@@ -32,8 +33,32 @@ export class LazyColumn implements CofaceSink {
   horizon = Number.POSITIVE_INFINITY;
   bandLow = Number.NEGATIVE_INFINITY;
 
+  /**
+   * Stored reduced columns added to this one, read lazily: each cursor walks its column's sorted entries
+   * (scaled by its factor) only as far as the pivot search goes. A min-heap of cursor ids by head entry.
+   */
+  private entries: ReducedEntries | null = null;
+  private cursorPos = new Int32Array(64);
+  private cursorEnd = new Int32Array(64);
+  private cursorFactor = new Int32Array(64);
+  private cursorHeap = new Int32Array(64);
+  private cursorCount = 0;
+  private cursorsOpened = 0;
+
   constructor(ledger: ByteLedger, capacity = 1024) {
     this.heap = new CofaceHeap(ledger, capacity);
+  }
+
+  /** Told when a cursor has given its last stored entry (its id is the order of addStored calls). */
+  private onExhausted: ((cursor: number) => void) | null = null;
+
+  /**
+   * Where the stored columns given to addStored keep their entries, and who pushes a stored column's
+   * entries past its cover once its cursor has run out.
+   */
+  attach(entries: ReducedEntries, onExhausted: (cursor: number) => void): void {
+    this.entries = entries;
+    this.onExhausted = onExhausted;
   }
 
   reset(p: number): void {
@@ -43,6 +68,41 @@ export class LazyColumn implements CofaceSink {
     this.floorKey = 0;
     this.horizon = Number.POSITIVE_INFINITY;
     this.bandLow = Number.NEGATIVE_INFINITY;
+    this.cursorCount = 0;
+    this.cursorsOpened = 0;
+  }
+
+  /**
+   * Adds factor × the stored entries [start, end) of a finished column (sorted, from its pivot on). The
+   * caller pushes the column's entries past its stored cover itself.
+   */
+  addStored(start: number, end: number, factor: number): void {
+    if (this.cursorsOpened === this.cursorPos.length) this.growCursors();
+    const id = this.cursorsOpened++;
+    if (start >= end) {
+      (this.onExhausted as (cursor: number) => void)(id);
+      return;
+    }
+    this.cursorPos[id] = start;
+    this.cursorEnd[id] = end;
+    this.cursorFactor[id] = factor;
+    // Sift up.
+    const entries = this.entries as ReducedEntries;
+    const ef = entries.entryF;
+    const ek = entries.entryKey;
+    const order = this.cursorHeap;
+    const f = ef[start];
+    const key = ek[start];
+    let i = this.cursorCount++;
+    while (i > 0) {
+      const parent = (i - 1) >> 1;
+      const at = this.cursorPos[order[parent]];
+      const pf = ef[at];
+      if (pf < f || (pf === f && ek[at] <= key)) break;
+      order[i] = order[parent];
+      i = parent;
+    }
+    order[i] = id;
   }
 
   push(f: number, key: number, coef: number): void {
@@ -75,6 +135,7 @@ export class LazyColumn implements CofaceSink {
     const heap = this.heap;
     const p = this.p;
     if (heap.size > this.peak) this.peak = heap.size;
+    if (this.cursorCount > 0) return this.settleWithCursors();
     while (heap.size > 0) {
       const f = heap.f[0];
       const key = heap.key[0];
@@ -90,6 +151,186 @@ export class LazyColumn implements CofaceSink {
       }
     }
     return false;
+  }
+
+  /** Pops the least entry of heap and cursors (up to the horizon), merged; NaN key when none is left. */
+  private popLeast(): number {
+    const heap = this.heap;
+    const entries = this.entries as ReducedEntries;
+    const ef = entries.entryF;
+    const ek = entries.entryKey;
+    const ec = entries.entryCoef;
+    const order = this.cursorHeap;
+    const hasHeap = heap.size > 0;
+    let hasCursor = false;
+    let cf = 0;
+    let ck = 0;
+    if (this.cursorCount > 0) {
+      const at = this.cursorPos[order[0]];
+      cf = ef[at];
+      ck = ek[at];
+      hasCursor = cf <= this.horizon;
+    }
+    if (!hasHeap && !hasCursor) {
+      this.leastKey = Number.NaN;
+      return 0;
+    }
+    let f: number;
+    let key: number;
+    if (hasHeap && (!hasCursor || heap.f[0] < cf || (heap.f[0] === cf && heap.key[0] <= ck))) {
+      f = heap.f[0];
+      key = heap.key[0];
+    } else {
+      f = cf;
+      key = ck;
+    }
+    let sum = 0;
+    if (hasHeap && heap.key[0] === key) sum += heap.popMerged();
+    while (this.cursorCount > 0) {
+      const id = order[0];
+      const at = this.cursorPos[id];
+      if (ek[at] !== key) break;
+      sum += this.cursorFactor[id] * ec[at];
+      this.advanceTopCursor();
+    }
+    this.leastF = f;
+    this.leastKey = key;
+    return sum % this.p;
+  }
+
+  private leastF = 0;
+  private leastKey = 0;
+
+  private settleWithCursors(): boolean {
+    for (;;) {
+      const sum = this.popLeast();
+      if (Number.isNaN(this.leastKey)) return false;
+      if (sum !== 0) {
+        const f = this.leastF;
+        const key = this.leastKey;
+        this.pivotF = f;
+        this.pivotKey = key;
+        this.pivotCoef = sum;
+        this.floorF = f;
+        this.floorKey = key;
+        this.heap.push(f, key, sum);
+        return true;
+      }
+    }
+  }
+
+  /** Entries appended by the last drainInto. */
+  drained = 0;
+
+  /**
+   * Appends the column's nonzero entries in filtration order (from the pivot, which settle() left in it)
+   * to `out`, consuming the column up to the horizon, until `cap` entries are out and the next value
+   * differs from the last. `coveredTo`: the value up to which earlier calls stored every entry. Returns
+   * the value up to which the entries appended are complete (the horizon when the column ran out).
+   */
+  drainInto(out: ReducedEntries, cap: number, coveredTo: number): number {
+    if (this.cursorCount > 0 && this.entries !== out) throw new Error("cursors read another store");
+    let lastF = coveredTo;
+    let beforeLastF = coveredTo;
+    let runStart = out.used;
+    let count = 0;
+    this.drained = 0;
+    for (;;) {
+      if (count >= cap) {
+        // Stop at a change of value, so every entry up to the cover is stored.
+        let nextF = Number.POSITIVE_INFINITY;
+        if (this.heap.size > 0) nextF = this.heap.f[0];
+        if (this.cursorCount > 0) {
+          const cf = out.entryF[this.cursorPos[this.cursorHeap[0]]];
+          if (cf < nextF) nextF = cf;
+        }
+        if (nextF > this.horizon || (this.heap.size === 0 && this.cursorCount === 0)) return this.horizon;
+        if (nextF !== lastF) return lastF;
+      }
+      const sum = this.cursorCount > 0 ? this.popLeast() : this.popHeapOnly();
+      if (Number.isNaN(this.leastKey)) return this.horizon;
+      if (sum === 0) continue;
+      const f = this.leastF;
+      if (f !== lastF) {
+        beforeLastF = lastF;
+        lastF = f;
+        runStart = out.used;
+      }
+      if (!out.reserveEntries(1)) {
+        // Out of room: drop the entries at the last value, which may be incomplete.
+        this.drained -= out.used - runStart;
+        out.used = runStart;
+        return beforeLastF;
+      }
+      out.append(f, this.leastKey, sum);
+      count++;
+      this.drained++;
+    }
+  }
+
+  private popHeapOnly(): number {
+    const heap = this.heap;
+    if (heap.size === 0) {
+      this.leastKey = Number.NaN;
+      return 0;
+    }
+    this.leastF = heap.f[0];
+    this.leastKey = heap.key[0];
+    return heap.popMerged() % this.p;
+  }
+
+  private advanceTopCursor(): void {
+    const order = this.cursorHeap;
+    const id = order[0];
+    const pos = ++this.cursorPos[id];
+    if (pos >= this.cursorEnd[id]) {
+      const last = --this.cursorCount;
+      if (last !== 0) order[0] = order[last];
+      // Entries pushed now lie past the cover, after every entry popped so far.
+      (this.onExhausted as (cursor: number) => void)(id);
+      if (last === 0) return;
+    }
+    // Sift down the top cursor.
+    const entries = this.entries as ReducedEntries;
+    const ef = entries.entryF;
+    const ek = entries.entryKey;
+    const count = this.cursorCount;
+    const top = order[0];
+    const at = this.cursorPos[top];
+    const f = ef[at];
+    const key = ek[at];
+    let i = 0;
+    for (;;) {
+      let child = 2 * i + 1;
+      if (child >= count) break;
+      let childAt = this.cursorPos[order[child]];
+      const right = child + 1;
+      if (right < count) {
+        const rightAt = this.cursorPos[order[right]];
+        if (ef[rightAt] < ef[childAt] || (ef[rightAt] === ef[childAt] && ek[rightAt] < ek[childAt])) {
+          child = right;
+          childAt = rightAt;
+        }
+      }
+      const cf = ef[childAt];
+      if (f < cf || (f === cf && key <= ek[childAt])) break;
+      order[i] = order[child];
+      i = child;
+    }
+    order[i] = top;
+  }
+
+  private growCursors(): void {
+    const size = this.cursorPos.length * 2;
+    const grow = (a: Int32Array) => {
+      const b = new Int32Array(size);
+      b.set(a);
+      return b;
+    };
+    this.cursorPos = grow(this.cursorPos);
+    this.cursorEnd = grow(this.cursorEnd);
+    this.cursorFactor = grow(this.cursorFactor);
+    this.cursorHeap = grow(this.cursorHeap);
   }
 
   dispose(): void {

@@ -1,8 +1,8 @@
 /**
  * Runs differential cases on the time-bounded worker (test/support/differential-worker.mjs, the built core)
  * and checks that the computations agree: both clique layouts (or the directed tables) give the same
- * barcode, Betti numbers read off it equal the independent rank path (bettiAt), the one-pass sweep equals
- * per-threshold counts, and χ = Σ(−1)^k c_k = Σ(−1)^k β_k where every dimension is covered (Euler–Poincaré;
+ * barcode, Betti numbers read off it equal the independent rank path (bettiAt), the sweep (per-threshold
+ * WebAssembly counts) equals the one-pass annotated TypeScript sweep and separate counts at each threshold, and χ = Σ(−1)^k c_k = Σ(−1)^k β_k where every dimension is covered (Euler–Poincaré;
  * common practice, e.g. A. Hatcher, Algebraic Topology, 2002, Theorem 2.44).
  */
 import { BUILT_CORE_URL } from "./built-core.js";
@@ -17,7 +17,13 @@ export interface CaseResult {
   maxDim: number;
   barcodes: Record<string, { bars: unknown[]; betti: number[][] }>;
   counts: { counts: number[]; euler: number; truncated: boolean }[];
-  swept: { threshold: number; counts: number[] }[];
+  swept: {
+    threshold: number;
+    counts: number[];
+    reference: number[];
+    euler: [number, number];
+    truncated: [boolean, boolean];
+  }[];
   ranks: number[][] | null;
 }
 
@@ -35,6 +41,16 @@ function checkCase(c: DifferentialCase, r: CaseResult, layouts: string[]): strin
     const { counts, euler, truncated } = r.counts[t];
     // The sweep lists every threshold up to the top dimension of the last: drop its trailing zeros.
     const swept = r.swept.find((s) => s.threshold === threshold);
+    if (
+      swept &&
+      (JSON.stringify(swept.counts) !== JSON.stringify(swept.reference) ||
+        swept.euler[0] !== swept.euler[1] ||
+        swept.truncated[0] !== swept.truncated[1])
+    )
+      problems.push(
+        `at ${threshold}: sweep ${swept.counts} (χ ${swept.euler[0]}, truncated ${swept.truncated[0]}) ≠ ` +
+          `TypeScript sweep ${swept.reference} (χ ${swept.euler[1]}, truncated ${swept.truncated[1]})`,
+      );
     if (swept) while (swept.counts.length > counts.length && swept.counts.at(-1) === 0) swept.counts.pop();
     if (!swept || JSON.stringify(swept.counts) !== JSON.stringify(counts))
       problems.push(`at ${threshold}: sweep counts ${swept?.counts} ≠ counts ${counts}`);

@@ -47,10 +47,18 @@ function computeCase(task) {
     return { counts: Array.from(c.counts), euler: c.euler, truncated: c.truncated };
   });
   const sweep = core.sweepSimplexCounts(graph, core.explicitGrid(thresholds, semantics), cap);
+  // The annotated TypeScript enumeration (the reference) must give what the per-threshold kernel gave.
+  const reference = core.sweepSimplexCounts(graph, core.explicitGrid(thresholds, semantics), {
+    ...cap,
+    kernel: "typescript",
+  });
   // explicitGrid sorts its thresholds into filtration order: report them with their counts.
   const swept = Array.from(sweep.thresholds, (t, i) => ({
     threshold: t,
     counts: Array.from(sweep.counts[i]),
+    reference: Array.from(reference.counts[i]),
+    euler: [sweep.euler[i], reference.euler[i]],
+    truncated: [sweep.truncated, reference.truncated],
   }));
   const ranks = rank
     ? thresholds.map((threshold) => core.bettiAt(graph, { threshold, semantics, maxDim, prime }))

@@ -46,7 +46,9 @@ export function sweepSimplexCounts(
   const perThreshold =
     kernel === "typescript" ? null : countEachThreshold(graph, bins, T, maxDim, budget, monitor);
   if (perThreshold === null && kernel === "webassembly")
-    throw new Error("the WebAssembly counting kernel is not available here, or its memory cannot hold this graph");
+    throw new Error(
+      "the WebAssembly counting kernel is not available here, or its memory cannot hold this graph",
+    );
   if (perThreshold !== null) return { thresholds, ...perThreshold };
   const g = buildEnumerationGraph(graph, bins);
   monitor.begin("counting simplices", 0, g.n);

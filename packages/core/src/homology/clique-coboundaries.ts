@@ -19,6 +19,7 @@ export type CliqueLayout = "dense" | "sparse";
 export class CliqueCoboundaries implements CoboundaryModel {
   readonly vertexCount: number;
   sign = 1;
+  apparentCoface = -1;
   private readonly n: number;
   private readonly binom: BinomialTable;
   private readonly row: number;
@@ -421,6 +422,96 @@ export class CliqueCoboundaries implements CoboundaryModel {
         return this.low[j] + values[(j + 1) * row + v] + this.high[j];
       }
     }
+  }
+
+  /**
+   * The up-front tests of the reduction on the dense matrix with one decoding of σ (zeroFacet and
+   * zeroCoface decode σ, its facet and its coface each time): see CoboundaryModel.settleUpFront.
+   */
+  settleUpFront(dim: number, key: number, f: number): number {
+    if (this.dense === null) return -1;
+    const count = dim + 1;
+    this.prepareCofaceKeys(key, count);
+    const s = this.s;
+    const m = this.dense;
+    const n = this.n;
+    const rows = this.rows;
+    const pf = this.pairF;
+    for (let a = 0; a < count; a++) rows[a] = s[a] * n;
+    for (let a = 0; a < count; a++) {
+      for (let b = a + 1; b < count; b++) {
+        const x = m[rows[a] + s[b]];
+        pf[a * count + b] = x;
+        pf[b * count + a] = x;
+      }
+    }
+    if (dim >= 2) {
+      // The latest facet with value f drops the smallest vertex whose removal keeps an edge of value f;
+      // σ is that facet's earliest coface with value f unless a vertex below the dropped one also is.
+      const drop = this.latestFacetDrop(count, -1, f);
+      if (drop >= 0) {
+        const u = s[drop];
+        let earlier = false;
+        let j = 0;
+        for (let v = 0; v < u && !earlier; v++) {
+          if (j < count && v === s[j]) {
+            j++;
+            continue;
+          }
+          let i = 0;
+          while (i < count && (i === drop || m[rows[i] + v] <= f)) i++;
+          earlier = i === count;
+        }
+        if (!earlier) return 1;
+      }
+    }
+    // The earliest coface with value f adds the smallest vertex v whose edges to σ are all ≤ f; σ opens an
+    // apparent pair with it when no vertex of σ below v can be dropped from σ ∪ {v} keeping value f.
+    let j = 0;
+    for (let v = 0; v < n; v++) {
+      if (j < count && v === s[j]) {
+        j++;
+        continue;
+      }
+      let i = 0;
+      while (i < count && m[rows[i] + v] <= f) i++;
+      if (i < count) continue;
+      if (this.latestFacetDrop(count, v, f) >= 0) return 0;
+      this.sign = (j & 1) === 0 ? 1 : -1;
+      this.apparentCoface = this.low[j] + this.binom.values[(j + 1) * this.row + v] + this.high[j];
+      return 2;
+    }
+    return 0;
+  }
+
+  /**
+   * With `extra` < 0: the smallest i such that σ without s_i keeps value f (-1 if none). With a vertex
+   * `extra` ∉ σ (edges to σ all ≤ f): the smallest i with s_i < extra such that σ ∪ {extra} without s_i
+   * keeps value f (-1 if none). Reads the pairwise values of σ from pairF.
+   */
+  private latestFacetDrop(count: number, extra: number, f: number): number {
+    const s = this.s;
+    const pf = this.pairF;
+    const m = this.dense as Float64Array;
+    const rows = this.rows;
+    for (let i = 0; i < count; i++) {
+      if (extra >= 0 && s[i] > extra) return -1;
+      let facetF = Number.NEGATIVE_INFINITY;
+      for (let a = 0; a < count; a++) {
+        if (a === i) continue;
+        for (let b = a + 1; b < count; b++) {
+          if (b === i) continue;
+          const x = pf[a * count + b];
+          if (x > facetF) facetF = x;
+        }
+        if (extra >= 0) {
+          const x = m[rows[a] + extra];
+          if (x > facetF) facetF = x;
+        }
+      }
+      if (facetF === f) return i;
+    }
+    return -1;
   }
 
   zeroFacet(dim: number, key: number, f: number): number {

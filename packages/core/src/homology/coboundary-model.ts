@@ -33,4 +33,13 @@ export interface CoboundaryModel {
   cofaceEstimate(dim: number): number;
   /** ±1: coefficient of the last zeroCoface / zeroFacet pair. */
   sign: number;
+  /**
+   * Optional shortcut for the pass that picks the columns to reduce, with the answers of the zeroFacet /
+   * zeroCoface tests: 1 when the simplex is the coface of an apparent pair one dimension lower (dim ≥ 2;
+   * its column is cleared), 2 when it opens an apparent pair (the coface's key in `apparentCoface`), 0
+   * otherwise; -1 when this model has no shortcut for the simplex.
+   */
+  settleUpFront?(dim: number, key: number, f: number): number;
+  /** Key of the coface found by the last settleUpFront that returned 2. */
+  apparentCoface?: number;
 }

@@ -78,6 +78,20 @@ export function reduceDimension(
       counters.cleared++;
       continue;
     }
+    const settled = model.settleUpFront === undefined ? -1 : model.settleUpFront(dim, key, f);
+    if (settled === 1) {
+      counters.cleared++;
+      continue;
+    }
+    if (settled === 2) {
+      counters.apparent++;
+      if (keepZeroLength) sink.pair(dim, key, f, model.apparentCoface as number, f);
+      continue;
+    }
+    if (settled === 0) {
+      todo[todoCount++] = i;
+      continue;
+    }
     if (dim >= 2) {
       const facet = model.zeroFacet(dim, key, f);
       if (facet >= 0 && model.zeroCoface(dim - 1, facet, f) === key) {

@@ -24,9 +24,9 @@ export interface SweepOptions extends CountOptions {
  * every threshold. Edges entering after the last threshold are left out up front. Vertices are present
  * at every threshold.
  *
- * Where the WebAssembly kernel runs, each threshold's graph is counted by it instead (plain counts: the
- * last level is a popcount, not one visit per simplex), which on dense graphs costs a fraction of one
- * annotated enumeration; the counts are the same.
+ * Where the WebAssembly kernel runs and the graph is dense against maxDim, each threshold's graph is counted
+ * by it instead (plain counts: the last level is a popcount, not one visit per simplex), which then costs
+ * a fraction of one annotated enumeration; the counts are the same.
  */
 export function sweepSimplexCounts(
   graph: WeightedGraph,
@@ -44,7 +44,9 @@ export function sweepSimplexCounts(
   if (kernel !== "auto" && kernel !== "webassembly" && kernel !== "typescript")
     throw new RangeError(`kernel must be "auto", "webassembly" or "typescript", got ${String(kernel)}`);
   const perThreshold =
-    kernel === "typescript" ? null : countEachThreshold(graph, bins, T, maxDim, budget, monitor);
+    kernel === "typescript" || (kernel === "auto" && !perThresholdPays(graph, bins, T, maxDim))
+      ? null
+      : countEachThreshold(graph, bins, T, maxDim, budget, monitor);
   if (perThreshold === null && kernel === "webassembly")
     throw new Error(
       "the WebAssembly counting kernel is not available here, or its memory cannot hold this graph",
@@ -77,6 +79,23 @@ export function sweepSimplexCounts(
     counts.push(running.slice());
   }
   return { thresholds, counts, euler, truncated: r.truncated };
+}
+
+/**
+ * Whether T plain counts beat one annotated enumeration. The enumeration visits every simplex up to
+ * maxDim; a plain count visits those below maxDim and popcounts the last level. In a graph of density ρ the
+ * top level outnumbers the one below by about (n − maxDim)/(maxDim + 1) · ρ^maxDim (the expected clique
+ * counts of G(n, ρ), C(n, k+1) ρ^C(k+1,2)), so T counts pay when that ratio is well above T (the earlier
+ * thresholds' graphs are also smaller). Sparse graphs, and counts to high dimensions, keep the enumeration.
+ */
+function perThresholdPays(graph: WeightedGraph, bins: Int32Array, T: number, maxDim: number): boolean {
+  const n = graph.n;
+  if (n < 2 || !Number.isFinite(maxDim) || maxDim < 2) return false;
+  let kept = 0;
+  for (let s = 0; s < bins.length; s++) if (bins[s] >= 0) kept++;
+  const density = kept / (n * (n - 1)); // both directions of an undirected edge are slots
+  const ratio = ((n - maxDim) / (maxDim + 1)) * density ** maxDim;
+  return ratio > T / 2;
 }
 
 /**

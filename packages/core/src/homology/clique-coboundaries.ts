@@ -76,14 +76,26 @@ export class CliqueCoboundaries implements CoboundaryModel {
       ledger.reserve(n * n * 12, "sorting the dense edge-value rows");
       const order = new Int32Array(n * n);
       const sorted = new Float64Array(n * n);
-      const idx = new Int32Array(n);
+      const used = new Int32Array(n);
       for (let u = 0; u < n; u++) {
-        for (let v = 0; v < n; v++) idx[v] = v;
+        // The typed array's own sort gives the values; each vertex then takes the next free rank of its
+        // value (vertices in ascending order, so equal values keep ascending vertices). A comparator sort
+        // of the vertices took a tenth of the batch job's CPU on 100-node graphs.
         const base = u * n;
-        idx.sort((a, b) => m[base + a] - m[base + b] || a - b);
-        for (let r = 0; r < n; r++) {
-          order[base + r] = idx[r];
-          sorted[base + r] = m[base + idx[r]];
+        const row = sorted.subarray(base, base + n);
+        row.set(m.subarray(base, base + n));
+        row.sort();
+        used.fill(0);
+        for (let v = 0; v < n; v++) {
+          const x = m[base + v];
+          let lo = 0;
+          let hi = n;
+          while (lo < hi) {
+            const mid = (lo + hi) >>> 1;
+            if (row[mid] < x) lo = mid + 1;
+            else hi = mid;
+          }
+          order[base + lo + used[lo]++] = v;
         }
       }
       this.rowOrder = order;

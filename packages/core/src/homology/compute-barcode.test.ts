@@ -132,3 +132,45 @@ describe("computeBarcode under a tight budget", () => {
     expect(tight.stats.peakBytes).toBe(roomy.stats.peakBytes);
   });
 });
+
+describe("stored reduced entries under a tight memory budget", () => {
+  // Complete graph on 40 vertices with seeded integer distances 1–1000 (a small linear congruential
+  // generator, so the test needs no fixture). The reference is the same barcode with the default budget,
+  // which the rank tests (barcode-matches-ranks.test.ts) check on graphs of this kind.
+  const n = 40;
+  let state = 12345;
+  const next = () => {
+    state = (Math.imul(state, 1103515245) + 12345) >>> 0;
+    return state / 2 ** 32;
+  };
+  const sources: number[] = [];
+  const targets: number[] = [];
+  const weights: number[] = [];
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      sources.push(i);
+      targets.push(j);
+      weights.push(1 + Math.floor(next() * 1000));
+    }
+  }
+  const g = fromEdgeList({ n, sources, targets, weights, directed: false });
+
+  it("keeps fewer entries when room runs short, never other bars", () => {
+    const reference = computeBarcode(g, { semantics: "distance", maxDim: 2 });
+    expect(reference.stats.storedColumns[2]).toBeGreaterThan(0);
+    let fewer = false;
+    for (const share of [1, 0.95, 0.9, 0.85, 0.8, 0.7]) {
+      const maxBytes = Math.round(reference.stats.peakBytes * share);
+      try {
+        const tight = computeBarcode(g, { semantics: "distance", maxDim: 2, budget: { maxBytes } });
+        expect(tight.bars).toEqual(reference.bars);
+        expect(tight.stats.peakBytes).toBeLessThanOrEqual(maxBytes);
+        if (tight.stats.storedColumns[2] < reference.stats.storedColumns[2]) fewer = true;
+      } catch (error) {
+        // Below what the rest of the computation needs, the budget stops it with its own error.
+        expect(error).toBeInstanceOf(HomologyBudgetError);
+      }
+    }
+    expect(fewer).toBe(true);
+  });
+});

@@ -38,12 +38,17 @@ export class ReducedEntries {
     return id < this.cover.length && this.cover[id] !== Number.NEGATIVE_INFINITY;
   }
 
-  /** Room for `count` more entries without passing the share of the budget kept for them. */
+  /**
+   * Room for `count` more entries without passing the share of the budget kept for them, nor the budget
+   * itself: stored entries only save time, so running short of room is never an error.
+   */
   reserveEntries(count: number): boolean {
     if (this.used + count > this.maxEntries) return false;
     while (this.used + count > this.entryF.length) {
       const size = this.entryF.length * 2;
-      this.ledger.reserve(this.entryF.length * ENTRY_BYTES, "storing reduced entries");
+      const bytes = this.entryF.length * ENTRY_BYTES;
+      if (this.ledger.held + bytes > this.ledger.maxBytes) return false;
+      this.ledger.reserve(bytes, "storing reduced entries");
       this.entryF = grownFloat(this.entryF, size);
       this.entryKey = grownFloat(this.entryKey, size);
       this.entryCoef = grownInt(this.entryCoef, size);

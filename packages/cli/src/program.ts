@@ -4,6 +4,7 @@ import { connectCommand } from "./commands/connect.js";
 import { distancesCommand } from "./commands/distances.js";
 import { extractCommand } from "./commands/extract.js";
 import { inspectCommand } from "./commands/inspect.js";
+import { mergeCommand } from "./commands/merge.js";
 import { nullmodelCommand } from "./commands/nullmodel.js";
 import { reportCommand } from "./commands/report.js";
 import { sweepCommand } from "./commands/sweep.js";
@@ -22,6 +23,7 @@ export function createProgram(): Command {
     .addCommand(sweepCommand())
     .addCommand(barcodeCommand())
     .addCommand(extractCommand())
+    .addCommand(mergeCommand())
     .addCommand(nullmodelCommand())
     .addCommand(distancesCommand())
     .addCommand(connectCommand())

@@ -6,7 +6,10 @@ import { exitCodeFor } from "../exit-codes.js";
 import { InterruptedError } from "../extract/interrupted-error.js";
 import { optionsToSpec } from "../extract/options-to-spec.js";
 import { runExtract } from "../extract/run-extract.js";
+import { runPlan } from "../extract/run-plan.js";
+import { runShard } from "../extract/run-shard.js";
 import { EDGE_TRANSFORMS } from "../extract/run-spec.js";
+import { parseShard } from "../extract/shard-plan.js";
 import { timeLimitOption } from "../options/complex-options.js";
 import { addConnectivityOptions } from "../options/connectivity-options.js";
 import {
@@ -193,6 +196,19 @@ export function extractCommand(): Command {
         `features that get a z column, comma-separated (default: ${NULL_SCORE_FEATURES.join(",")})`,
       ).argParser((text) => text.split(",").map((s) => s.trim())),
     )
+    // Sharded runs (docs/cluster.md).
+    .addOption(
+      new Option(
+        "--plan",
+        "write spec.json (grid included) and plan.json (every graph's estimated cost) into --out and stop: the first step of a sharded run",
+      ).conflicts("shard"),
+    )
+    .addOption(
+      new Option(
+        "--shard <I/N>",
+        "compute shard I of N (I counts from 0) of a planned run into OUT/parts/I-of-N; then cliquescape merge OUT",
+      ).argParser(shardArgument),
+    )
     .addOption(new Option("--no-bundles", "do not write GNN bundles"))
     .addOption(new Option("--no-barcodes", "do not write barcodes"));
   // Recordings instead of matrices (recorded in the spec's connectivity section).
@@ -207,8 +223,10 @@ Examples:
   cliquescape extract new-subjects.csv --out runs/b --spec runs/a/spec.json
   cliquescape extract cohort.npy --labels participants.tsv --labels-column group --out runs/c
   cliquescape extract demo-data/manifest.csv --out out/z --null-model rewire --null-samples 200
+  cliquescape extract demo-data/manifest.csv --out out/big --plan            # then, for I in 0..3:
+  cliquescape extract demo-data/manifest.csv --out out/big --spec out/big/spec.json --shard I/4
 Exit codes:
-  0    every graph is in the tables
+  0    every graph is in the tables (--plan: planned; --shard: the shard finished, failed graphs included)
   1    some graph was left out (see errors.csv), or no graph could be read
   2    bad command line or spec, the run folder holds results made under other settings, or --out holds
        files that are not a cliquescape run folder, or is the dataset's folder
@@ -240,7 +258,7 @@ async function extractAction(
   process.on("SIGINT", onInterrupt);
   try {
     const { spec, source } = optionsToSpec(raw, given);
-    const result = await runExtract({
+    const request = {
       dataset,
       out: raw.out as string,
       workers: raw.workers as number,
@@ -253,7 +271,16 @@ async function extractAction(
         variable: raw.variable as string | undefined,
       },
       signal: controller.signal,
-    });
+    };
+    if (raw.plan) {
+      await runPlan(request);
+      process.exitCode = 0;
+      return;
+    }
+    const shard = raw.shard as { index: number; count: number } | undefined;
+    // A scheduler stops a job with SIGTERM (scancel, time limit): a shard ends as on Ctrl-C.
+    if (shard) process.on("SIGTERM", onInterrupt);
+    const result = shard ? await runShard(request, shard) : await runExtract(request);
     process.exitCode = result.exitCode;
   } catch (error) {
     if (error instanceof InterruptedError) {
@@ -266,6 +293,7 @@ async function extractAction(
     process.exitCode = exitCodeFor(error);
   } finally {
     process.off("SIGINT", onInterrupt);
+    process.off("SIGTERM", onInterrupt);
   }
 }
 
@@ -273,4 +301,12 @@ function quantilePair(text: string): [number, number] {
   const parts = text.split(":");
   if (parts.length !== 2) throw new UsageError(`expected FROM:TO quantiles, got "${text}"`);
   return [finiteNumber(parts[0]), finiteNumber(parts[1])];
+}
+
+function shardArgument(text: string): { index: number; count: number } {
+  try {
+    return parseShard(text);
+  } catch (error) {
+    throw new UsageError((error as Error).message);
+  }
 }

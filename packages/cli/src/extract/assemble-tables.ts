@@ -34,7 +34,7 @@ export interface RunTables {
  * Linear in the number of graphs, and with no call whose argument count grows with it.
  */
 export function assembleTables(
-  entries: readonly DatasetEntry[],
+  entries: readonly Pick<DatasetEntry, "id">[],
   records: ReadonlyMap<string, GraphRecord>,
   featureNames: readonly string[],
   labelNames: readonly string[],

@@ -4,6 +4,7 @@ import { InterruptedError } from "./interrupted-error.js";
 import { noEdgeError } from "./no-edge-error.js";
 import { startProgress } from "./progress.js";
 import type { RunSpec } from "./run-spec.js";
+import type { GraphSize } from "./worker-messages.js";
 import { runOnWorkers } from "./worker-pool.js";
 
 /** All edge values the first pass may hold at once, over the whole dataset (128 MiB of float64). */
@@ -23,18 +24,46 @@ export async function firstPass(
   dataset: Dataset,
   request: PassOptions,
 ): Promise<Float64Array> {
+  const { sample, failures } = await readingPass(spec, dataset, request, true);
+  if (sample.length === 0) throw noEdgeError(dataset.entries, failures);
+  return sample;
+}
+
+export interface PassResult {
+  /** The edge-value sample, in dataset order (empty when not asked for). */
+  sample: Float64Array;
+  /** Each graph's size after preparation, null where it could not be read. */
+  sizes: (GraphSize | null)[];
+  failures: (GraphFailure | null)[];
+}
+
+/**
+ * Reads and prepares every graph once on the workers: their sizes and, with `sampling`, the same bounded
+ * sample of edge values the first pass takes (so a shard plan fixes the very grid a single run would).
+ */
+export async function readingPass(
+  spec: RunSpec,
+  dataset: Dataset,
+  request: PassOptions,
+  sampling: boolean,
+): Promise<PassResult> {
   const entries = dataset.entries;
-  const limit = Math.max(1, Math.floor(FIRST_PASS_VALUES / Math.max(1, entries.length)));
+  const limit = sampling ? Math.max(1, Math.floor(FIRST_PASS_VALUES / Math.max(1, entries.length))) : 0;
   const parts: Float64Array[] = [];
+  const sizes: (GraphSize | null)[] = entries.map(() => null);
   const failures: (GraphFailure | null)[] = entries.map(() => null);
   let failed = 0;
   let done = 0;
-  const progress = startProgress("first pass (weight quantiles)", entries.length);
+  const progress = startProgress(
+    sampling ? "first pass (weight quantiles)" : "reading every graph (sizes)",
+    entries.length,
+  );
   const ended = await runOnWorkers(
     entries.map((entry, index) => ({ kind: "sample" as const, index, entry, limit })),
     (reply) => {
       if (reply.kind !== "sample") return;
       done++;
+      sizes[reply.index] = reply.size;
       if (reply.values) parts[reply.index] = reply.values;
       else {
         failed++;
@@ -52,6 +81,7 @@ export async function firstPass(
         kind: "sample",
         index: task.index,
         values: null,
+        size: null,
         failure: { file: task.entry.file, line: null, column: null, reason: message, kind: "WorkerError" },
       }),
     },
@@ -61,7 +91,6 @@ export async function firstPass(
     throw new InterruptedError("interrupted during the first pass; nothing was computed");
   // Dataset order, whatever order the workers answered in: the quantiles do not depend on scheduling.
   const total = parts.reduce((sum, part) => sum + (part?.length ?? 0), 0);
-  if (total === 0) throw noEdgeError(entries, failures);
   const sample = new Float64Array(total);
   let at = 0;
   for (const part of parts) {
@@ -69,5 +98,5 @@ export async function firstPass(
     sample.set(part, at);
     at += part.length;
   }
-  return sample;
+  return { sample, sizes, failures };
 }

@@ -1,5 +1,5 @@
 import { parentPort } from "node:worker_threads";
-import type { WorkControl } from "@cliquescape/core";
+import { edgeCount, type WorkControl } from "@cliquescape/core";
 import { edgeValues } from "./edge-values.js";
 import { graphFailureOf } from "./graph-failure.js";
 import { computeGraph } from "./graph-job.js";
@@ -56,12 +56,14 @@ function handle(task: WorkerTask): WorkerReply {
   try {
     const { graph } = readPreparedGraph(task.entry, setup.preparation, setup.connectivity);
     const values = Float64Array.from(strideSample(edgeValues(graph), task.limit));
-    return { kind: "sample", index: task.index, values, failure: null };
+    const size = { nodes: graph.n, edges: edgeCount(graph), directed: graph.directed };
+    return { kind: "sample", index: task.index, values, size, failure: null };
   } catch (error) {
     return {
       kind: "sample",
       index: task.index,
       values: null,
+      size: null,
       failure: graphFailureOf(error, task.entry.file),
     };
   }

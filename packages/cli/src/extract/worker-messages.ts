@@ -4,6 +4,13 @@ import type { GraphFailure } from "./graph-failure.js";
 import type { GraphOutcome } from "./graph-job.js";
 import type { ResolvedRunSpec, RunSpec } from "./run-spec.js";
 
+/** Nodes and edges (arcs when directed) of a prepared graph. */
+export interface GraphSize {
+  nodes: number;
+  edges: number;
+  directed: boolean;
+}
+
 /** Sent once to each worker before any task: the settings every graph is computed with. */
 export interface WorkerSetup {
   kind: "setup";
@@ -28,7 +35,14 @@ export interface WorkerProgress {
 
 /** A worker's answer to one task, tagged with the task's index. */
 export type WorkerReply =
-  | { kind: "sample"; index: number; values: Float64Array | null; failure: GraphFailure | null }
+  | {
+      kind: "sample";
+      index: number;
+      values: Float64Array | null;
+      /** The prepared graph's size (what a shard plan estimates its cost from); null when it failed. */
+      size: GraphSize | null;
+      failure: GraphFailure | null;
+    }
   | { kind: "extract"; index: number; outcome: GraphOutcome };
 
 /**

@@ -1,5 +1,6 @@
 import { Command } from "commander";
 import { barcodeCommand } from "./commands/barcode.js";
+import { clusterScriptCommand } from "./commands/cluster-script.js";
 import { connectCommand } from "./commands/connect.js";
 import { distancesCommand } from "./commands/distances.js";
 import { extractCommand } from "./commands/extract.js";
@@ -24,6 +25,7 @@ export function createProgram(): Command {
     .addCommand(barcodeCommand())
     .addCommand(extractCommand())
     .addCommand(mergeCommand())
+    .addCommand(clusterScriptCommand())
     .addCommand(nullmodelCommand())
     .addCommand(distancesCommand())
     .addCommand(connectCommand())

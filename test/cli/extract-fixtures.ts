@@ -1,5 +1,6 @@
 import { readdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
 import { join, relative } from "node:path";
+import { expect } from "vitest";
 import { seededRandom } from "../support/random.js";
 import { matrixCsv, scratchFiles } from "./run-cli.js";
 
@@ -95,4 +96,20 @@ function csvCells(line: string): string[] {
     }
   }
   return cells;
+}
+
+/**
+ * Every file of the single run's folder is in the merged one with the same bytes, and the merged folder has
+ * nothing more than the shard plan, the parts and the job scripts (a sharded run's own files).
+ */
+export function expectSameRun(single: string, merged: string): void {
+  const a = folderContents(single);
+  const b = folderContents(merged);
+  for (const [name, bytes] of a) {
+    expect(b.has(name), `${name} missing from the merged folder`).toBe(true);
+    expect(b.get(name)!.equals(bytes), `${name} differs`).toBe(true);
+  }
+  const own = (name: string) =>
+    name === "plan.json" || name.startsWith("parts/") || name.startsWith("slurm/");
+  expect([...b.keys()].filter((name) => !a.has(name) && !own(name))).toEqual([]);
 }

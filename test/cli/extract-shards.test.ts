@@ -7,7 +7,7 @@
 import { existsSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { folderContents, SMALL_DATASET, similarityDataset } from "./extract-fixtures.js";
+import { expectSameRun, SMALL_DATASET, similarityDataset } from "./extract-fixtures.js";
 import { runCli } from "./run-cli.js";
 
 /** The small fixture plus a graph with a bad cell (fails, with its line) and a manifest row without a file. */
@@ -20,18 +20,6 @@ function datasetWithFailures(): string {
     `${manifest}bad,bad.csv,beta,false,train\nghost,no-such-file.csv,alpha,false,test\n`,
   );
   return dir;
-}
-
-/** Every file of `single` is in `merged` with the same bytes, and `merged` has only the plan and parts more. */
-function expectSameRun(single: string, merged: string): void {
-  const a = folderContents(single);
-  const b = folderContents(merged);
-  for (const [name, bytes] of a) {
-    expect(b.has(name), `${name} missing from the merged folder`).toBe(true);
-    expect(b.get(name)!.equals(bytes), `${name} differs`).toBe(true);
-  }
-  const extra = [...b.keys()].filter((name) => !a.has(name));
-  expect(extra.filter((name) => name !== "plan.json" && !name.startsWith("parts/"))).toEqual([]);
 }
 
 describe("sharded extract runs", () => {

@@ -6,12 +6,12 @@
 //
 //   node test/bench/extract-bench.mjs [--graphs 1000] [--nodes 100] [--workers 1,2] [--no-docs]
 //                                     [--also "--quantiles 0.5:0.95"]   one more run (2 workers) with these options
-import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { readFileSync, rmSync } from "node:fs";
 import { cpus, tmpdir, totalmem } from "node:os";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
+import { makeDataset } from "./bench-dataset.mjs";
 import { writeDocsSection } from "./docs-section.mjs";
-import { seededRandom } from "./random.mjs";
 import { optionReader, timedCommand } from "./timed-command.mjs";
 
 const here = dirname(fileURLToPath(import.meta.url));
@@ -24,48 +24,6 @@ const nodes = Number(option("--nodes", "100"));
 const workerCounts = option("--workers", "1,2").split(",").map(Number);
 const writeDocs = !args.includes("--no-docs");
 const also = option("--also", "--quantiles 0.5:0.95").split(" ").filter(Boolean);
-
-/**
- * A dense similarity matrix: nodes at seeded random places in the unit square, similarity
- * exp(−d²/(2·0.3²)) times a random factor, plus a little noise, clipped to [0.001, 1] so every pair is an
- * edge. Two labels differ in how the places are drawn (uniform, or around three centres).
- */
-function matrixCsv(n, seed, clustered) {
-  const random = seededRandom(seed);
-  const centres = [0, 1, 2].map(() => [random(), random()]);
-  const points = Array.from({ length: n }, () => {
-    if (!clustered) return [random(), random()];
-    const c = centres[Math.floor(random() * 3)];
-    return [c[0] + (random() - 0.5) * 0.35, c[1] + (random() - 0.5) * 0.35];
-  });
-  const m = Array.from({ length: n }, () => new Array(n).fill(0));
-  for (let i = 0; i < n; i++) {
-    for (let j = i + 1; j < n; j++) {
-      const dx = points[i][0] - points[j][0];
-      const dy = points[i][1] - points[j][1];
-      const w = Math.exp(-(dx * dx + dy * dy) / (2 * 0.09)) * (0.85 + 0.3 * random()) + 0.05 * random();
-      m[i][j] = m[j][i] = Math.min(1, Math.max(0.001, Math.round(w * 1e4) / 1e4));
-    }
-  }
-  return `${m.map((row) => row.join(",")).join("\n")}\n`;
-}
-
-function makeDataset(dir) {
-  const stamp = join(dir, "made.json");
-  const wanted = JSON.stringify({ graphs, nodes, version: 1 });
-  if (existsSync(stamp) && readFileSync(stamp, "utf8") === wanted) return;
-  rmSync(dir, { recursive: true, force: true });
-  mkdirSync(dir, { recursive: true });
-  const lines = ["id,file,label"];
-  for (let g = 0; g < graphs; g++) {
-    const id = `m${String(g).padStart(4, "0")}`;
-    const clustered = g % 2 === 1;
-    writeFileSync(join(dir, `${id}.csv`), matrixCsv(nodes, 1000 + g, clustered));
-    lines.push(`${id},${id}.csv,${clustered ? "clustered" : "uniform"}`);
-  }
-  writeFileSync(join(dir, "manifest.csv"), `${lines.join("\n")}\n`);
-  writeFileSync(stamp, wanted);
-}
 
 function run(dataset, out, workers, extra = []) {
   rmSync(out, { recursive: true, force: true });
@@ -95,7 +53,7 @@ function run(dataset, out, workers, extra = []) {
 const base = join(tmpdir(), "cliquescape-extract-bench");
 const dataset = join(base, `data-${graphs}x${nodes}`);
 console.error(`generating ${graphs} matrices of ${nodes} nodes in ${dataset} (kept for later runs)…`);
-makeDataset(dataset);
+makeDataset(dataset, graphs, nodes);
 const results = [];
 for (const workers of workerCounts) {
   const r = run(join(dataset, "manifest.csv"), join(base, `out-w${workers}`), workers);

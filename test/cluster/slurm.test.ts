@@ -13,7 +13,7 @@ import { fileURLToPath } from "node:url";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { expectSameRun } from "../cli/extract-fixtures.js";
 import { runCli } from "../cli/run-cli.js";
-import { missingSlurm, type SlurmCluster, startSlurmCluster } from "./slurm-cluster.js";
+import { missingSlurm, type SlurmCluster, startSlurmCluster } from "./slurm-cluster.mjs";
 
 const DEMO = fileURLToPath(new URL("../../demo-data/manifest.csv", import.meta.url));
 // z-scored columns against 150 rewired samples make each demo graph take a noticeable fraction of a second,

@@ -6,7 +6,7 @@
  * exit hook should the test process end first; with CLIQUESCAPE_DAEMON_PIDS set (.ci/run sets it) their
  * ids are also listed in that file, so CI can stop strays.
  */
-import { type ChildProcess, spawn, spawnSync } from "node:child_process";
+import { spawn, spawnSync } from "node:child_process";
 import { randomBytes } from "node:crypto";
 import {
   appendFileSync,
@@ -25,7 +25,8 @@ import { join } from "node:path";
 const PROGRAMS = ["munged", "slurmctld", "slurmd", "sbatch", "squeue", "scancel", "scontrol", "sinfo"];
 const SEARCH = ["/usr/sbin", "/usr/bin", "/sbin", "/bin"];
 
-function findProgram(name: string): string | null {
+/** @param {string} name @returns {string | null} */
+function findProgram(name) {
   for (const dir of [...(process.env.PATH ?? "").split(":"), ...SEARCH]) {
     if (dir && existsSync(join(dir, name))) return join(dir, name);
   }
@@ -37,7 +38,8 @@ function findProgram(name: string): string | null {
  * the Slurm tests then skip with that reason in their name; under CI (.ci/run installs slurm-wlm and
  * munge and runs as root) it is a failure.
  */
-export function missingSlurm(): string | null {
+/** @returns {string | null} */
+export function missingSlurm() {
   const missing = PROGRAMS.filter((p) => findProgram(p) === null);
   const reason =
     missing.length > 0
@@ -50,22 +52,21 @@ export function missingSlurm(): string | null {
   return reason;
 }
 
-export interface SlurmCluster {
-  /** Environment for sbatch, squeue and the jobs: SLURM_CONF points at this cluster. */
-  env: NodeJS.ProcessEnv;
-  dir: string;
-  /** Runs a Slurm client program against this cluster; throws with its stderr when it fails. */
-  run(program: string, args: string[]): string;
-  /** Waits until none of these jobs (array jobs included) is pending or running. */
-  waitForJobs(ids: string[], timeoutMs: number): Promise<void>;
-  /** The final state of a job (COMPLETED, FAILED, CANCELLED…), from scontrol. */
-  jobState(id: string): string;
-  /** The daemons' log tails, for a failure message. */
-  logs(): string;
-  stop(): Promise<void>;
-}
+/**
+ * @typedef {object} SlurmCluster
+ * @property {NodeJS.ProcessEnv} env  for sbatch, squeue and the jobs: SLURM_CONF points at this cluster
+ * @property {string} dir
+ * @property {(program: string, args: string[]) => string} run  a Slurm client program against this cluster;
+ *   throws with its stderr when it fails
+ * @property {(ids: string[], timeoutMs: number) => Promise<void>} waitForJobs  until none of these jobs
+ *   (array jobs included) is pending or running
+ * @property {(id: string) => string} jobState  the final state of a job (COMPLETED, FAILED, CANCELLED…)
+ * @property {() => string} logs  the daemons' log tails, for a failure message
+ * @property {() => Promise<void>} stop
+ */
 
-function freePort(): Promise<number> {
+/** @returns {Promise<number>} */
+function freePort() {
   return new Promise((resolve, reject) => {
     const server = createServer();
     server.once("error", reject);
@@ -77,9 +78,10 @@ function freePort(): Promise<number> {
   });
 }
 
-const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+const sleep = (/** @type {number} */ ms) => new Promise((resolve) => setTimeout(resolve, ms));
 
-export async function startSlurmCluster(): Promise<SlurmCluster> {
+/** @returns {Promise<SlurmCluster>} */
+export async function startSlurmCluster() {
   const dir = mkdtempSync(join(tmpdir(), "cliquescape-slurm-"));
   // munged insists that the socket's folder and its parents be reachable by all, and the key private.
   chmodSync(dir, 0o755);
@@ -127,10 +129,11 @@ export async function startSlurmCluster(): Promise<SlurmCluster> {
     ].join("\n"),
   );
   const env = { ...process.env, SLURM_CONF: conf };
-  const children: ChildProcess[] = [];
-  const start = (program: string, args: string[]) => {
+  /** @type {import("node:child_process").ChildProcess[]} */
+  const children = [];
+  const start = (/** @type {string} */ program, /** @type {string[]} */ args) => {
     const out = openSync(join(dir, "log", `${program}.out`), "a");
-    const child = spawn(findProgram(program)!, args, { env, stdio: ["ignore", out, out] });
+    const child = spawn(findProgram(program), args, { env, stdio: ["ignore", out, out] });
     children.push(child);
     if (child.pid !== undefined && process.env.CLIQUESCAPE_DAEMON_PIDS)
       appendFileSync(process.env.CLIQUESCAPE_DAEMON_PIDS, `${child.pid}\n`);
@@ -142,7 +145,7 @@ export async function startSlurmCluster(): Promise<SlurmCluster> {
   };
   process.once("exit", killAll);
 
-  const run = (program: string, args: string[]): string => {
+  const run = (/** @type {string} */ program, /** @type {string[]} */ args) => {
     const result = spawnSync(findProgram(program) ?? program, args, { env, encoding: "utf8" });
     if (result.status !== 0)
       throw new Error(
@@ -185,7 +188,7 @@ export async function startSlurmCluster(): Promise<SlurmCluster> {
     start("slurmd", ["-D", "-f", conf]);
     // The node is up once the controller sees it idle.
     for (let i = 0; ; i++) {
-      const state = spawnSync(findProgram("sinfo")!, ["-h", "-o", "%t"], {
+      const state = spawnSync(findProgram("sinfo"), ["-h", "-o", "%t"], {
         env,
         encoding: "utf8",
       }).stdout.trim();
@@ -196,7 +199,7 @@ export async function startSlurmCluster(): Promise<SlurmCluster> {
   } catch (error) {
     const text = logs();
     await stop();
-    throw new Error(`${(error as Error).message}\n${text}`);
+    throw new Error(`${error.message}\n${text}`);
   }
 
   return {
@@ -205,15 +208,15 @@ export async function startSlurmCluster(): Promise<SlurmCluster> {
     run,
     logs,
     stop,
-    jobState(id) {
+    jobState(/** @type {string} */ id) {
       const text = run("scontrol", ["show", "job", id]);
       return /JobState=(\S+)/.exec(text)?.[1] ?? "UNKNOWN";
     },
-    async waitForJobs(ids, timeoutMs) {
+    async waitForJobs(/** @type {string[]} */ ids, /** @type {number} */ timeoutMs) {
       const deadline = Date.now() + timeoutMs;
       for (;;) {
         const result = spawnSync(
-          findProgram("squeue")!,
+          findProgram("squeue"),
           ["-h", "-j", ids.join(","), "-t", "PD,R,CG,CF,S", "-o", "%i %T %r"],
           { env, encoding: "utf8" },
         );

@@ -125,9 +125,9 @@ export function submitScript(job: SlurmJob): string {
     'here="$(cd "$(dirname "$0")" && pwd)"',
     `array="\${1:-0-${job.shards - 1}}"`,
     `shards="$(sbatch --parsable --array="$array${job.resources.maxParallel ? `%${job.resources.maxParallel}` : ""}" "$here/shards.sbatch")"`,
-    'shards="${shards%%;*}"  # --parsable prints "id;cluster" on sites with several clusters',
+    `shards="\${shards%%;*}"  # --parsable prints "id;cluster" on sites with several clusters`,
     'merge="$(sbatch --parsable --dependency="afterok:$shards" "$here/merge.sbatch")"',
-    'merge="${merge%%;*}"',
+    `merge="\${merge%%;*}"`,
     'echo "submitted: shards job $shards (array $array), merge job $merge (runs when every shard has ended well)"',
     `echo "logs: ${job.runRoot}/slurm/logs; watch with: squeue -j $shards,$merge"`,
   ].join("\n")}\n`;

@@ -102,6 +102,13 @@ describe("sharded extract runs", () => {
     expect(shard(out, 2, 4).status).toBe(0);
     expect(runCli(["merge", out]).status).toBe(1);
     expectSameRun(single, out);
+    // Parts of another shard count in the same folder: the merge asks which count is meant.
+    expect(shard(out, 0, 2).status).toBe(0);
+    const which = runCli(["merge", out]);
+    expect(which.status).toBe(2);
+    expect(which.stderr).toContain("shards of 2 different counts (2, 4): pass --shards N");
+    expect(runCli(["merge", out, "--shards", "4"]).status).toBe(1);
+    expectSameRun(single, out);
   });
 
   it("2 shards and 1 shard give the same folder too (the split does not change any byte)", () => {

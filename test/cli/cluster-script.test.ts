@@ -5,11 +5,15 @@
  * a single-process `extract` of the same dataset.
  */
 import { spawnSync } from "node:child_process";
-import { mkdirSync, readFileSync, statSync } from "node:fs";
+import { mkdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { encodeNpy } from "@cliquescape/io";
 import { beforeAll, describe, expect, it } from "vitest";
-import { expectSameRun, SMALL_DATASET, similarityDataset } from "./extract-fixtures.js";
-import { runCli } from "./run-cli.js";
+import { expectSameRun, SMALL_DATASET, similarityDataset, similarityMatrix } from "./extract-fixtures.js";
+import { runCli, scratchFiles } from "./run-cli.js";
+
+const BIN = fileURLToPath(new URL("../../packages/cli/bin/cliquescape.js", import.meta.url));
 
 describe("cluster-script", () => {
   let dir: string;
@@ -58,7 +62,7 @@ describe("cluster-script", () => {
     ])
       expect(shards).toContain(line);
     expect(shards).toContain(`--out '${out}'`);
-    expect(shards).toContain('--shard "${SLURM_ARRAY_TASK_ID}/3"');
+    expect(shards).toContain(`--shard "\${SLURM_ARRAY_TASK_ID}/3"`);
     const merge = readFileSync(join(out, "slurm", "merge.sbatch"), "utf8");
     expect(merge).toContain(`merge '${out}' --shards 3`);
     const submit = readFileSync(join(out, "slurm", "submit.sh"), "utf8");
@@ -107,5 +111,36 @@ describe("cluster-script", () => {
     const merge = spawnSync("bash", [join(out, "slurm", "merge.sbatch")], { encoding: "utf8" });
     expect(merge.status, merge.stderr).toBe(0);
     expectSameRun(single, out);
+  });
+
+  it("a stack with a labels file, planned with paths relative to its folder, runs from anywhere", () => {
+    // The plan is made inside the dataset's folder with relative paths; the jobs cd there first.
+    const stackDir = scratchFiles({ "labels.txt": "a\nb\na\nb\na\nb\n" });
+    const n = 9;
+    const values: number[] = [];
+    for (let g = 0; g < 6; g++)
+      for (const row of similarityMatrix(n, false, 500 + g)) for (const w of row) values.push(w ?? 0);
+    writeFileSync(join(stackDir, "stack.npy"), encodeNpy(values, [6, n, n]));
+    const inStack = (args: string[]) =>
+      spawnSync(process.execPath, [BIN, ...args], { cwd: stackDir, encoding: "utf8" });
+    const args = ["stack.npy", "--labels", "labels.txt", "--top-dim", "2"];
+    const reference = inStack(["extract", ...args, "--out", "single", "--workers", "1"]);
+    expect(reference.status, reference.stderr).toBe(0);
+    expect(inStack(["extract", ...args, "--out", "sharded", "--plan"]).status).toBe(0);
+    expect(inStack(["cluster-script", "sharded", "--shards", "2"]).status).toBe(0);
+    const script = (name: string, env: Record<string, string> = {}) =>
+      spawnSync("bash", [join(stackDir, "sharded", "slurm", name)], {
+        cwd: dir, // not the dataset's folder
+        env: { ...process.env, ...env },
+        encoding: "utf8",
+      });
+    for (const i of ["0", "1"]) {
+      const task = script("shards.sbatch", { SLURM_ARRAY_TASK_ID: i });
+      expect(task.status, task.stderr).toBe(0);
+    }
+    const merge = script("merge.sbatch");
+    expect(merge.status, merge.stderr).toBe(0);
+    expectSameRun(join(stackDir, "single"), join(stackDir, "sharded"));
+    expect(readFileSync(join(stackDir, "sharded", "features.csv"), "utf8")).toMatch(/\n[^,]+,b,/);
   });
 });

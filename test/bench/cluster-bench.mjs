@@ -104,14 +104,19 @@ try {
 const tables = results.map((r) => readFileSync(join(r.out, "features.csv")));
 const identical =
   tables.every((t) => t.equals(tables[0])) && results.every((r) => existsSync(join(r.out, "features.npz")));
-const commit = spawnSync("git", ["log", "-1", "--format=%s"], { cwd: root, encoding: "utf8" }).stdout.trim();
+// The commit by its subject's first words (hashes change with every rebase).
+const commit = spawnSync("git", ["log", "-1", "--format=%s"], { cwd: root, encoding: "utf8" })
+  .stdout.trim()
+  .split(" ")
+  .slice(0, 8)
+  .join(" ");
 const sum = (values) => values.reduce((a, b) => a + b, 0);
 
 const section = [
   "<!-- cluster-bench:start -->",
   "## Sharded runs through Slurm: `extract --plan`, `--shard`, `merge`",
   "",
-  `Measured by \`node test/bench/cluster-bench.mjs\` on ${new Date().toISOString().slice(0, 10)} (commit "${commit}"), as root on a`,
+  `Measured by \`node test/bench/cluster-bench.mjs\` on ${new Date().toISOString().slice(0, 10)} (commit "${commit}…"), as root on a`,
   "single-node Slurm 22.05 cluster (Debian's slurm-wlm) that the script starts on this machine with 2 CPUs: the batch",
   `benchmark's ${graphs} dense ${nodes}-node matrices with default settings, planned once (\`extract --plan\`, 2 worker threads),`,
   "then run by `cluster-script`'s job scripts as an array job of N shards of 1 CPU each and its merge job",
@@ -138,8 +143,9 @@ const section = [
     : []),
   ...(Math.max(...results.map((r) => r.load)) > cpus().length
     ? [
-        `A load average above ${cpus().length} means other programs shared the CPUs during these runs: the wall times and`,
-        "their ratio then understate what the shards gain on free CPUs; the CPU times are the steadier figures.",
+        `A load average above ${cpus().length} means other programs shared the CPUs during these runs: each job got only part of`,
+        "a CPU (compare its CPU and wall times), so the wall times and their ratio measure the machine's load as much as",
+        "the split; the CPU times are the steadier figures.",
       ]
     : []),
   "<!-- cluster-bench:end -->",

@@ -4,11 +4,15 @@
  * shard under other settings is refused; a shard run again skips the graphs it finished. Reference: the
  * single-process run of the same command.
  */
+import { spawn } from "node:child_process";
 import { existsSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
+import { fileURLToPath } from "node:url";
 import { beforeAll, describe, expect, it } from "vitest";
 import { expectSameRun, SMALL_DATASET, similarityDataset } from "./extract-fixtures.js";
 import { runCli } from "./run-cli.js";
+
+const BIN = fileURLToPath(new URL("../../packages/cli/bin/cliquescape.js", import.meta.url));
 
 /** The small fixture plus a graph with a bad cell (fails, with its line) and a manifest row without a file. */
 function datasetWithFailures(): string {
@@ -167,6 +171,47 @@ describe("sharded extract runs", () => {
       expect(results.find((r) => r.status === 2)!.stderr).toContain("changed since the plan");
     } finally {
       writeFileSync(file, original);
+    }
+  });
+
+  it("the same shard started twice: the second refuses at once (its part folder is locked), other shards run", async () => {
+    const out = join(dir, "twice");
+    // Many null samples: a shard is still working when the next command starts.
+    const slow = ["--null-model", "rewire", "--null-samples", "5000"];
+    expect(runCli(["extract", manifest, "--out", out, "--plan", ...slow]).status).toBe(0);
+    const start = (i: number) =>
+      spawn(
+        process.execPath,
+        [BIN, "extract", manifest, "--out", out, "--spec", join(out, "spec.json"), "--shard", `${i}/2`],
+        { stdio: "ignore" },
+      );
+    const locked = async (i: number) => {
+      const lock = join(out, "parts", `${i}-of-2`, "run.lock");
+      for (let k = 0; !existsSync(lock); k++) {
+        if (k > 600) throw new Error(`shard ${i} never took its lock`);
+        await new Promise((resolve) => setTimeout(resolve, 100));
+      }
+    };
+    const stop = async (child: ReturnType<typeof spawn>) => {
+      if (child.exitCode === null) child.kill("SIGTERM");
+      if (child.exitCode === null) await new Promise((resolve) => child.once("exit", resolve));
+    };
+    const first = start(0);
+    try {
+      await locked(0);
+      const second = shard(out, 0, 2);
+      expect(second.status).toBe(75);
+      expect(second.stderr).toContain("is in use by another run");
+      // Shard 1 has its own folder and lock: it starts beside shard 0 (and is stopped: that is all we need).
+      const other = start(1);
+      try {
+        await locked(1);
+        expect(other.exitCode).toBeNull();
+      } finally {
+        await stop(other);
+      }
+    } finally {
+      await stop(first);
     }
   });
 });

@@ -130,6 +130,10 @@ describe("sharded extract runs", () => {
     const before = runCli(["extract", manifest, "--out", out, "--shard", "0/2"]);
     expect(before.status).toBe(2);
     expect(before.stderr).toContain("--plan");
+    // A single run's folder has no plan to merge.
+    const unplanned = runCli(["merge", single]);
+    expect(unplanned.status).toBe(2);
+    expect(unplanned.stderr).toContain("has no shard plan");
     expect(runCli(["extract", manifest, "--out", out, "--plan", "--top-dim", "2"]).status).toBe(0);
     // The same options as the plan need no --spec: the grid comes from the plan.
     const same = runCli(["extract", manifest, "--out", out, "--shard", "0/2", "--top-dim", "2"]);

@@ -138,7 +138,11 @@ export async function runShard(
         };
       } catch (error) {
         const message = error instanceof Error ? error.message : String(error);
-        writeShardStatus(part.root, { ...status, state: "failed", done: kept.graphs, failed: 0, message });
+        try {
+          writeShardStatus(part.root, { ...status, state: "failed", done: kept.graphs, failed: 0, message });
+        } catch {
+          // the folder cannot be written (the disk is full?): the error below says why
+        }
         throw error;
       }
     },

@@ -69,4 +69,26 @@ describe("rankModP", () => {
     ).toBe(3);
     expect(rankOf([[0, 0, 0]], 2)).toBe(0);
   });
+
+  it("divides by pivots other than ±1 (hand-checked determinants, common practice)", () => {
+    // Columns (1, 2) and (3, 1): det = 1·1 − 3·2 = −5. The first column's pivot (its largest row) has the
+    // coefficient 2, so cancelling it needs 2⁻¹ (3 mod 5, 4 mod 7), not 2.
+    const columns = [
+      [1, 2],
+      [3, 1],
+    ];
+    expect(rankOf(columns, 5)).toBe(1);
+    expect(rankOf(columns, 7)).toBe(2);
+    // Columns (0, 3, 4), (1, 2, 0), (2, 0, 6): det = 0·(2·6 − 0·0) − 1·(3·6 − 0·4) + 2·(3·0 − 2·4) = −34
+    // = −2·17 (by hand, first-row expansion): rank 2 over Z/2 and Z/17, rank 3 over Z/5 and Z/7.
+    const bigger = [
+      [0, 3, 4],
+      [1, 2, 0],
+      [2, 0, 6],
+    ];
+    expect(rankOf(bigger, 17)).toBe(2);
+    expect(rankOf(bigger, 2)).toBe(2);
+    expect(rankOf(bigger, 5)).toBe(3);
+    expect(rankOf(bigger, 7)).toBe(3);
+  });
 });

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { encodeNpy } from "./encode-npy.js";
 import { InputFileError } from "./input-file-error.js";
 import { npyToGraphs } from "./npy-graphs.js";
-import { npyValues, parseNpy } from "./parse-npy.js";
+import { npyHeaderEnd, npyValues, parseNpy } from "./parse-npy.js";
 import type { GraphReadOptions } from "./read-options.js";
 
 /**
@@ -260,5 +260,28 @@ describe("parseNpy: headers that must not be believed", () => {
         `a.npy: array of shape ${shape} holds no ${what}: there is no graph to read`,
       );
     }
+  });
+});
+
+describe("npyHeaderEnd: where the data start, from the first bytes only (NEP 1 layout)", () => {
+  it("10 + the uint16 length for version 1.0, 12 + the uint32 length for 2.0 and 3.0", () => {
+    const v1 = npyBytes(HEADER_2x2_U1, [0, 1, 1, 0]);
+    expect(npyHeaderEnd(v1)).toBe(v1.length - 4);
+    expect(npyHeaderEnd(v1.subarray(0, 10))).toBe(v1.length - 4);
+    for (const major of [2, 3]) {
+      const v = npyBytes(HEADER_2x2_U1, [0, 1, 1, 0], major);
+      expect(npyHeaderEnd(v), `version ${major}`).toBe(v.length - 4);
+      expect(npyHeaderEnd(v.subarray(0, 12))).toBe(v.length - 4);
+      // The uint32 length is not all there yet.
+      expect(npyHeaderEnd(v.subarray(0, 11))).toBeUndefined();
+    }
+  });
+
+  it("undefined for too few bytes or another magic", () => {
+    const v1 = npyBytes(HEADER_2x2_U1, [0, 1, 1, 0]);
+    expect(npyHeaderEnd(v1.subarray(0, 9))).toBeUndefined();
+    const other = v1.slice();
+    other[3] = 0x41;
+    expect(npyHeaderEnd(other)).toBeUndefined();
   });
 });

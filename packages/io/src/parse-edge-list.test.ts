@@ -179,3 +179,36 @@ describe("parseEdgeListText: empty graphs and unclear weights", () => {
     );
   });
 });
+
+describe("parseEdgeListText: mistakes found by mutation testing to be untested", () => {
+  it("a one-column file is not an edge list", () => {
+    const error = failure("a\nb\n", { header: false });
+    expect(error.problem).toBe("ragged-row");
+    expect(error.reason).toBe("an edge needs at least a source and a target cell");
+    expect(error.position.line).toBe(1);
+  });
+
+  it("a node listed twice in the node list", () => {
+    const error = failure("source,target\na,b\n", { nodes: ["a", "b", "a"] });
+    expect(error.problem).toBe("bad-labels");
+    expect(error.reason).toBe('node "a" is listed twice in the node list');
+  });
+
+  it("an empty node name, with the column it is in", () => {
+    const source = failure("source,target,weight\na,b,1\n,b,1\n");
+    expect(source.problem).toBe("unknown-node");
+    expect(source.reason).toBe("empty node name");
+    expect(source.position).toMatchObject({ line: 3, column: 1 });
+    expect(failure("source,target,weight\na,,1\n").position).toMatchObject({ line: 2, column: 2 });
+  });
+
+  it("counts the dropped edges in the warnings, singular and plural", () => {
+    expect(read("a,b,0\nb,c,0\nc,d,1\n", { header: false }).warnings[0]).toMatch(
+      /^left out 2 edges of weight 0 /,
+    );
+    expect(read("a,b,0\nc,d,1\n", { header: false }).warnings[0]).toMatch(/^left out 1 edge of weight 0 /);
+    expect(read("a,b,nan\nb,c,NaN\nc,d,1\n", { header: false }).warnings).toEqual([
+      "left out 2 edges whose weight is NaN",
+    ]);
+  });
+});

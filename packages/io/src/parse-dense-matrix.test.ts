@@ -279,3 +279,33 @@ describe("parseDenseMatrixText: files that are not what they seem", () => {
     );
   });
 });
+
+describe("parseDenseMatrixText: mistakes found by mutation testing to be untested", () => {
+  it("a column of labels and nothing else has no matrix", () => {
+    const error = failure("a\nb\n");
+    expect(error.problem).toBe("not-square");
+    expect(error.reason).toBe("matrix has no columns");
+  });
+
+  it("one row short: the count in the singular", () => {
+    expect(failure("0,1,1\n").reason).toMatch(/^matrix is not square: 1 row but 3 columns/);
+  });
+
+  it("spaces inside a tab-separated line are named, however many", () => {
+    const error = failure("0\t1\n1  0\n");
+    expect(error.problem).toBe("ragged-row");
+    expect(error.reason).toMatch(/it separates cells with spaces where line 1 uses tabs/);
+  });
+
+  it("a headerless edge list with multi-digit node numbers is refused as one", () => {
+    // Read as a 3×3 matrix its diagonal would be 10, 12, 3: not constant, so it is an edge list.
+    expect(failure("10,11,1\n11,12,2\n12,10,3\n").problem).toBe("bad-header");
+  });
+
+  it("a labels option that differs from the file's labels", () => {
+    const error = failure("a,b\n0,1\n1,0\n", { labels: ["x", "y"] });
+    expect(error.problem).toBe("bad-labels");
+    expect(error.reason).toBe("the labels option differs from the labels in the file");
+    expect(edges("a,b\n0,1\n1,0\n", { labels: ["a", "b"] })).toHaveLength(1);
+  });
+});

@@ -302,6 +302,10 @@ describe("parseDenseMatrixText: mistakes found by mutation testing to be unteste
     expect(failure("10,11,1\n11,12,2\n12,10,3\n").problem).toBe("bad-header");
   });
 
+  it("an empty first cell with no label row is an empty diagonal, not a missing label", () => {
+    expect(edges(",0.5,1\n0.5,,2\n1,2,\n")).toEqual(["0-1:0.5", "0-2:1", "1-2:2"]);
+  });
+
   it("a labels option that differs from the file's labels", () => {
     const error = failure("a,b\n0,1\n1,0\n", { labels: ["x", "y"] });
     expect(error.problem).toBe("bad-labels");

@@ -306,6 +306,12 @@ describe("parseDenseMatrixText: mistakes found by mutation testing to be unteste
     expect(edges(",0.5,1\n0.5,,2\n1,2,\n")).toEqual(["0-1:0.5", "0-2:1", "1-2:2"]);
   });
 
+  it("a decimal too large for a double (1e999) is a non-finite weight at its cell", () => {
+    const error = failure("0,1e999\n1e999,0\n");
+    expect(error.problem).toBe("not-finite");
+    expect(error.position).toMatchObject({ line: 1, column: 2 });
+  });
+
   it("a labels option that differs from the file's labels", () => {
     const error = failure("a,b\n0,1\n1,0\n", { labels: ["x", "y"] });
     expect(error.problem).toBe("bad-labels");

@@ -202,6 +202,10 @@ describe("parseEdgeListText: mistakes found by mutation testing to be untested",
     expect(failure("source,target,weight\na,,1\n").position).toMatchObject({ line: 2, column: 2 });
   });
 
+  it("weightColumn: null ignores the third column of a headerless list too", () => {
+    expect(read("a b 5\nb c 7\n", { header: false, weightColumn: null }).edges).toEqual(["a-b:1", "b-c:1"]);
+  });
+
   it("counts the dropped edges in the warnings, singular and plural", () => {
     expect(read("a,b,0\nb,c,0\nc,d,1\n", { header: false }).warnings[0]).toMatch(
       /^left out 2 edges of weight 0 /,

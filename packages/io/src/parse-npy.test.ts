@@ -100,6 +100,7 @@ describe("parseNpy: errors", () => {
         npyBytes(`{'descr': '${descr}', 'fortran_order': False, 'shape': (1, 1), }`, [0]),
       );
       expect(error.problem).toBe("unsupported-dtype");
+      expect(error.position.byteOffset).toBe(10); // where the version 1.0 header starts
       expect(error.reason).toMatch(new RegExp(`^unsupported dtype "${descr}"; supported: float32, float64,`));
     }
     const structured = "{'descr': [('a', '<f8')], 'fortran_order': False, 'shape': (1,), }";

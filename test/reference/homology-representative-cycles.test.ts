@@ -138,9 +138,10 @@ describe("representative loops of H1 bars", () => {
         fc.property(arcsArbitrary(directed), (arcs) => {
           total += checkLoops(arcs);
         }),
-        { numRuns: 120 },
+        { numRuns: 300 },
       );
-      // Make sure the property saw loops at all.
+      // Make sure the property saw loops at all. Fresh seeds each run: with 120 runs the undirected total
+      // once fell to 43; with 300, thirty seeds gave 151–222 (mean 185), far above this floor.
       expect(total).toBeGreaterThan(50);
     });
   }

@@ -2,6 +2,7 @@ import type { WorkMonitor } from "../work/work-monitor.js";
 import { ChainBuilder } from "./chain-builder.js";
 import type { CoboundaryModel } from "./coboundary-model.js";
 import { ColumnStore } from "./column-store.js";
+import { grownInt } from "./grown-array.js";
 import type { ByteLedger } from "./homology-budget.js";
 import { KeyMap } from "./key-map.js";
 import { LazyColumn } from "./lazy-column.js";
@@ -333,12 +334,6 @@ function pushChain(
   const cc = store.chainCoef;
   for (let e = store.chainStart[owner]; e < chainTo; e++)
     model.pushCoboundary(dim, ck[e], cf[e], (factor * cc[e]) % p, p, work);
-}
-
-function grownInt(a: Int32Array, size: number): Int32Array {
-  const b = new Int32Array(size);
-  b.set(a);
-  return b;
 }
 
 /** Whether `coface` is the partner of an apparent pair with a facet other than `self`. */

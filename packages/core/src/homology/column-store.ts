@@ -1,3 +1,4 @@
+import { grownFloat, grownInt } from "./grown-array.js";
 import type { ByteLedger } from "./homology-budget.js";
 
 const COLUMN_BYTES = 12; // chainStart, chainLength, pivotCoef
@@ -71,16 +72,4 @@ export class ColumnStore {
     this.chainF = grownFloat(this.chainF, size);
     this.chainCoef = grownInt(this.chainCoef, size);
   }
-}
-
-function grownInt(a: Int32Array, size: number): Int32Array {
-  const b = new Int32Array(size);
-  b.set(a);
-  return b;
-}
-
-function grownFloat(a: Float64Array, size: number): Float64Array {
-  const b = new Float64Array(size);
-  b.set(a);
-  return b;
 }

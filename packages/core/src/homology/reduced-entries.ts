@@ -1,3 +1,4 @@
+import { grownFloat, grownInt } from "./grown-array.js";
 import type { ByteLedger } from "./homology-budget.js";
 
 const ENTRY_BYTES = 20; // f (f64), key (f64), coefficient (i32)
@@ -85,16 +86,4 @@ export class ReducedEntries {
     cover.set(this.cover);
     this.cover = cover;
   }
-}
-
-function grownInt(a: Int32Array, size: number): Int32Array {
-  const b = new Int32Array(size);
-  b.set(a);
-  return b;
-}
-
-function grownFloat(a: Float64Array, size: number): Float64Array {
-  const b = new Float64Array(size);
-  b.set(a);
-  return b;
 }

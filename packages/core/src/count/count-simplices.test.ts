@@ -288,6 +288,11 @@ describe("limits", () => {
     expect(() => countSimplices(k6, { maxDim: -1 })).toThrow(RangeError);
     expect(() => countSimplices(k6, { maxDim: 1.5 })).toThrow(RangeError);
     expect(() => countSimplices(k6, { budget: Number.NaN })).toThrow(RangeError);
+    // the messages name the limit and the value given
+    expect(() => countSimplices(k6, { maxDim: -1 })).toThrow(/maxDim must be a non-negative integer, got -1/);
+    expect(() => countSimplices(k6, { budget: -2 })).toThrow(/budget must be a non-negative number, got -2/);
+    // budget 0 is allowed (non-negative): K6 then stops on the budget, it is not refused as a bad limit
+    expect(() => countSimplices(k6, { budget: 0 })).toThrow(SimplexBudgetError);
     expect(() => countSimplices(k6, { threshold: 1 })).toThrow(TypeError);
   });
 });

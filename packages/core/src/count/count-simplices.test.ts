@@ -323,4 +323,36 @@ describe("thresholds follow the weight semantics", () => {
     expect(list(s.euler)).toEqual([3, 2, 1, 1]);
     expect(list(s.thresholds)).toEqual([0, 1, 2, 3]);
   });
+  it("both sweep kernels, asked for by name, give the hand-counted K4 at every threshold", () => {
+    // K4: the triangle 0-1-2 at weight 1, the three edges to vertex 3 at weight 2 (hand-counted:
+    // nothing, then a filled triangle, then the solid tetrahedron 4, 6, 4, 1)
+    const k4 = graph(4, [
+      [0, 1, 1],
+      [1, 2, 1],
+      [0, 2, 1],
+      [0, 3, 2],
+      [1, 3, 2],
+      [2, 3, 2],
+    ]);
+    for (const kernel of ["webassembly", "typescript", "auto"] as const) {
+      const s = sweepSimplexCounts(k4, explicitGrid([0.5, 1, 2], "distance"), { maxDim: 3, kernel });
+      expect(s.counts.map(list), kernel).toEqual([
+        [4, 0, 0, 0],
+        [4, 3, 1, 0],
+        [4, 6, 4, 1],
+      ]);
+      expect(list(s.euler), kernel).toEqual([4, 2, 1]);
+      expect(s.truncated, kernel).toBe(false);
+    }
+  });
+  it("the sweep refuses an unknown kernel name, and an empty grid gives no rows (and does no counting)", () => {
+    // @ts-expect-error: a caller from JavaScript can pass anything
+    expect(() => sweepSimplexCounts(t, explicitGrid([1], "distance"), { kernel: "wasm" })).toThrow(
+      /kernel must be "auto", "webassembly" or "typescript", got wasm/,
+    );
+    const empty = sweepSimplexCounts(t, explicitGrid([], "distance"), { budget: 0 });
+    expect(empty.counts).toEqual([]);
+    expect(empty.euler.length).toBe(0);
+    expect(empty.truncated).toBe(false);
+  });
 });

@@ -82,6 +82,11 @@ describe("the WebAssembly counting kernel", () => {
       Array.from({ length: 12 }, (_, k) => binomial(12, k + 1)),
     );
     expect(() => fresh.countSimplices(g, { kernel: "webassembly" })).toThrow(/WebAssembly counting kernel/);
+    const freshSweep = await import("../sweep-simplex-counts.js");
+    const grid = { thresholds: Float64Array.from([1]), semantics: "distance" as const };
+    expect(() => freshSweep.sweepSimplexCounts(g, grid, { maxDim: 3, kernel: "webassembly" })).toThrow(
+      /WebAssembly counting kernel is not available/,
+    );
   });
 
   it("refuses an unknown kernel name", () => {

@@ -24,7 +24,13 @@ describe("writeBreadthFirstOrder", () => {
     // 0:[1] 1:[] 2:[] 3:[4] 4:[]: vertex 0 must not reach 4, the first arc after its own list; ids unchanged
     const outOffsets2 = new Int32Array(6);
     const outTargets2 = new Int32Array(2);
-    writeBreadthFirstOrder(5, Int32Array.from([0, 1, 1, 1, 2, 2]), Int32Array.from([1, 4]), outOffsets2, outTargets2);
+    writeBreadthFirstOrder(
+      5,
+      Int32Array.from([0, 1, 1, 1, 2, 2]),
+      Int32Array.from([1, 4]),
+      outOffsets2,
+      outTargets2,
+    );
     expect(Array.from(outOffsets2)).toEqual([0, 1, 1, 1, 2, 2]);
     expect(Array.from(outTargets2)).toEqual([1, 4]);
   });

@@ -17,6 +17,8 @@ const CHECKPOINT_EDGES = 4000;
 /** Arrowheads as cytoscape draws `triangle` at arrow-scale 0.7 on a 1-unit edge: about 6 units long and wide. */
 const ARROW_LENGTH = 6;
 const ARROW_HALF_WIDTH = 3;
+/** Scratch for arrowFrame: ux, uy, tip, base of the arc being drawn (no allocation per edge). */
+const arrow = new Float64Array(4);
 
 /**
  * The graph's edges, drawn on one canvas under cytoscape's nodes: the first `count` edges in entering order,
@@ -167,14 +169,10 @@ export class EdgeLayer {
           continue;
         }
         // Border to the arrowhead's base; the arrowhead's tip touches the target's border.
-        const dx = x1 - x0;
-        const dy = y1 - y0;
-        const length = Math.hypot(dx, dy) || 1;
-        const ux = dx / length;
-        const uy = dy / length;
-        const tip = length - radii[t];
-        const base = tip - ARROW_LENGTH;
-        if (base <= radii[s]) continue;
+        if (!this.arrowFrame(e)) continue;
+        const ux = arrow[0];
+        const uy = arrow[1];
+        const base = arrow[3];
         context.moveTo(x0 + ux * radii[s], y0 + uy * radii[s]);
         context.lineTo(x0 + ux * base, y0 + uy * base);
       }
@@ -182,18 +180,14 @@ export class EdgeLayer {
       if (!directed) continue;
       context.beginPath();
       for (let e = start; e < end; e++) {
+        if (!this.arrowFrame(e)) continue;
         const s = sources[e];
-        const t = targets[e];
         const x0 = xy[2 * s];
         const y0 = xy[2 * s + 1];
-        const dx = xy[2 * t] - x0;
-        const dy = xy[2 * t + 1] - y0;
-        const length = Math.hypot(dx, dy) || 1;
-        const ux = dx / length;
-        const uy = dy / length;
-        const tip = length - radii[t];
-        const base = tip - ARROW_LENGTH;
-        if (base <= radii[s]) continue;
+        const ux = arrow[0];
+        const uy = arrow[1];
+        const tip = arrow[2];
+        const base = arrow[3];
         context.moveTo(x0 + ux * tip, y0 + uy * tip);
         context.lineTo(x0 + ux * base - uy * ARROW_HALF_WIDTH, y0 + uy * base + ux * ARROW_HALF_WIDTH);
         context.lineTo(x0 + ux * base + uy * ARROW_HALF_WIDTH, y0 + uy * base - ux * ARROW_HALF_WIDTH);
@@ -201,6 +195,27 @@ export class EdgeLayer {
       }
       context.fill();
     }
+  }
+
+  /**
+   * Writes arc e's unit direction and the distances of its arrowhead's tip and base from the source's centre
+   * into `arrow` (shaft and head read the same numbers); false when the nodes overlap so far that no shaft
+   * is left to draw.
+   */
+  private arrowFrame(e: number): boolean {
+    const { sources, targets, xy, radii } = this;
+    const s = sources[e];
+    const t = targets[e];
+    const dx = xy[2 * t] - xy[2 * s];
+    const dy = xy[2 * t + 1] - xy[2 * s + 1];
+    const length = Math.hypot(dx, dy) || 1;
+    const tip = length - radii[t];
+    const base = tip - ARROW_LENGTH;
+    arrow[0] = dx / length;
+    arrow[1] = dy / length;
+    arrow[2] = tip;
+    arrow[3] = base;
+    return !(base <= radii[s]);
   }
 
   /** Edges shown at the current threshold. */

@@ -1,3 +1,5 @@
+import { tmpdir } from "node:os";
+import { join } from "node:path";
 import { defineConfig } from "vitest/config";
 import base from "./vitest.config.js";
 
@@ -20,5 +22,8 @@ export default defineConfig({
     ],
     exclude: ["test/reference/viewer-*.test.ts", "**/node_modules/**"],
     setupFiles: ["test/support/fast-check-fixed-seed.ts"],
+    // Python's reference answers do not depend on the mutant: asked once, then read back
+    // (test/support/python.ts). Outside Stryker's sandbox, so later runs reuse them too.
+    env: { CLIQUESCAPE_PYTHON_CACHE: join(tmpdir(), "cliquescape-python-cache") },
   },
 });

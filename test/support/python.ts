@@ -4,7 +4,9 @@
  * under CI, which installs them: there a missing module is a failure, so a reference check never goes quiet.
  */
 import { spawnSync } from "node:child_process";
-import { appendFileSync, existsSync } from "node:fs";
+import { createHash } from "node:crypto";
+import { appendFileSync, existsSync, mkdirSync, readFileSync, renameSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { expect } from "vitest";
 
@@ -17,6 +19,8 @@ export const PYTHON = process.env.PYTHON ?? (existsSync("/usr/bin/python3") ? "/
  * the test file whose checks it skips.
  */
 export function missingPythonModules(modules: string[]): string | null {
+  const cached = cacheFile("modules", modules.join(","));
+  if (cached && existsSync(cached)) return null;
   const probe = spawnSync(PYTHON, ["-c", modules.map((m) => `import ${m}`).join("; ")], { encoding: "utf8" });
   const missing = probe.error
     ? `${PYTHON} not found (${probe.error.message})`
@@ -28,18 +32,43 @@ export function missingPythonModules(modules: string[]): string | null {
   const log = process.env.CLIQUESCAPE_PYTHON_SKIPS;
   if (missing && log)
     appendFileSync(log, `${JSON.stringify({ file: expect.getState().testPath, modules })}\n`);
+  if (cached && !missing) writeWhole(cached, "");
   return missing;
 }
 
 /** Runs test/support/python/<script> with `input` as JSON on stdin; returns its JSON stdout. */
 export function runPythonScript<T>(script: string, input: unknown): T {
   const path = fileURLToPath(new URL(`./python/${script}`, import.meta.url));
+  const stdin = JSON.stringify(input);
+  const cached = cacheFile("answer", `${readFileSync(path, "utf8")}\0${stdin}`);
+  if (cached && existsSync(cached)) return JSON.parse(readFileSync(cached, "utf8")) as T;
   const run = spawnSync(PYTHON, [path], {
-    input: JSON.stringify(input),
+    input: stdin,
     encoding: "utf8",
     maxBuffer: 64 << 20,
   });
   if (run.error) throw run.error;
   if (run.status !== 0) throw new Error(`${script} failed (exit ${run.status}):\n${run.stderr}`);
-  return JSON.parse(run.stdout) as T;
+  const answer = JSON.parse(run.stdout) as T;
+  if (cached) writeWhole(cached, run.stdout);
+  return answer;
+}
+
+/**
+ * Mutation runs (vitest.mutation.config.ts) set CLIQUESCAPE_PYTHON_CACHE to a folder: Python's answer
+ * depends only on the script and its input, never on the mutant, so it is asked once per run instead of
+ * once per mutant. `npm test` leaves it unset and asks Python every time.
+ */
+function cacheFile(kind: string, key: string): string | null {
+  const dir = process.env.CLIQUESCAPE_PYTHON_CACHE;
+  if (!dir) return null;
+  mkdirSync(dir, { recursive: true });
+  return join(dir, `${kind}-${createHash("sha256").update(key).digest("hex")}.json`);
+}
+
+// Written aside and renamed, so a test process stopped midway never leaves half an answer.
+function writeWhole(file: string, text: string): void {
+  const aside = `${file}.${process.pid}.tmp`;
+  writeFileSync(aside, text);
+  renameSync(aside, file);
 }

@@ -6,7 +6,8 @@
  * on the number of workers; bad command lines exit 2 with the option to fix.
  */
 import { spawnSync } from "node:child_process";
-import { mkdirSync, readFileSync } from "node:fs";
+import { existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
+import { hostname } from "node:os";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { missingPythonModules, PYTHON } from "../support/python.js";
@@ -199,5 +200,66 @@ describe("connect: bad command lines", () => {
       expect(run.status).toBe(2);
       expect(run.stderr).toMatch(message);
     }
+  });
+});
+
+// Common practice for tools that write into a folder: never remove or overwrite files they did not write.
+describe("connect: --out is checked before anything is written", () => {
+  const dir = scratchFiles({ "r.csv": "1,2\n3,5\n4,4\n2,1\n" });
+  const connect = (out: string) =>
+    runCli(["connect", join(dir, "r.csv"), "--out", out, "--measure", "pearson"]);
+
+  it("refuses a folder of the user's own files and leaves them as they were", () => {
+    const out = join(dir, "mine");
+    mkdirSync(out);
+    writeFileSync(join(out, "matrices.npy"), "the user's own array");
+    writeFileSync(join(out, "ids.txt"), "kept\n");
+    const run = connect(out);
+    expect(run.status).toBe(2);
+    expect(run.stderr).toMatch(
+      /is not a cliquescape connectivity folder \(it has no cliquescape-connect\.json\)/,
+    );
+    expect(readdirSync(out).sort()).toEqual(["ids.txt", "matrices.npy"]);
+    expect(readFileSync(join(out, "matrices.npy"), "utf8")).toBe("the user's own array");
+  });
+
+  it("refuses the recordings' own folder", () => {
+    const recordings = join(dir, "recs");
+    mkdirSync(recordings);
+    writeFileSync(join(recordings, "a.csv"), "1,2\n3,5\n4,4\n2,1\n");
+    const run = runCli(["connect", recordings, "--out", recordings, "--measure", "pearson"]);
+    expect(run.status).toBe(2);
+    expect(run.stderr).toMatch(/is the dataset's folder/);
+    expect(readdirSync(recordings)).toEqual(["a.csv"]);
+  });
+
+  it("writes a new folder, marks it, and writes it again on a second run", () => {
+    const out = join(dir, "conn");
+    expect(connect(out).status).toBe(0);
+    const first = readFileSync(join(out, "matrices.npy"));
+    expect(readFileSync(join(out, "cliquescape-connect.json"), "utf8")).toBe(
+      '{"kind":"cliquescape connectivity folder","version":1}\n',
+    );
+    expect(existsSync(join(out, "run.lock"))).toBe(false);
+    expect(connect(out).status).toBe(0);
+    expect(readFileSync(join(out, "matrices.npy"))).toEqual(first);
+  });
+
+  it("exit 75 while another live process holds the folder, naming it", () => {
+    const out = join(dir, "busy");
+    mkdirSync(out);
+    writeFileSync(
+      join(out, "cliquescape-connect.json"),
+      '{"kind":"cliquescape connectivity folder","version":1}\n',
+    );
+    const boot = existsSync("/proc/sys/kernel/random/boot_id")
+      ? readFileSync("/proc/sys/kernel/random/boot_id", "utf8").trim()
+      : null;
+    const holder = { pid: process.pid, host: hostname(), started: new Date().toISOString(), boot };
+    writeFileSync(join(out, "run.lock"), `${JSON.stringify(holder)}\n`);
+    const run = connect(out);
+    expect(run.status).toBe(75);
+    expect(run.stderr).toContain(String(process.pid));
+    expect(existsSync(join(out, "matrices.npy"))).toBe(false);
   });
 });

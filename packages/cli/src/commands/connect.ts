@@ -52,8 +52,9 @@ Examples:
   cliquescape connect cohort.npy --out conn --measure partial --labels groups.txt
   cliquescape connect spikes.csv --out conn --measure coactivity --window 2 --layout files
   cliquescape connect eeg/manifest.csv --out conn --measure lagged --max-lag 5 --channels 64
-Exit codes: 0 every recording written; 1 some left out (see errors.csv); 2 bad command line; 3 the stack
-would not fit in memory (use --layout files); 130 interrupted.`,
+Exit codes: 0 every recording written; 1 some left out (see errors.csv); 2 bad command line, or --out
+holds files connect did not write; 3 the stack would not fit in memory (use --layout files); 74 --out
+cannot be written; 75 another connect is writing --out; 130 interrupted.`,
   );
   command.action((dataset: string, raw: Record<string, unknown>) => {
     void connectAction(dataset, raw);

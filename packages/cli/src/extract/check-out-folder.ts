@@ -7,13 +7,25 @@ import { RUN_FOLDER_MARKER } from "./run-folder.js";
 /** Raised when --out names a folder we must not write into (the user's own files, or the dataset). */
 export class OutFolderError extends UsageError {}
 
+/** The file that marks a folder as written by one of our commands, and what to call such a folder. */
+export interface FolderMarker {
+  file: string;
+  kind: string;
+}
+
+const RUN_FOLDER: FolderMarker = { file: RUN_FOLDER_MARKER, kind: "cliquescape run folder" };
+
 /**
  * Whether `--out` may be written, decided before anything is read or computed: a new path, an empty
  * folder, or a folder carrying our marker. A file fails at once; a folder holding anything else is
  * refused, so no file of the user's is ever overwritten or removed (not even one named like our
  * temporary files). Returns whether the folder is ours already (a resumed run).
  */
-export function checkOutFolder(out: string, dataset: string): { resumed: boolean } {
+export function checkOutFolder(
+  out: string,
+  dataset: string,
+  marker: FolderMarker = RUN_FOLDER,
+): { resumed: boolean } {
   if (isFolder(dataset) && realPath(out) === realPath(dataset)) throw sameFolderError(out, dataset);
   let outIsFolder: boolean;
   try {
@@ -27,7 +39,7 @@ export function checkOutFolder(out: string, dataset: string): { resumed: boolean
       Object.assign(new Error("not a folder"), { code: "ENOTDIR", path: out, syscall: "mkdir" }),
       out,
     );
-  if (existsSync(join(out, RUN_FOLDER_MARKER))) return { resumed: true };
+  if (existsSync(join(out, marker.file))) return { resumed: true };
   let names: string[];
   try {
     names = readdirSync(out);
@@ -37,9 +49,9 @@ export function checkOutFolder(out: string, dataset: string): { resumed: boolean
   if (names.length === 0) return { resumed: false };
   const shown = names.slice(0, 3).join(", ") + (names.length > 3 ? ", …" : "");
   throw new OutFolderError(
-    `--out ${out} already holds files (${shown}) and is not a cliquescape run folder (it has no ` +
-      `${RUN_FOLDER_MARKER}); refusing to write into it, so nothing in it is changed. Choose a new or ` +
-      `empty folder.${earlierRunHint(out)}`,
+    `--out ${out} already holds files (${shown}) and is not a ${marker.kind} (it has no ` +
+      `${marker.file}); refusing to write into it, so nothing in it is changed. Choose a new or ` +
+      `empty folder.${marker === RUN_FOLDER ? earlierRunHint(out) : ""}`,
   );
 }
 

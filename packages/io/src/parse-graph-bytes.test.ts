@@ -39,6 +39,39 @@ describe("parseGraphBytes", () => {
     );
   });
 
+  it("names the extension it cannot read, or the file when there is none", () => {
+    expect(failure(() => parseGraphBytes(text("x"), "g.graphml")).reason).toBe(
+      'cannot read ".graphml" files here; use .csv, .tsv, .txt (a matrix or an edge list) or .npy',
+    );
+    expect(failure(() => parseGraphBytes(text("x"), "matrix")).reason).toBe(
+      'cannot read "matrix" files here; use .csv, .tsv, .txt (a matrix or an edge list) or .npy',
+    );
+  });
+
+  it("default limits: 256 MiB for text, 2 GiB for .npy (read-options.ts)", () => {
+    const bytes = new Uint8Array(256 * 2 ** 20 + 1);
+    const textError = failure(() => parseGraphBytes(bytes, "big.csv"));
+    expect(textError.reason).toBe(
+      "file is 256 MiB, more than the limit of 256 MiB; raise maxBytes if you have the memory",
+    );
+    // The same bytes as .npy pass the size check and fail on the header instead.
+    expect(failure(() => parseGraphBytes(bytes, "big.npy")).problem).not.toBe("too-large");
+  });
+
+  it("a .tsv is split at tabs even when its first line has none", () => {
+    // One node whose label holds a comma: split at commas, the label row would have two cells for one column.
+    const result = parseGraphBytes(text("x,y\n0\n"), "one.tsv", { labelRow: true });
+    expect(result.graphs[0].labels).toEqual(["x,y"]);
+  });
+
+  it("a label row makes a matrix of a file whose first line looks like an edge-list header", () => {
+    const result = parseGraphBytes(text("source,target,weight\n0,1,2\n1,0,3\n2,3,0\n"), "m.csv", {
+      labelRow: true,
+    });
+    expect(result.format).toBe("dense-matrix");
+    expect(result.graphs[0].labels).toEqual(["source", "target", "weight"]);
+  });
+
   it("reads the extension of a name without a path library", () => {
     expect(fileExtension("C:\\data\\s01.TSV")).toBe(".tsv");
     expect(fileExtension("/a.b/matrix")).toBe("");

@@ -1,4 +1,4 @@
-import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { mkdirSync, mkdtempSync, rmSync, truncateSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
@@ -73,6 +73,22 @@ describe("readGraphFile: choosing the reader", () => {
     const path = file("ij.csv", "i,j\n0,1\n1,0\n");
     expect(readGraphFile(path, { directed: true }).format).toBe("edge-list");
     expect(readGraphFile(path, { labelRow: true }).format).toBe("dense-matrix");
+  });
+});
+
+describe("readGraphFile: default size limits (read-options.ts)", () => {
+  // Sparse files: the size is checked from the file's metadata before any byte is read.
+  it("256 MiB for text files, 2 GiB for .npy", () => {
+    const big = (name: string) => {
+      const path = join(dir, name);
+      writeFileSync(path, "");
+      truncateSync(path, 256 * 2 ** 20 + 1);
+      return path;
+    };
+    expect(failure(big("big.csv")).reason).toBe(
+      "file is 256 MiB, more than the limit of 256 MiB; raise maxBytes if you have the memory",
+    );
+    expect(failure(big("big.npy")).problem).not.toBe("too-large");
   });
 });
 

@@ -67,3 +67,54 @@ describe("classifyCell", () => {
     expect(classifyCell("na")).toEqual({ kind: "text" });
   });
 });
+
+// RFC 4180 (Shafranovich, 2005) §2: fields may be quoted, records end with CRLF; around quoted fields spreadsheets
+// and pandas.to_csv write spaces at times (common practice), which we accept. Each case worked by hand.
+describe("textRows: quoted records, their edges and their line numbers", () => {
+  const error = (text: string, delimiter: Parameters<typeof textRows>[1] = ",") => {
+    try {
+      rows(text, delimiter);
+    } catch (thrown) {
+      return (thrown as InputFileError).message;
+    }
+    return "no error";
+  };
+
+  it("spaces around a quoted cell are not part of it; a leading tab in a TSV file is an empty cell", () => {
+    expect(rows(' "a" , b\n', ",")).toEqual([{ line: 1, cells: ["a", "b"] }]);
+    expect(rows('\t"a"\tb\n', "\t")).toEqual([{ line: 1, cells: ["", "a", "b"] }]);
+    expect(rows('"a"\t,b\n', ",")).toEqual([{ line: 1, cells: ["a", "b"] }]);
+  });
+
+  it("a quoted record may end the file without a line break, with a quoted or an unquoted last cell", () => {
+    expect(rows('1,"b"', ",")).toEqual([{ line: 1, cells: ["1", "b"] }]);
+    expect(rows('"a",b', ",")).toEqual([{ line: 1, cells: ["a", "b"] }]);
+  });
+
+  it("CRLF after a quoted record: the next record keeps its own line number", () => {
+    expect(rows('"a","b"\r\n1,2\r\n', ",")).toEqual([
+      { line: 1, cells: ["a", "b"] },
+      { line: 2, cells: ["1", "2"] },
+    ]);
+  });
+
+  it("a CRLF blank line in a TSV file is blank, as with LF", () => {
+    expect(rows("1\t2\r\n\r\n3\t4\r\n", "\t")).toEqual([
+      { line: 1, cells: ["1", "2"] },
+      { line: 3, cells: ["3", "4"] },
+    ]);
+  });
+
+  it("a quote inside an unquoted cell, or text after a closing quote, is named at its line and column", () => {
+    // The second record starts on line 2; its first cell spans lines 2–3, so the faulty cell is on line 3.
+    expect(error('h,h,h\n"x\ny",b"c\n')).toBe(
+      "t.csv:3:2: a quote inside an unquoted cell; quote the whole cell",
+    );
+    expect(error('h,h\n"x\ny"z,1\n')).toBe('t.csv:3:1: unexpected "z" after the closing quote of a cell');
+  });
+
+  it("a comma between digits with no semicolon on the line is a delimiter", () => {
+    expect(detectDelimiter("1,5\n")).toBe(",");
+    expect(detectDelimiter("1,5;2,5\n")).toBe(";");
+  });
+});

@@ -174,3 +174,109 @@ describe("stored reduced entries under a tight memory budget", () => {
     expect(fewer).toBe(true);
   });
 });
+
+describe("computeBarcode options and order", () => {
+  const triangle = graph(3, [
+    [0, 1, 1],
+    [1, 2, 2],
+    [0, 2, 3],
+  ]);
+
+  it("refuses a maxDim that is negative or not an integer, and accepts 0", () => {
+    for (const maxDim of [-1, 1.5, Number.NaN]) {
+      expect(() => computeBarcode(triangle, { semantics: "distance", maxDim })).toThrow(RangeError);
+      expect(() => computeBarcode(triangle, { semantics: "distance", maxDim })).toThrow(
+        `maxDim must be a non-negative integer, got ${maxDim}`,
+      );
+    }
+    const h0 = computeBarcode(triangle, { semantics: "distance", maxDim: 0 });
+    expect(h0.bars.map((b) => [b.dim, b.birth, b.death])).toEqual([
+      [0, 0, 1],
+      [0, 0, 2],
+      [0, 0, null],
+    ]);
+    expect(h0.keepZeroLength).toBe(false);
+    expect(h0.prime).toBe(2);
+  });
+
+  // Three squares 0-1-2-3, 4-5-6-7, 8-9-10-11 with sides at 1 and one diagonal each at 2 (distance): three
+  // loops born and killed at the same values, so only the birth simplices order them. Worked by hand: edges
+  // enter by (value, larger end, smaller end), so the loop of each square is closed by its last side
+  // {2,3}, {6,7}, {10,11}, and killed by the one triangle on that side and the diagonal. In H0 (the elder
+  // rule, H. Edelsbrunner and J. Harer, Computational Topology, 2010, §VII.1: the younger component dies,
+  // here the one whose oldest vertex is larger) the vertices 1, 2, 3 of the first square die with the
+  // first three sides, and so on; 0, 4 and 8 live for ever.
+  const squares: [number, number, number][] = [];
+  for (const base of [8, 4, 0]) {
+    squares.push([base, base + 1, 1], [base + 1, base + 2, 1], [base + 2, base + 3, 1], [base + 3, base, 1]);
+    squares.push([base, base + 2, 2]);
+  }
+  const threeSquares = graph(12, squares);
+
+  it("sorts bars by dimension, birth, death, then birth simplex", () => {
+    const barcode = computeBarcode(threeSquares, { semantics: "distance", maxDim: 1 });
+    expect(barcode.bars.filter((b) => b.dim === 1)).toEqual([
+      { dim: 1, birth: 1, death: 2, birthSimplex: [2, 3], deathSimplex: [0, 2, 3] },
+      { dim: 1, birth: 1, death: 2, birthSimplex: [6, 7], deathSimplex: [4, 6, 7] },
+      { dim: 1, birth: 1, death: 2, birthSimplex: [10, 11], deathSimplex: [8, 10, 11] },
+    ]);
+    const h0 = barcode.bars.filter((b) => b.dim === 0);
+    expect(h0.map((b) => [b.birthSimplex[0], b.death])).toEqual([
+      [1, 1],
+      [2, 1],
+      [3, 1],
+      [5, 1],
+      [6, 1],
+      [7, 1],
+      [9, 1],
+      [10, 1],
+      [11, 1],
+      [0, null],
+      [4, null],
+      [8, null],
+    ]);
+    expect(barcode.bars.slice(0, 12)).toEqual(h0);
+  });
+
+  it("picks the dense edge-value matrix only for graphs with ≥ 5 % of all edges, within an eighth of the budget", () => {
+    // The documented rule of chooseLayout; both layouts give the same bars.
+    const cycle = (n: number, extra: number): [number, number, number][] => {
+      const edges: [number, number, number][] = [];
+      for (let v = 0; v < n; v++) edges.push([v, (v + 1) % n, v + 1]);
+      for (let k = 0; k < extra; k++) edges.push([0, 2 + k, n + 1 + k]);
+      return edges;
+    };
+    // 41 vertices: 41 of the 820 pairs are edges of the cycle, exactly 5 %; 40 edges of a path are fewer.
+    const atFivePercent = graph(41, cycle(41, 0));
+    const path = graph(41, cycle(41, 0).slice(0, 40));
+    const representation = (g: ReturnType<typeof graph>, maxBytes?: number) =>
+      computeBarcode(g, { semantics: "distance", maxDim: 1, budget: maxBytes ? { maxBytes } : undefined })
+        .stats.representation;
+    expect(representation(atFivePercent)).toBe("clique-dense");
+    expect(representation(path)).toBe("clique-sparse");
+    // 80 vertices, a cycle and the chords {v, v+2}: 160 of 3,160 pairs. The 80 × 80 matrix of doubles takes
+    // 51,200 bytes: dense from a budget of 8 × 51,200 bytes on.
+    const chorded = graph(
+      80,
+      cycle(80, 0).concat(
+        Array.from({ length: 80 }, (_, v) => [v, (v + 2) % 80, 100 + v] as [number, number, number]),
+      ),
+    );
+    expect(representation(chorded, 8 * 80 * 80 * 8)).toBe("clique-dense");
+    expect(representation(chorded, 8 * 80 * 80 * 8 - 1)).toBe("clique-sparse");
+    // An explicit choice is kept, whatever the rule says.
+    expect(
+      computeBarcode(path, { semantics: "distance", maxDim: 1, cliqueLayout: "dense" }).stats.representation,
+    ).toBe("clique-dense");
+    const dense = computeBarcode(atFivePercent, { semantics: "distance", maxDim: 1, cliqueLayout: "dense" });
+    const sparse = computeBarcode(atFivePercent, {
+      semantics: "distance",
+      maxDim: 1,
+      cliqueLayout: "sparse",
+    });
+    expect(sparse.stats.representation).toBe("clique-sparse");
+    expect(sparse.bars).toEqual(dense.bars);
+    // The cycle's one loop, born with its last edge (value 41), never filled.
+    expect(dense.bars.filter((b) => b.dim === 1).map((b) => [b.birth, b.death])).toEqual([[41, null]]);
+  });
+});

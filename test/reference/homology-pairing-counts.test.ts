@@ -46,6 +46,8 @@ function checkPairingLaws(barcode: Barcode, reference: Reference): void {
       stats.apparentPairs[d] + stats.emergentPairs[d] + stats.columnsReduced[d],
       `bars of dimension ${d}`,
     ).toBe(barsOf(d).length);
+    // Additions are counted, never taken away.
+    expect(stats.columnAdditions[d]).toBeGreaterThanOrEqual(0);
   }
 }
 
@@ -101,7 +103,7 @@ suite(`the barcode's column counters follow the birth-or-death law${skipNote}`, 
 
   it("the samples reach every kind of column", () => {
     // Without this, the laws above could hold trivially (e.g. with no apparent pair at all).
-    const seen = { cleared: 0, apparent: 0, emergent: 0, reduced: 0, zeroLength: 0 };
+    const seen = { cleared: 0, apparent: 0, emergent: 0, reduced: 0, additions: 0, zeroLength: 0 };
     for (const { n, p, seed, directed, maxDim } of cases) {
       const { graph } = fetchCase(n, p, seed, directed);
       const { stats, bars } = computeBarcode(graph, { semantics: "distance", maxDim, keepZeroLength: true });
@@ -110,6 +112,7 @@ suite(`the barcode's column counters follow the birth-or-death law${skipNote}`, 
         seen.apparent += stats.apparentPairs[d];
         seen.emergent += stats.emergentPairs[d];
         seen.reduced += stats.columnsReduced[d];
+        seen.additions += stats.columnAdditions[d];
       }
       seen.zeroLength += bars.filter((b) => b.dim > 0 && b.birth === b.death).length;
     }
@@ -117,6 +120,7 @@ suite(`the barcode's column counters follow the birth-or-death law${skipNote}`, 
     expect(seen.apparent).toBeGreaterThan(0);
     expect(seen.emergent).toBeGreaterThan(0);
     expect(seen.reduced).toBeGreaterThan(0);
+    expect(seen.additions).toBeGreaterThan(0);
     expect(seen.zeroLength).toBeGreaterThan(0);
   });
 });

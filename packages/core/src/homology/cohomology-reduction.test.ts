@@ -1,0 +1,111 @@
+import { afterEach, describe, expect, it, vi } from "vitest";
+import { edgeFiltration } from "../filtration/edge-filtration.js";
+import { fromEdgeList } from "../graph/from-edge-list.js";
+import type { WeightedGraph } from "../graph/weighted-graph.js";
+import type { WorkProgress } from "../work/work-control.js";
+import { WorkMonitor } from "../work/work-monitor.js";
+import { CliqueCoboundaries } from "./clique-coboundaries.js";
+import { reduceDimension } from "./cohomology-reduction.js";
+import { computeBarcode } from "./compute-barcode.js";
+import { ByteLedger } from "./homology-budget.js";
+import { primeField } from "./prime-field.js";
+import { SimplexQuota } from "./simplex-quota.js";
+import { type PairSink, unionFindPairs } from "./union-find-pairs.js";
+
+/** K_n with distinct seeded weights (a small linear congruential generator). */
+function completeGraph(n: number, seed: number): WeightedGraph {
+  let state = seed;
+  const sources: number[] = [];
+  const targets: number[] = [];
+  const weights: number[] = [];
+  for (let u = 0; u < n; u++) {
+    for (let v = u + 1; v < n; v++) {
+      state = (Math.imul(state, 1103515245) + 12345) >>> 0;
+      sources.push(u);
+      targets.push(v);
+      weights.push(1 + state / 2 ** 32);
+    }
+  }
+  return fromEdgeList({ n, sources, targets, weights, directed: false });
+}
+
+/** A ledger that also notes what each reservation was for. */
+class NotingLedger extends ByteLedger {
+  stages: string[] = [];
+  override reserve(bytes: number, stage: string): void {
+    this.stages.push(stage);
+    super.reserve(bytes, stage);
+  }
+}
+
+const quietSink: PairSink = { pair() {}, essential() {} };
+
+describe("reduceDimension's memory", () => {
+  it("gives back every byte it reserved but the pivot map it returns, and names each stage", () => {
+    // The budget error names the stage that ran out (HomologyBudgetError.stage); a reservation that is not
+    // given back would make later dimensions, and the reported peak, pay for it.
+    const graph = completeGraph(12, 5);
+    const ledger = new NotingLedger(undefined);
+    const monitor = new WorkMonitor(undefined);
+    const model = new CliqueCoboundaries(
+      graph,
+      edgeFiltration(graph, "distance"),
+      4,
+      "dense",
+      ledger,
+      monitor,
+      new SimplexQuota(undefined, 3),
+    );
+    let cleared = unionFindPairs(model, 0, ledger, quietSink, monitor);
+    for (const dim of [1, 2]) {
+      model.listSimplices(dim); // kept by the model, not by the reduction
+      const before = ledger.held;
+      ledger.stages = [];
+      const reduce = () =>
+        reduceDimension(model, dim, cleared, primeField(3), ledger, quietSink, false, monitor);
+      const first = reduce();
+      expect(first.counters.reduced).toBeGreaterThan(0);
+      expect(ledger.stages).toContain(`choosing the ${dim}-simplex columns`);
+      expect(ledger.stages).toContain(`recording the pivots of dimension ${dim}`);
+      expect(ledger.stages).toContain(`sorting the ${dim}-simplex values`);
+      expect(ledger.held).toBeGreaterThan(before); // the pivot map
+      first.pivots.dispose();
+      expect(ledger.held, `bytes held after dimension ${dim}, its pivot map given back`).toBe(before);
+      // Again, keeping the pivots this time: they clear the next dimension.
+      const again = reduce();
+      cleared.dispose();
+      cleared = again.pivots;
+    }
+  });
+});
+
+describe("reduceDimension's progress", () => {
+  afterEach(() => {
+    vi.restoreAllMocks();
+  });
+
+  it("reports columns done between 0 and the column count, never going back", () => {
+    // A clock that moves 1.1 s per reading, so that every check reports (the default interval is 1 s).
+    let clock = 0;
+    vi.spyOn(Date, "now").mockImplementation(() => {
+      clock += 1100;
+      return clock;
+    });
+    const seen: WorkProgress[] = [];
+    // K_31: 465 edge columns and 4,495 triangle columns (C(31, 3)), more than one 4,096-column stride.
+    computeBarcode(completeGraph(31, 9), {
+      semantics: "distance",
+      maxDim: 2,
+      onProgress: (p) => seen.push(p),
+    });
+    for (const dim of [1, 2]) {
+      const reports = seen.filter((p) => p.stage === "reducing columns" && p.dim === dim);
+      expect(reports.length).toBeGreaterThan(2);
+      expect(reports[0].total).toBe(dim === 1 ? 465 : 4495);
+      for (let i = 0; i < reports.length; i++) {
+        expect(reports[i].done).toBeGreaterThanOrEqual(i === 0 ? 0 : reports[i - 1].done);
+        expect(reports[i].done).toBeLessThanOrEqual(reports[i].total);
+      }
+    }
+  });
+});

@@ -1,0 +1,128 @@
+/**
+ * Apparent pairs of zero persistence, found by brute force from their definition and compared with the
+ * barcode's `apparentPairs` counter and its zero-length bars.
+ *
+ * Definition (U. Bauer, J. Appl. Comput. Topology 5, 2021, the section on apparent pairs; recalled from
+ * memory): in a filtration with a total order on simplices, (σ, τ) is an apparent pair when τ is the
+ * earliest coface of σ and σ is the latest facet of τ; every apparent pair is a persistence pair of the
+ * filtration. Here only pairs with f(σ) = f(τ) count (zero persistence), as `BarcodeStats.apparentPairs`
+ * documents. The total order is the one `computeBarcode` documents: value, then dimension, then the
+ * combinatorial number system index Σ C(v_i, i + 1) of the ascending vertices (D. E. Knuth, The Art of
+ * Computer Programming, vol. 4A, 2011, §7.2.1.3).
+ *
+ * A simplex that opens an apparent pair is positive, so it is never a cleared column: the counter is the
+ * number of apparent pairs, whatever else the reduction skips. The cliques are listed here by brute force
+ * over vertex subsets, independently of the code under test.
+ */
+import { computeBarcode, fromEdgeList } from "@cliquescape/core";
+import { describe, expect, it } from "vitest";
+import { binomial } from "../support/combinatorics.js";
+import { seededRandom } from "../support/random.js";
+
+interface Simplex {
+  vertices: number[];
+  f: number;
+  key: number;
+}
+
+/** Every clique of 2 … maxSize vertices of the graph given by its weight matrix (Infinity: no edge). */
+function cliques(n: number, w: number[][], maxSize: number): Simplex[][] {
+  const bySize: Simplex[][] = Array.from({ length: maxSize + 1 }, () => []);
+  const extend = (vertices: number[], f: number) => {
+    if (vertices.length >= 2) {
+      const key = vertices.reduce((sum, v, i) => sum + binomial(v, i + 1), 0);
+      bySize[vertices.length].push({ vertices, f, key });
+    }
+    if (vertices.length === maxSize) return;
+    for (let v = (vertices.at(-1) ?? -1) + 1; v < n; v++) {
+      let g = f;
+      let clique = true;
+      for (const u of vertices) {
+        if (w[u][v] === Infinity) clique = false;
+        else g = Math.max(g, w[u][v]);
+      }
+      if (clique) extend([...vertices, v], g);
+    }
+  };
+  extend([], Number.NEGATIVE_INFINITY);
+  return bySize;
+}
+
+const before = (a: Simplex, b: Simplex) => a.f < b.f || (a.f === b.f && a.key < b.key);
+const isFace = (small: number[], big: number[]) => small.every((v) => big.includes(v));
+
+/** The zero-persistence apparent pairs (σ, τ) with σ of dimension d, for d = 1 … maxDim. */
+function apparentPairs(bySize: Simplex[][], maxDim: number): Map<number, [Simplex, Simplex][]> {
+  const pairs = new Map<number, [Simplex, Simplex][]>();
+  for (let d = 1; d <= maxDim; d++) {
+    const found: [Simplex, Simplex][] = [];
+    for (const sigma of bySize[d + 1]) {
+      const cofaces = bySize[d + 2].filter((t) => isFace(sigma.vertices, t.vertices));
+      if (cofaces.length === 0) continue;
+      const tau = cofaces.reduce((a, b) => (before(b, a) ? b : a));
+      if (tau.f !== sigma.f) continue;
+      const facets = bySize[d + 1].filter((s) => isFace(s.vertices, tau.vertices));
+      const latest = facets.reduce((a, b) => (before(a, b) ? b : a));
+      if (latest === sigma) found.push([sigma, tau]);
+    }
+    pairs.set(d, found);
+  }
+  return pairs;
+}
+
+describe("apparent pairs against their definition, by brute force", () => {
+  for (const seed of [701, 702, 703, 704]) {
+    it(`G(11, 0.75) with weights in 1..4, seed ${seed}: counter and zero-length bars, both layouts`, () => {
+      const random = seededRandom(seed);
+      const n = 11;
+      const maxDim = 2;
+      const w: number[][] = Array.from({ length: n }, () => new Array<number>(n).fill(Infinity));
+      const edges = {
+        n,
+        directed: false,
+        sources: [] as number[],
+        targets: [] as number[],
+        weights: [] as number[],
+      };
+      for (let u = 0; u < n; u++) {
+        for (let v = u + 1; v < n; v++) {
+          if (random() >= 0.75) continue;
+          const weight = 1 + Math.floor(random() * 4);
+          w[u][v] = weight;
+          w[v][u] = weight;
+          edges.sources.push(u);
+          edges.targets.push(v);
+          edges.weights.push(weight);
+        }
+      }
+      const expected = apparentPairs(cliques(n, w, maxDim + 2), maxDim);
+      let total = 0;
+      for (const cliqueLayout of ["dense", "sparse"] as const) {
+        const barcode = computeBarcode(fromEdgeList(edges), {
+          semantics: "distance",
+          maxDim,
+          keepZeroLength: true,
+          cliqueLayout,
+        });
+        for (let d = 1; d <= maxDim; d++) {
+          const pairs = expected.get(d) ?? [];
+          expect(barcode.stats.apparentPairs[d], `apparent pairs of dimension ${d}, ${cliqueLayout}`).toBe(
+            pairs.length,
+          );
+          // Each one is a zero-length bar from σ to τ.
+          const bars = new Set(
+            barcode.bars
+              .filter((b) => b.dim === d && b.birth === b.death)
+              .map((b) => `${b.birthSimplex} ${b.deathSimplex}`),
+          );
+          for (const [sigma, tau] of pairs) expect(bars).toContain(`${sigma.vertices} ${tau.vertices}`);
+          total += pairs.length;
+        }
+      }
+      // The sample has apparent pairs in both dimensions to find.
+      expect(expected.get(1)?.length).toBeGreaterThan(0);
+      expect(expected.get(2)?.length).toBeGreaterThan(0);
+      expect(total).toBeGreaterThan(0);
+    });
+  }
+});

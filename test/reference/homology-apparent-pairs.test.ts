@@ -70,9 +70,74 @@ function apparentPairs(bySize: Simplex[][], maxDim: number): Map<number, [Simple
   return pairs;
 }
 
-describe("apparent pairs against their definition, by brute force", () => {
+/**
+ * Persistence pairs by the standard algorithm over Z/2 (H. Edelsbrunner and J. Harer, Computational
+ * Topology, 2010, §VII.1): boundary columns in filtration order, each reduced by adding earlier columns
+ * with the same lowest entry. Returns the partner of each simplex, as "size:key" → simplex.
+ */
+function persistencePartners(bySize: Simplex[][], n: number): Map<string, Simplex> {
+  const all: { s: Simplex; dim: number }[] = [];
+  for (let v = 0; v < n; v++) all.push({ s: { vertices: [v], f: 0, key: v }, dim: 0 });
+  for (let size = 2; size < bySize.length; size++)
+    for (const s of bySize[size]) all.push({ s, dim: size - 1 });
+  all.sort((a, b) => a.s.f - b.s.f || a.dim - b.dim || a.s.key - b.s.key);
+  const index = new Map(all.map((x, i) => [`${x.s.vertices}`, i]));
+  const columns = all.map((x) =>
+    x.dim === 0
+      ? new Set<number>()
+      : new Set(x.s.vertices.map((_, i) => index.get(`${x.s.vertices.filter((_, j) => j !== i)}`) as number)),
+  );
+  const low = (c: Set<number>) => (c.size === 0 ? -1 : Math.max(...c));
+  const owner = new Map<number, number>();
+  const partners = new Map<string, Simplex>();
+  columns.forEach((column, j) => {
+    for (let l = low(column); l >= 0 && owner.has(l); l = low(column)) {
+      for (const r of columns[owner.get(l) as number]) {
+        if (column.has(r)) column.delete(r);
+        else column.add(r);
+      }
+    }
+    const l = low(column);
+    if (l < 0) return;
+    owner.set(l, j);
+    partners.set(`${all[l].s.vertices}`, all[j].s);
+    partners.set(`${all[j].s.vertices}`, all[l].s);
+  });
+  return partners;
+}
+
+/**
+ * Emergent pairs (U. Bauer, 2021, as above; recalled from memory): a positive σ, not in an apparent pair,
+ * whose partner is its earliest coface, entering with it. The reduction pairs those without building
+ * their columns, and counts them.
+ */
+function emergentPairs(
+  bySize: Simplex[][],
+  n: number,
+  maxDim: number,
+  apparent: Map<number, [Simplex, Simplex][]>,
+) {
+  const partners = persistencePartners(bySize, n);
+  const counts = new Map<number, number>();
+  for (let d = 1; d <= maxDim; d++) {
+    const inApparent = new Set((apparent.get(d) ?? []).map(([sigma]) => sigma));
+    let count = 0;
+    for (const sigma of bySize[d + 1]) {
+      if (inApparent.has(sigma)) continue;
+      const partner = partners.get(`${sigma.vertices}`);
+      if (partner === undefined || partner.vertices.length !== d + 2) continue; // essential or negative
+      const cofaces = bySize[d + 2].filter((t) => isFace(sigma.vertices, t.vertices));
+      const earliest = cofaces.reduce((a, b) => (before(b, a) ? b : a));
+      if (earliest === partner && partner.f === sigma.f) count++;
+    }
+    counts.set(d, count);
+  }
+  return counts;
+}
+
+describe("apparent and emergent pairs against their definitions, by brute force", () => {
   for (const seed of [701, 702, 703, 704]) {
-    it(`G(11, 0.75) with weights in 1..4, seed ${seed}: counter and zero-length bars, both layouts`, () => {
+    it(`G(11, 0.75) with weights in 1..4, seed ${seed}: counters and zero-length bars, both layouts`, () => {
       const random = seededRandom(seed);
       const n = 11;
       const maxDim = 2;
@@ -95,7 +160,9 @@ describe("apparent pairs against their definition, by brute force", () => {
           edges.weights.push(weight);
         }
       }
-      const expected = apparentPairs(cliques(n, w, maxDim + 2), maxDim);
+      const bySize = cliques(n, w, maxDim + 2);
+      const expected = apparentPairs(bySize, maxDim);
+      const emergent = emergentPairs(bySize, n, maxDim, expected);
       let total = 0;
       for (const cliqueLayout of ["dense", "sparse"] as const) {
         const barcode = computeBarcode(fromEdgeList(edges), {
@@ -109,7 +176,10 @@ describe("apparent pairs against their definition, by brute force", () => {
           expect(barcode.stats.apparentPairs[d], `apparent pairs of dimension ${d}, ${cliqueLayout}`).toBe(
             pairs.length,
           );
-          // Each one is a zero-length bar from σ to τ.
+          expect(barcode.stats.emergentPairs[d], `emergent pairs of dimension ${d}, ${cliqueLayout}`).toBe(
+            emergent.get(d),
+          );
+          // Each apparent pair is a zero-length bar from σ to τ.
           const bars = new Set(
             barcode.bars
               .filter((b) => b.dim === d && b.birth === b.death)
@@ -123,6 +193,7 @@ describe("apparent pairs against their definition, by brute force", () => {
       expect(expected.get(1)?.length).toBeGreaterThan(0);
       expect(expected.get(2)?.length).toBeGreaterThan(0);
       expect(total).toBeGreaterThan(0);
+      expect(emergent.get(2)).toBeGreaterThan(0);
     });
   }
 });

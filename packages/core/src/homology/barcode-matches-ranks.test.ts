@@ -1,5 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { seededRandom } from "../../../../test/support/random.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
 import { bettiAt } from "./betti-at.js";
@@ -121,4 +122,36 @@ describe("barcode against direct ranks on larger complete graphs", () => {
       }
     });
   }
+});
+
+describe("a long filtration, where columns keep sorted entries and the coface horizon widens", () => {
+  // G(26, 0.7) with integer distances 1–1000 (seeded): long enough for dimension-2 columns to keep their
+  // reduced entries and be read back while the horizon widens — paths that no other test here reaches and
+  // where a mutation run found wrong Betti numbers unnoticed (a stored column replayed before it was read:
+  // β2 wrong between 770 and 796). The reference is the direct rank computation, as above.
+  it("Betti numbers at each level between 740 and 820 equal the ranks' (Z/2)", () => {
+    const n = 26;
+    const random = seededRandom(800);
+    const sources: number[] = [];
+    const targets: number[] = [];
+    const weights: number[] = [];
+    for (let u = 0; u < n; u++) {
+      for (let v = u + 1; v < n; v++) {
+        if (random() >= 0.7) continue;
+        sources.push(u);
+        targets.push(v);
+        weights.push(1 + Math.floor(random() * 1000));
+      }
+    }
+    const graph = fromEdgeList({ n, sources, targets, weights, directed: false });
+    const barcode = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2 });
+    expect(barcode.stats.storedColumns[2]).toBeGreaterThan(0);
+    const levels = [...new Set(weights)].filter((w) => w >= 740 && w <= 820).sort((a, b) => a - b);
+    expect(levels.length).toBeGreaterThan(5);
+    for (const threshold of levels) {
+      expect(bettiFromBarcode(barcode, threshold), `Betti numbers at ${threshold}`).toEqual(
+        bettiAt(graph, { threshold, semantics: "distance", maxDim: 2, prime: 2 }),
+      );
+    }
+  });
 });

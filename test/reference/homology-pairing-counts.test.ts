@@ -35,6 +35,18 @@ function checkPairingLaws(barcode: Barcode, reference: Reference): void {
   // Every vertex is born once; networkx's count of 0-simplices is the vertex count.
   expect(stats.simplices[0]).toBe(reference.all[0]);
   expect(barsOf(0).length).toBe(reference.all[0]);
+  // Index 0 is union–find's: it reduces no columns, so every column counter starts at 0 there.
+  for (const counter of [
+    stats.clearedColumns,
+    stats.apparentPairs,
+    stats.emergentPairs,
+    stats.columnsReduced,
+    stats.columnAdditions,
+    stats.storedColumns,
+  ]) {
+    expect(counter).toHaveLength(maxDim + 1);
+    expect(counter[0]).toBe(0);
+  }
   for (let d = 1; d <= maxDim; d++) {
     const kinds =
       stats.clearedColumns[d] + stats.apparentPairs[d] + stats.emergentPairs[d] + stats.columnsReduced[d];

@@ -238,6 +238,29 @@ describe("computeBarcode options and order", () => {
     expect(barcode.bars.slice(0, 12)).toEqual(h0);
   });
 
+  it("orders tied bars whose birth simplices share their first vertex by the next one", () => {
+    // Two squares 2-5-0-3 and 2-6-1-4 that share only vertex 2, sides at 1, diagonals {0,2} and {1,2} at 2:
+    // two loops born at 1 and killed at 2, closed by the sides {2,5} and {2,6} (each square's last side in
+    // the combinatorial order), so only the second vertex orders them. Worked by hand.
+    const shared = graph(7, [
+      [2, 5, 1],
+      [0, 5, 1],
+      [0, 3, 1],
+      [2, 3, 1],
+      [2, 6, 1],
+      [1, 6, 1],
+      [1, 4, 1],
+      [2, 4, 1],
+      [0, 2, 2],
+      [1, 2, 2],
+    ]);
+    const barcode = computeBarcode(shared, { semantics: "distance", maxDim: 1 });
+    expect(barcode.bars.filter((b) => b.dim === 1)).toEqual([
+      { dim: 1, birth: 1, death: 2, birthSimplex: [2, 5], deathSimplex: [0, 2, 5] },
+      { dim: 1, birth: 1, death: 2, birthSimplex: [2, 6], deathSimplex: [1, 2, 6] },
+    ]);
+  });
+
   it("picks the dense edge-value matrix only for graphs with ≥ 5 % of all edges, within an eighth of the budget", () => {
     // The documented rule of chooseLayout; both layouts give the same bars.
     const cycle = (n: number, extra: number): [number, number, number][] => {

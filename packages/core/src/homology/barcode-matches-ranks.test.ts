@@ -129,6 +129,40 @@ describe("a long filtration, where columns keep sorted entries and the coface ho
   // reduced entries and be read back while the horizon widens — paths that no other test here reaches and
   // where a mutation run found wrong Betti numbers unnoticed (a stored column replayed before it was read:
   // β2 wrong between 770 and 796). The reference is the direct rank computation, as above.
+  it("and with similarity weights, where a widened horizon must replay the stored columns read so far (Z/2)", () => {
+    // G(34, 0.8), integer similarities 1–1000 (seeded): a column that had read a stored column to its end
+    // must push that column's next band when the horizon widens; skipping it gave wrong β2 between 306 and
+    // 442 (found by replaying mutants on random graphs). Four levels of that range, against direct ranks.
+    const n = 34;
+    const random = seededRandom(804);
+    const sources: number[] = [];
+    const targets: number[] = [];
+    const weights: number[] = [];
+    for (let u = 0; u < n; u++) {
+      for (let v = u + 1; v < n; v++) {
+        if (random() >= 0.8) continue;
+        sources.push(u);
+        targets.push(v);
+        weights.push(1 + Math.floor(random() * 1000));
+      }
+    }
+    const graph = fromEdgeList({ n, sources, targets, weights, directed: false });
+    const barcode = computeBarcode(graph, {
+      semantics: "similarity",
+      maxDim: 2,
+      prime: 2,
+      timeLimitMs: 20_000,
+    });
+    expect(barcode.stats.storedColumns[2]).toBeGreaterThan(0);
+    const inRange = [...new Set(weights)].filter((w) => w >= 306 && w <= 442).sort((a, b) => a - b);
+    const levels = [0, 1, 2, 3].map((k) => inRange[Math.floor((k * (inRange.length - 1)) / 3)]);
+    for (const threshold of levels) {
+      expect(bettiFromBarcode(barcode, threshold), `Betti numbers at ${threshold}`).toEqual(
+        bettiAt(graph, { threshold, semantics: "similarity", maxDim: 2, prime: 2 }),
+      );
+    }
+  });
+
   it("Betti numbers at each level between 740 and 820 equal the ranks' (Z/2, Z/3)", () => {
     const n = 26;
     const random = seededRandom(800);

@@ -294,6 +294,87 @@ describe("limits", () => {
     // budget 0 is allowed (non-negative): K6 then stops on the budget, it is not refused as a bad limit
     expect(() => countSimplices(k6, { budget: 0 })).toThrow(SimplexBudgetError);
     expect(() => countSimplices(k6, { threshold: 1 })).toThrow(TypeError);
+    expect(() => countSimplices(k6, { threshold: 1 })).toThrow(
+      "a threshold needs semantics: 'distance' or 'similarity'",
+    );
+  });
+
+  it("refuses a NaN threshold (it would keep no edge and look like a valid, empty answer)", () => {
+    for (const semantics of ["distance", "similarity"] as const) {
+      expect(() => countSimplices(k6, { threshold: Number.NaN, semantics })).toThrow(RangeError);
+      expect(() => countSimplices(k6, { threshold: Number.NaN, semantics })).toThrow("the threshold is NaN");
+    }
+  });
+
+  it("the budget message of a real count, worked by hand on three disjoint triangles", () => {
+    // 9 vertices and 9 edges are counted up front (18); in the degeneracy numbering one root per triangle
+    // has two later neighbours (the only roots with work for the plain kernels) and adds one triangle.
+    const triangles = graph(9, [
+      [0, 1],
+      [1, 2],
+      [0, 2],
+      [3, 4],
+      [4, 5],
+      [3, 5],
+      [6, 7],
+      [7, 8],
+      [6, 8],
+    ]);
+    const messageOf = (options: Parameters<typeof countSimplices>[1]) => {
+      try {
+        countSimplices(triangles, options);
+      } catch (e) {
+        expect(e).toBeInstanceOf(SimplexBudgetError);
+        return (e as SimplexBudgetError).message;
+      }
+      throw new Error("the budget was not passed");
+    };
+    const tail = "Raise the budget, lower maxDim, or use a sparser threshold.";
+    for (const kernel of ["typescript", "webassembly"] as const) {
+      // budget 17: passed by the 18 counted up front, before any root
+      expect(messageOf({ budget: 17, kernel }), kernel).toBe(
+        `simplex budget of 17 exceeded after 18 simplices with 0.0% of root vertices done; counted so far dim 0: 9, dim 1: 9. ${tail}`,
+      );
+      // budget 19: the second triangle makes 20; two of three roots done; 18 + 2 / (2/3) = 21 in all
+      expect(messageOf({ budget: 19, kernel }), kernel).toBe(
+        "simplex budget of 19 exceeded after 20 simplices with 66.7% of root vertices done " +
+          `(a rough extrapolation: 2.10e+1 in all); counted so far dim 0: 9, dim 1: 9, dim 2: 2. ${tail}`,
+      );
+    }
+    // With participation only the 9 vertices are counted up front; roots with work are those with a later
+    // neighbour (two per triangle), each adding its edges and triangle: 12, 13, 16, 17, then 20 when the
+    // third triangle's first root ends. 5 of 6 roots done; 9 + (20 − 9) / (5/6) = 22.2 in all.
+    expect(messageOf({ budget: 19, participation: true })).toBe(
+      "simplex budget of 19 exceeded after 20 simplices with 83.3% of root vertices done " +
+        `(a rough extrapolation: 2.22e+1 in all); counted so far dim 0: 9, dim 1: 8, dim 2: 3. ${tail}`,
+    );
+  });
+});
+
+describe("participation tables only when asked for", () => {
+  const t = graph(3, [
+    [0, 1],
+    [1, 2],
+    [0, 2],
+  ]);
+  it("plain counts have neither field; each option adds its own field and not the other", () => {
+    expect(Object.keys(countSimplices(t)).sort()).toEqual(["counts", "euler", "truncated"]);
+    const nodes = countSimplices(t, { participation: true });
+    expect(Object.keys(nodes).sort()).toEqual(["counts", "euler", "participation", "truncated"]);
+    // a triangle: every vertex is in itself, two edges and the triangle
+    expect(nodes.participation!.member.map(list)).toEqual([
+      [1, 1, 1],
+      [2, 2, 2],
+      [1, 1, 1],
+    ]);
+    const edges = countSimplices(t, { edgeParticipation: true });
+    expect(Object.keys(edges).sort()).toEqual(["counts", "edgeParticipation", "euler", "truncated"]);
+    // both slots of each edge: in the edge itself and in the triangle
+    expect(edges.edgeParticipation!.map(list)).toEqual([
+      [0, 0, 0, 0, 0, 0],
+      [1, 1, 1, 1, 1, 1],
+      [1, 1, 1, 1, 1, 1],
+    ]);
   });
 });
 

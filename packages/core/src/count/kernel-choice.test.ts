@@ -1,4 +1,7 @@
 /**
+ * Which kernel counts (countSimplices, sweepSimplexCounts): results are the same either way, so only the
+ * calls into the WebAssembly kernel show the choice.
+ *
  * Which way the sweep counts (sweep-simplex-counts.ts, perThresholdPays): one plain WebAssembly count per
  * threshold when the top level of a graph of that density outnumbers the level below by more than T / 2,
  * else one annotated enumeration for all thresholds. Both give the same counts (count-simplices.test.ts,
@@ -10,6 +13,7 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { explicitGrid } from "../filtration/threshold-grid.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
+import { countSimplices } from "./count-simplices.js";
 import { sweepSimplexCounts } from "./sweep-simplex-counts.js";
 import { countWithWasm } from "./wasm/wasm-counter.js";
 
@@ -89,6 +93,28 @@ describe("the sweep's choice between per-threshold counts and one enumeration", 
       [4, 3],
       [4, 3],
       [4, 3],
+    ]);
+  });
+});
+
+describe("countSimplices honours the kernel asked for", () => {
+  it('"typescript" never calls the WebAssembly kernel; "auto" and "webassembly" do, with the same counts', () => {
+    const k11 = graphOf(11, 55);
+    const counts: number[][] = [];
+    for (const [kernel, calls] of [
+      ["typescript", 0],
+      ["auto", 1],
+      ["webassembly", 1],
+    ] as const) {
+      vi.mocked(countWithWasm).mockClear();
+      counts.push(Array.from(countSimplices(k11, { maxDim: 2, kernel }).counts));
+      expect(vi.mocked(countWithWasm).mock.calls.length, kernel).toBe(calls);
+    }
+    // K11: C(11, 1), C(11, 2), C(11, 3) (common practice)
+    expect(counts).toEqual([
+      [11, 55, 165],
+      [11, 55, 165],
+      [11, 55, 165],
     ]);
   });
 });

@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 import { fromEdgeList } from "../../graph/from-edge-list.js";
 import { countSimplices } from "../count-simplices.js";
 import { SimplexBudgetError } from "../simplex-budget-error.js";
-import { countKernel } from "./count-kernel.js";
+import { countKernel, discardKernel } from "./count-kernel.js";
 
 /** Complete graph K_n, undirected, or directed with every arc both ways. */
 function complete(n: number, directed = false) {
@@ -90,6 +90,61 @@ describe("the WebAssembly counting kernel", () => {
     expect(() => freshSweep.sweepSimplexCounts(g, grid, { maxDim: 3, kernel: "webassembly" })).toThrow(
       /WebAssembly counting kernel is not available/,
     );
+  });
+
+  it("counts only vertices at maxDim 0 and vertices and edges at maxDim 1, flagging the rest as cut off", () => {
+    // K6: 6 vertices, 15 edges, 20 triangles (C(6, k+1), common practice)
+    const k6 = complete(6);
+    const dim0 = countSimplices(k6, { maxDim: 0, kernel: "webassembly" });
+    expect(Array.from(dim0.counts)).toEqual([6]);
+    expect(dim0.truncated).toBe(true);
+    const dim1 = countSimplices(k6, { maxDim: 1, kernel: "webassembly" });
+    expect(Array.from(dim1.counts)).toEqual([6, 15]);
+    expect(dim1.truncated).toBe(true);
+    expect(countSimplices(complete(2), { maxDim: 1, kernel: "webassembly" }).truncated).toBe(false);
+  });
+
+  it("a budget equal to the number of simplices is enough; one less is not", () => {
+    // K5: 5 + 10 + 10 + 5 + 1 = 31 simplices
+    const k5 = complete(5);
+    expect(Array.from(countSimplices(k5, { budget: 31, kernel: "webassembly" }).counts)).toEqual([
+      5, 10, 10, 5, 1,
+    ]);
+    expect(() => countSimplices(k5, { budget: 30, kernel: "webassembly" })).toThrow(SimplexBudgetError);
+    // to maxDim 1 the 5 vertices and 10 edges, all counted up front, are checked before any root
+    for (const kernel of ["webassembly", "typescript"] as const) {
+      expect(Array.from(countSimplices(k5, { maxDim: 1, budget: 15, kernel }).counts), kernel).toEqual([
+        5, 10,
+      ]);
+      expect(() => countSimplices(k5, { maxDim: 1, budget: 14, kernel }), kernel).toThrow(SimplexBudgetError);
+    }
+  });
+
+  it("when the kernel's memory cannot grow, auto counts in TypeScript and webassembly says why it cannot", () => {
+    // a fresh instance has less memory than K_130's tables need; make growing fail as it does when the
+    // runtime refuses another few hundred MiB (a failed count drops the instance, so stub each fresh one)
+    const refuseToGrow = () => {
+      discardKernel();
+      const memory = countKernel()!.memory as { grow(pages: number): number };
+      memory.grow = () => {
+        throw new RangeError("WebAssembly.Memory.grow(): Maximum memory size exceeded");
+      };
+    };
+    try {
+      const g = complete(130);
+      refuseToGrow();
+      expect(Array.from(countSimplices(g, { maxDim: 2 }).counts)).toEqual([
+        130,
+        binomial(130, 2),
+        binomial(130, 3),
+      ]);
+      refuseToGrow();
+      expect(() => countSimplices(g, { maxDim: 2, kernel: "webassembly" })).toThrow(
+        /WebAssembly counting kernel is not available here, or its memory cannot hold/,
+      );
+    } finally {
+      discardKernel();
+    }
   });
 
   it("refuses an unknown kernel name", () => {

@@ -351,6 +351,33 @@ describe("limits", () => {
   });
 });
 
+describe("a budget passed inside the first root's subtree", () => {
+  it("reports no root finished (0.0 %), with vertices and edges counted in full", () => {
+    // K_{2,2,2,2,2} (10 vertices, each joined to all but its partner: 40 edges, 50 simplices up front).
+    // Every root's local universe is a smaller cocktail-party graph, never a clique, so the kernels expand
+    // it and check the budget at the end of every expansion; the first root alone adds 24 triangles
+    // (its 8 later neighbours span C(8, 2) − 4 edges), so a budget of 51 runs out inside its subtree.
+    const cocktail = multipartite(5, 2, "undirected");
+    for (const [kernel, participation] of [
+      ["typescript", false],
+      ["webassembly", false],
+      ["auto", true],
+    ] as const) {
+      let caught: unknown;
+      try {
+        countSimplices(cocktail, { budget: 51, kernel, participation });
+      } catch (e) {
+        caught = e;
+      }
+      expect(caught, kernel).toBeInstanceOf(SimplexBudgetError);
+      const err = caught as SimplexBudgetError;
+      expect(err.progress, kernel).toBe(0);
+      expect(err.message, kernel).toMatch(/with 0\.0% of root vertices done;/);
+      if (!participation) expect(list(err.counted).slice(0, 2), kernel).toEqual([10, 40]);
+    }
+  });
+});
+
 describe("participation tables only when asked for", () => {
   const t = graph(3, [
     [0, 1],

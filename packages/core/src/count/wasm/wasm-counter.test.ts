@@ -147,6 +147,28 @@ describe("the WebAssembly counting kernel", () => {
     }
   });
 
+  it("reports progress in root vertices, from 0 to n, never before the first root", () => {
+    // a report at every check (interval 0): `done` counts roots finished, so 0 ≤ done ≤ n of total n
+    for (const kernel of ["webassembly", "typescript"] as const) {
+      const done: number[] = [];
+      const g = complete(40);
+      countSimplices(g, {
+        maxDim: 3,
+        kernel,
+        progressIntervalMs: 0,
+        onProgress: (p) => {
+          expect(p.total, kernel).toBe(40);
+          done.push(p.done);
+        },
+      });
+      expect(done.length, kernel).toBeGreaterThan(1);
+      for (const d of done) {
+        expect(d, kernel).toBeGreaterThanOrEqual(0);
+        expect(d, kernel).toBeLessThanOrEqual(40);
+      }
+    }
+  });
+
   it("refuses an unknown kernel name", () => {
     // @ts-expect-error: a caller from JavaScript can pass anything
     expect(() => countSimplices(complete(4), { kernel: "wasm" })).toThrow(/kernel must be "auto"/);

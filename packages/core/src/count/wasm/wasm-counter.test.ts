@@ -17,6 +17,19 @@ function complete(n: number, directed = false) {
   return fromEdgeList({ n, directed, sources, targets, weights: sources.map(() => 1) });
 }
 
+/** K_{2,…,2} with `pairs` pairs: every vertex joined to all but its partner (2i, 2i + 1). */
+function cocktailParty(pairs: number) {
+  const sources: number[] = [];
+  const targets: number[] = [];
+  for (let u = 0; u < 2 * pairs; u++)
+    for (let v = u + 1; v < 2 * pairs; v++)
+      if (u >> 1 !== v >> 1) {
+        sources.push(u);
+        targets.push(v);
+      }
+  return fromEdgeList({ n: 2 * pairs, directed: false, sources, targets, weights: sources.map(() => 1) });
+}
+
 /** C(n, k) by the multiplicative formula (exact for the small values here). */
 function binomial(n: number, k: number): number {
   let r = 1;
@@ -111,6 +124,25 @@ describe("the WebAssembly counting kernel", () => {
       5, 10, 10, 5, 1,
     ]);
     expect(() => countSimplices(k5, { budget: 30, kernel: "webassembly" })).toThrow(SimplexBudgetError);
+    // every simplex counts towards the budget, whichever way it was counted (inline pairs and triples,
+    // whole cliques): K5 (31), K8 (2^8 − 1 = 255) and K_{2,2,2,2,2} (3^5 − 1 = 242, no clique shortcut)
+    // pass with a budget of exactly their total and stop with one less (common practice: K_n has
+    // 2^n − 1 nonempty vertex subsets, all cliques; a cocktail party on 5 pairs has 3^5 − 1: each pair
+    // gives none or one of its two vertices)
+    for (const kernel of ["webassembly", "typescript"] as const) {
+      for (const [g, total] of [
+        [complete(5), 31],
+        [complete(8), 255],
+        [cocktailParty(5), 242],
+      ] as const) {
+        const counts = countSimplices(g, { budget: total, kernel }).counts;
+        expect(
+          counts.reduce((a, b) => a + b, 0),
+          kernel,
+        ).toBe(total);
+        expect(() => countSimplices(g, { budget: total - 1, kernel }), kernel).toThrow(SimplexBudgetError);
+      }
+    }
     // to maxDim 1 the 5 vertices and 10 edges, all counted up front, are checked before any root
     for (const kernel of ["webassembly", "typescript"] as const) {
       expect(Array.from(countSimplices(k5, { maxDim: 1, budget: 15, kernel }).counts), kernel).toEqual([

@@ -57,6 +57,8 @@ function checkAgainstNetworkx(spec: GraphSpec, thresholds: number[], semantics: 
   const grid = explicitGrid(thresholds, semantics);
   const { reference, graph } = fetchReference(spec, grid.thresholds, semantics);
   expect(significant(countSimplices(graph).counts)).toEqual(reference.all);
+  // the TypeScript kernel too: "auto" takes WebAssembly wherever the runtime has it
+  expect(significant(countSimplices(graph, { kernel: "typescript" }).counts)).toEqual(reference.all);
 
   const sweep = sweepSimplexCounts(graph, grid);
   expect(Array.from(sweep.thresholds)).toEqual(Array.from(grid.thresholds));

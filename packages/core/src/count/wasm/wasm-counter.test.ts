@@ -112,6 +112,8 @@ describe("the WebAssembly counting kernel", () => {
       const dim0 = countSimplices(k6, { maxDim: 0, kernel });
       expect(Array.from(dim0.counts), kernel).toEqual([6]);
       expect(dim0.truncated, kernel).toBe(true);
+      // at maxDim 0 only the 6 vertices count towards the budget, not the edges left out
+      expect(Array.from(countSimplices(k6, { maxDim: 0, budget: 6, kernel }).counts), kernel).toEqual([6]);
       const dim1 = countSimplices(k6, { maxDim: 1, kernel });
       expect(Array.from(dim1.counts), kernel).toEqual([6, 15]);
       expect(dim1.truncated, kernel).toBe(true);

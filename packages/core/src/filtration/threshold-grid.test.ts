@@ -64,11 +64,12 @@ describe("threshold grids", () => {
   });
 
   it("directed graphs count arcs; the all-edges grid is the weakest edge, 0 without edges", () => {
+    // The heavier arc leaves the first vertex: slot order is not weight order.
     const arcs = fromEdgeList({
       n: 2,
       sources: [0, 1],
       targets: [1, 0],
-      weights: [0.4, 0.7],
+      weights: [0.7, 0.4],
       directed: true,
     });
     expect(Array.from(distinctEdgeFiltration(arcs, "distance"))).toEqual([0.4, 0.7]);

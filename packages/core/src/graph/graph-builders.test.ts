@@ -6,6 +6,7 @@
  */
 import { MultiGraph } from "graphology";
 import { describe, expect, it } from "vitest";
+import { errorOf } from "../../../../test/support/error-of.js";
 import { fromDenseMatrix } from "./from-dense-matrix.js";
 import { fromEdgeList } from "./from-edge-list.js";
 import { fromGraphology } from "./from-graphology.js";
@@ -15,15 +16,7 @@ import { density } from "./weighted-graph.js";
 
 const N = Number.NaN;
 
-function thrown(run: () => unknown): GraphInputError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof GraphInputError) return error;
-    throw error;
-  }
-  throw new Error("expected a GraphInputError");
-}
+const thrown = (run: () => unknown) => errorOf(run, GraphInputError);
 
 function weightOf(graph: ReturnType<typeof fromEdgeList>, u: number, v: number): number | undefined {
   for (let s = graph.offsets[u]; s < graph.offsets[u + 1]; s++)

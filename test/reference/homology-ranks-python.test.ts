@@ -7,7 +7,6 @@
  * over GF(65521); numpy's rank over Q is checked too, as a second opinion that these small complexes have no
  * 65521-torsion (their torsion orders are tiny; common practice), so Z/65521 stands in for Q here.
  */
-import { spawnSync } from "node:child_process";
 import {
   bettiAt,
   bettiFromBarcode,
@@ -16,31 +15,8 @@ import {
   type WeightedGraph,
 } from "@cliquescape/core";
 import { describe, expect, it } from "vitest";
-import { missingPythonModules, PYTHON } from "../support/python.js";
+import { missingPythonModules, runPythonScript } from "../support/python.js";
 import { seededRandom } from "../support/random.js";
-
-const RANKS_PY = `
-import json, sys
-import numpy as np
-from sympy import GF
-from sympy.polys.matrices import DomainMatrix
-jobs = json.load(sys.stdin)
-out = []
-for job in jobs:
-    rows, cols, p = job["rows"], job["cols"], job["p"]
-    if rows == 0 or cols == 0:
-        out.append(0)
-        continue
-    dense = [[0] * cols for _ in range(rows)]
-    for r, c, v in job["entries"]:
-        dense[r][c] += v
-    if p == 0:
-        out.append(int(np.linalg.matrix_rank(np.array(dense, dtype=float))))
-    else:
-        K = GF(p)
-        out.append(int(DomainMatrix([[K(x) for x in row] for row in dense], (rows, cols), K).rank()))
-json.dump(out, sys.stdout)
-`;
 
 interface Job {
   rows: number;
@@ -50,14 +26,7 @@ interface Job {
 }
 
 function ranksInPython(jobs: Job[]): number[] {
-  const run = spawnSync(PYTHON, ["-c", RANKS_PY], {
-    input: JSON.stringify(jobs),
-    encoding: "utf8",
-    maxBuffer: 64 << 20,
-  });
-  if (run.error) throw run.error;
-  if (run.status !== 0) throw new Error(`python failed: ${run.stderr}`);
-  return JSON.parse(run.stdout) as number[];
+  return runPythonScript<number[]>("boundary_ranks.py", jobs);
 }
 
 interface Arcs {

@@ -98,6 +98,13 @@ describe("textRows: quoted records, their edges and their line numbers", () => {
     ]);
   });
 
+  it("a blank line right after a quoted record counts as a line", () => {
+    expect(rows('"a"\n\n1\n', ",")).toEqual([
+      { line: 1, cells: ["a"] },
+      { line: 3, cells: ["1"] },
+    ]);
+  });
+
   it("a CRLF blank line in a TSV file is blank, as with LF", () => {
     expect(rows("1\t2\r\n\r\n3\t4\r\n", "\t")).toEqual([
       { line: 1, cells: ["1", "2"] },

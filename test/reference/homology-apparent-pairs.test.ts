@@ -2,8 +2,8 @@
  * Apparent pairs of zero persistence, found by brute force from their definition and compared with the
  * barcode's `apparentPairs` counter and its zero-length bars.
  *
- * Definition (U. Bauer, J. Appl. Comput. Topology 5, 2021, the section on apparent pairs; recalled from
- * memory): in a filtration with a total order on simplices, (σ, τ) is an apparent pair when τ is the
+ * Definition (the 2021 paper on Vietoris–Rips barcodes in J. Appl. Comput. Topology 5, its section on
+ * apparent pairs; recalled from memory): in a filtration with a total order on simplices, (σ, τ) is an apparent pair when τ is the
  * earliest coface of σ and σ is the latest facet of τ; every apparent pair is a persistence pair of the
  * filtration. Here only pairs with f(σ) = f(τ) count (zero persistence), as `BarcodeStats.apparentPairs`
  * documents. The total order is the one `computeBarcode` documents: value, then dimension, then the
@@ -107,7 +107,7 @@ function persistencePartners(bySize: Simplex[][], n: number): Map<string, Simple
 }
 
 /**
- * Emergent pairs (U. Bauer, 2021, as above; recalled from memory): a positive σ, not in an apparent pair,
+ * Emergent pairs (the same paper, as above; recalled from memory): a positive σ, not in an apparent pair,
  * whose partner is its earliest coface, entering with it. The reduction pairs those without building
  * their columns, and counts them.
  */

@@ -1,16 +1,13 @@
-import { existsSync, mkdirSync, writeFileSync } from "node:fs";
-import { join } from "node:path";
-import { checkInputsOutside, checkOutFolder, type FolderMarker } from "../extract/check-out-folder.js";
+import { checkInputsOutside, checkOutFolder } from "../extract/check-out-folder.js";
 import { isOutputIOError, OutputIOError } from "../extract/output-io-error.js";
-import { runFolder } from "../extract/run-folder.js";
+import { type FolderMarker, markFolder, runFolder } from "../extract/run-folder.js";
 import { lockRunFolder, type RunFolderLock } from "../extract/run-folder-lock.js";
 
-/** The marker of a folder `connect` writes (fixed content: two runs give byte-identical folders). */
+/** The marker of a folder `connect` writes. */
 export const CONNECT_FOLDER: FolderMarker = {
   file: "cliquescape-connect.json",
   kind: "cliquescape connectivity folder",
 };
-const MARKER_TEXT = `${JSON.stringify({ kind: CONNECT_FOLDER.kind, version: 1 })}\n`;
 
 /**
  * Makes `out` the connectivity folder of this run, with extract's rules: refused before anything is
@@ -27,9 +24,7 @@ export function claimConnectFolder(
   checkOutFolder(out, dataset, CONNECT_FOLDER);
   checkInputsOutside(out, datasetFolder, inputs);
   try {
-    mkdirSync(out, { recursive: true });
-    const marker = join(out, CONNECT_FOLDER.file);
-    if (!existsSync(marker)) writeFileSync(marker, MARKER_TEXT);
+    markFolder(out, CONNECT_FOLDER);
     return lockRunFolder(runFolder(out), out);
   } catch (error) {
     if (!isOutputIOError(error, out)) throw error;

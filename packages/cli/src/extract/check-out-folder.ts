@@ -2,18 +2,10 @@ import { existsSync, readdirSync, readFileSync, realpathSync, statSync } from "n
 import { basename, dirname, join, relative, resolve, sep } from "node:path";
 import { UsageError } from "../options/graph-options.js";
 import { OutputIOError } from "./output-io-error.js";
-import { RUN_FOLDER_MARKER } from "./run-folder.js";
+import { type FolderMarker, RUN_FOLDER, RUN_FOLDER_MARKER } from "./run-folder.js";
 
 /** Raised when --out names a folder we must not write into (the user's own files, or the dataset). */
 export class OutFolderError extends UsageError {}
-
-/** The file that marks a folder as written by one of our commands, and what to call such a folder. */
-export interface FolderMarker {
-  file: string;
-  kind: string;
-}
-
-const RUN_FOLDER: FolderMarker = { file: RUN_FOLDER_MARKER, kind: "cliquescape run folder" };
 
 /**
  * Whether `--out` may be written, decided before anything is read or computed: a new path, an empty

@@ -46,14 +46,25 @@ export function runFolder(root: string): RunFolder {
   };
 }
 
-/** The marker file's name, and its content (fixed: two runs of the same job give byte-identical folders). */
+/** The file that marks a folder as written by one of our commands, and what to call such a folder. */
+export interface FolderMarker {
+  file: string;
+  kind: string;
+}
+
+/** The run folder's marker (its content is fixed: two runs of the same job give byte-identical folders). */
 export const RUN_FOLDER_MARKER = "cliquescape-run.json";
-export const RUN_FOLDER_MARKER_TEXT = `${JSON.stringify({ kind: "cliquescape run folder", version: 1 })}\n`;
+export const RUN_FOLDER: FolderMarker = { file: RUN_FOLDER_MARKER, kind: "cliquescape run folder" };
 
 /** Creates the folder (if need be) and marks it as ours; call only after checkOutFolder accepted it. */
+export function markFolder(root: string, marker: FolderMarker): void {
+  makeFolder(root);
+  const file = join(root, marker.file);
+  if (!existsSync(file)) writeFileSync(file, `${JSON.stringify({ kind: marker.kind, version: 1 })}\n`);
+}
+
 export function markRunFolder(folder: RunFolder): void {
-  makeFolder(folder.root);
-  if (!existsSync(folder.marker)) writeFileSync(folder.marker, RUN_FOLDER_MARKER_TEXT);
+  markFolder(folder.root, RUN_FOLDER);
 }
 
 /**

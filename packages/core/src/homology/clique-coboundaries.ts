@@ -403,25 +403,10 @@ export class CliqueCoboundaries implements CoboundaryModel {
     const count = dim + 1;
     this.prepareCofaceKeys(key, count);
     const s = this.s;
-    const values = this.binom.values;
-    const row = this.row;
     if (this.dense !== null) {
-      const m = this.dense;
-      const n = this.n;
-      let j = 0;
-      for (let v = 0; v < n; v++) {
-        if (j < count && v === s[j]) {
-          j++;
-          continue;
-        }
-        let i = 0;
-        while (i < count && m[s[i] * n + v] <= f) i++;
-        if (i === count) {
-          this.sign = (j & 1) === 0 ? 1 : -1;
-          return this.low[j] + values[(j + 1) * row + v] + this.high[j];
-        }
-      }
-      return -1;
+      for (let i = 0; i < count; i++) this.rows[i] = s[i] * this.n;
+      const v = this.earliestDenseCoface(count, f);
+      return v < 0 ? -1 : this.cofaceKey(this.cofaceSlot, v);
     }
     this.startIntersection(count);
     for (;;) {
@@ -430,10 +415,43 @@ export class CliqueCoboundaries implements CoboundaryModel {
       if (this.lastCofaceF(count, f) === f) {
         let j = 0;
         while (j < count && s[j] < v) j++;
-        this.sign = (j & 1) === 0 ? 1 : -1;
-        return this.low[j] + values[(j + 1) * row + v] + this.high[j];
+        return this.cofaceKey(j, v);
       }
     }
+  }
+
+  /** Where earliestDenseCoface found its vertex among σ's vertices. */
+  private cofaceSlot = 0;
+
+  /**
+   * Dense layout: the smallest vertex v ∉ σ whose edges to σ are all ≤ f, so that σ ∪ {v} is σ's earliest
+   * coface with value f; -1 if there is none. Sets cofaceSlot. Expects prepareCofaceKeys and rows[i] = s_i·n.
+   */
+  private earliestDenseCoface(count: number, f: number): number {
+    const s = this.s;
+    const m = this.dense as Float64Array;
+    const rows = this.rows;
+    const n = this.n;
+    let j = 0;
+    for (let v = 0; v < n; v++) {
+      if (j < count && v === s[j]) {
+        j++;
+        continue;
+      }
+      let i = 0;
+      while (i < count && m[rows[i] + v] <= f) i++;
+      if (i === count) {
+        this.cofaceSlot = j;
+        return v;
+      }
+    }
+    return -1;
+  }
+
+  /** Key of the coface σ ∪ {v}, v coming after j of σ's vertices; sets sign, its coefficient in δσ. */
+  private cofaceKey(j: number, v: number): number {
+    this.sign = (j & 1) === 0 ? 1 : -1;
+    return this.low[j] + this.binom.values[(j + 1) * this.row + v] + this.high[j];
   }
 
   /**
@@ -477,23 +495,12 @@ export class CliqueCoboundaries implements CoboundaryModel {
         if (!earlier) return 1;
       }
     }
-    // The earliest coface with value f adds the smallest vertex v whose edges to σ are all ≤ f; σ opens an
-    // apparent pair with it when no vertex of σ below v can be dropped from σ ∪ {v} keeping value f.
-    let j = 0;
-    for (let v = 0; v < n; v++) {
-      if (j < count && v === s[j]) {
-        j++;
-        continue;
-      }
-      let i = 0;
-      while (i < count && m[rows[i] + v] <= f) i++;
-      if (i < count) continue;
-      if (this.latestFacetDrop(count, v, f) >= 0) return 0;
-      this.sign = (j & 1) === 0 ? 1 : -1;
-      this.apparentCoface = this.low[j] + this.binom.values[(j + 1) * this.row + v] + this.high[j];
-      return 2;
-    }
-    return 0;
+    // σ opens an apparent pair with its earliest coface of value f when no vertex of σ below the added one
+    // can be dropped from that coface keeping value f.
+    const v = this.earliestDenseCoface(count, f);
+    if (v < 0 || this.latestFacetDrop(count, v, f) >= 0) return 0;
+    this.apparentCoface = this.cofaceKey(this.cofaceSlot, v);
+    return 2;
   }
 
   /**

@@ -19,7 +19,7 @@ export const PYTHON = process.env.PYTHON ?? (existsSync("/usr/bin/python3") ? "/
  * the test file whose checks it skips.
  */
 export function missingPythonModules(modules: string[]): string | null {
-  const cached = cacheFile("modules", modules.join(","));
+  const cached = cacheFile("modules", () => modules.join(","));
   if (cached && existsSync(cached)) return null;
   const probe = spawnSync(PYTHON, ["-c", modules.map((m) => `import ${m}`).join("; ")], { encoding: "utf8" });
   const missing = probe.error
@@ -40,7 +40,7 @@ export function missingPythonModules(modules: string[]): string | null {
 export function runPythonScript<T>(script: string, input: unknown): T {
   const path = fileURLToPath(new URL(`./python/${script}`, import.meta.url));
   const stdin = JSON.stringify(input);
-  const cached = cacheFile("answer", `${readFileSync(path, "utf8")}\0${stdin}`);
+  const cached = cacheFile("answer", () => `${readFileSync(path, "utf8")}\0${stdin}`);
   if (cached && existsSync(cached)) return JSON.parse(readFileSync(cached, "utf8")) as T;
   const run = spawnSync(PYTHON, [path], {
     input: stdin,
@@ -59,11 +59,11 @@ export function runPythonScript<T>(script: string, input: unknown): T {
  * depends only on the script and its input, never on the mutant, so it is asked once per run instead of
  * once per mutant. `npm test` leaves it unset and asks Python every time.
  */
-function cacheFile(kind: string, key: string): string | null {
+function cacheFile(kind: string, key: () => string): string | null {
   const dir = process.env.CLIQUESCAPE_PYTHON_CACHE;
   if (!dir) return null;
   mkdirSync(dir, { recursive: true });
-  return join(dir, `${kind}-${createHash("sha256").update(key).digest("hex")}.json`);
+  return join(dir, `${kind}-${createHash("sha256").update(key()).digest("hex")}.json`);
 }
 
 // Written aside and renamed, so a test process stopped midway never leaves half an answer.

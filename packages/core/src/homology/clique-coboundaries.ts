@@ -100,10 +100,20 @@ export class CliqueCoboundaries implements CoboundaryModel {
       }
       this.rowOrder = order;
       this.rowSorted = sorted;
+      this.runStampOf = new Int32Array(n);
+      this.runStart = new Int32Array(n);
+      this.runStop = new Int32Array(n);
+      this.prefixStampOf = new Int32Array(n);
+      this.prefixLength = new Int32Array(n);
     } else {
       this.dense = null;
       this.rowOrder = null;
       this.rowSorted = null;
+      this.runStampOf = new Int32Array(0);
+      this.runStart = this.runStampOf;
+      this.runStop = this.runStampOf;
+      this.prefixStampOf = this.runStampOf;
+      this.prefixLength = this.runStampOf;
     }
     this.s = new Int32Array(maxVertices + 1);
     this.low = new Float64Array(maxVertices + 2);
@@ -228,16 +238,32 @@ export class CliqueCoboundaries implements CoboundaryModel {
       if (horizon !== Number.POSITIVE_INFINITY) {
         // Only neighbours v of σ's vertex with the fewest edges ≤ horizon can give cofaces ≤ horizon.
         const sorted = this.rowSorted as Float64Array;
+        if (horizon !== this.prefixHorizon) {
+          this.prefixHorizon = horizon;
+          if (++this.prefixStamp === 0x7fffffff) {
+            this.prefixStampOf.fill(0);
+            this.prefixStamp = 1;
+          }
+        }
+        const stampOf = this.prefixStampOf;
+        const stamp = this.prefixStamp;
+        const prefix = this.prefixLength;
         let best = -1;
         let bestLength = n + 1;
         for (let i = 0; i < count; i++) {
-          const base = s[i] * n;
-          let lo = 0;
-          let hi = n;
-          while (lo < hi) {
-            const mid = (lo + hi) >>> 1;
-            if (sorted[base + mid] <= horizon) lo = mid + 1;
-            else hi = mid;
+          const u = s[i];
+          let lo = prefix[u];
+          if (stampOf[u] !== stamp) {
+            const base = u * n;
+            lo = 0;
+            let hi = n;
+            while (lo < hi) {
+              const mid = (lo + hi) >>> 1;
+              if (sorted[base + mid] <= horizon) lo = mid + 1;
+              else hi = mid;
+            }
+            stampOf[u] = stamp;
+            prefix[u] = lo;
           }
           if (lo < bestLength) {
             bestLength = lo;
@@ -249,6 +275,33 @@ export class CliqueCoboundaries implements CoboundaryModel {
           const start = s[best] * n;
           const rows = this.rows;
           for (let i = 0; i < count; i++) rows[i] = s[i] * n;
+          if (count === 3) {
+            // A triangle: the best row's edge value comes from its sorted row, the other two are read.
+            const ra = rows[best === 0 ? 1 : 0];
+            const rb = rows[best === 2 ? 1 : 2];
+            const s0 = s[0];
+            const s1 = s[1];
+            const s2 = s[2];
+            for (let r = 0; r < bestLength; r++) {
+              const v = order[start + r];
+              const xa = m[ra + v];
+              if (xa > horizon) continue;
+              const xb = m[rb + v];
+              if (xb > horizon) continue;
+              let fv = sorted[start + r];
+              if (f > fv) fv = f;
+              if (xa > fv) fv = xa;
+              if (xb > fv) fv = xb;
+              if (fv <= bandLow) continue;
+              const jv = (v > s0 ? 1 : 0) + (v > s1 ? 1 : 0) + (v > s2 ? 1 : 0);
+              sink.push(
+                fv,
+                low[jv] + values[(jv + 1) * row + v] + high[jv],
+                (jv & 1) === 0 ? factor : negative,
+              );
+            }
+            return;
+          }
           for (let r = 0; r < bestLength; r++) {
             const v = order[start + r];
             let fv = f;
@@ -346,9 +399,27 @@ export class CliqueCoboundaries implements CoboundaryModel {
     const ptr = this.ptr;
     const ends = this.bandEnd;
     let total = 0;
+    if (floor !== this.runFloor || bandLow !== this.runBandLow || horizon !== this.runHorizon) {
+      this.runFloor = floor;
+      this.runBandLow = bandLow;
+      this.runHorizon = horizon;
+      if (++this.runStamp === 0x7fffffff) {
+        this.runStampOf.fill(0);
+        this.runStamp = 1;
+      }
+    }
+    const stampOf = this.runStampOf;
+    const stamp = this.runStamp;
     for (let i = 0; i < count; i++) {
-      const base = s[i] * n;
+      const u = s[i];
+      const base = u * n;
       rows[i] = base;
+      if (stampOf[u] === stamp) {
+        ptr[i] = this.runStart[u];
+        ends[i] = this.runStop[u];
+        total += ends[i] - ptr[i];
+        continue;
+      }
       // First rank with value ≥ floor and > bandLow.
       let lo = 0;
       let hi = n;
@@ -369,8 +440,15 @@ export class CliqueCoboundaries implements CoboundaryModel {
       }
       ends[i] = lo;
       total += lo - ptr[i];
+      stampOf[u] = stamp;
+      this.runStart[u] = ptr[i];
+      this.runStop[u] = lo;
     }
     if (total * 2 > n) return false;
+    if (count === 3) {
+      this.pushTriangleBand(floor, bandLow, horizon, factor, negative, sink);
+      return true;
+    }
     const low = this.low;
     const high = this.high;
     const values = this.binom.values;
@@ -399,6 +477,76 @@ export class CliqueCoboundaries implements CoboundaryModel {
     return true;
   }
 
+  /**
+   * pushBand for a triangle σ = {s0, s1, s2}, the columns of H2 where most of the time goes. A run's own
+   * edge value is read from the sorted row, and an earlier row's edge is tested first, so a coface found
+   * from an earlier run costs one matrix read. No vertex of σ is in a run: σ's own edges are ≤ its value.
+   */
+  private pushTriangleBand(
+    floor: number,
+    bandLow: number,
+    horizon: number,
+    factor: number,
+    negative: number,
+    sink: CofaceSink,
+  ): void {
+    const m = this.dense as Float64Array;
+    const sorted = this.rowSorted as Float64Array;
+    const order = this.rowOrder as Int32Array;
+    const s = this.s;
+    const s0 = s[0];
+    const s1 = s[1];
+    const s2 = s[2];
+    const r0 = this.rows[0];
+    const r1 = this.rows[1];
+    const r2 = this.rows[2];
+    const ptr = this.ptr;
+    const ends = this.bandEnd;
+    const low = this.low;
+    const high = this.high;
+    const values = this.binom.values;
+    const row = this.row;
+    // An absent edge (Infinity) must fail the horizon test even when the horizon is +∞.
+    const limit = Math.min(horizon, Number.MAX_VALUE);
+    // An edge value x with x ≥ floor and x > bandLow is in the band; any such value is above σ's own.
+    for (let r = ptr[0]; r < ends[0]; r++) {
+      const v = order[r0 + r];
+      let fv = sorted[r0 + r];
+      const x1 = m[r1 + v];
+      if (x1 > limit) continue;
+      const x2 = m[r2 + v];
+      if (x2 > limit) continue;
+      if (x1 > fv) fv = x1;
+      if (x2 > fv) fv = x2;
+      const j = (v > s0 ? 1 : 0) + (v > s1 ? 1 : 0) + (v > s2 ? 1 : 0);
+      sink.push(fv, low[j] + values[(j + 1) * row + v] + high[j], (j & 1) === 0 ? factor : negative);
+    }
+    for (let r = ptr[1]; r < ends[1]; r++) {
+      const v = order[r1 + r];
+      const x0 = m[r0 + v];
+      if (x0 > limit || (x0 >= floor && x0 > bandLow)) continue;
+      const x2 = m[r2 + v];
+      if (x2 > limit) continue;
+      let fv = sorted[r1 + r];
+      if (x2 > fv) fv = x2;
+      const j = (v > s0 ? 1 : 0) + (v > s1 ? 1 : 0) + (v > s2 ? 1 : 0);
+      sink.push(fv, low[j] + values[(j + 1) * row + v] + high[j], (j & 1) === 0 ? factor : negative);
+    }
+    for (let r = ptr[2]; r < ends[2]; r++) {
+      const v = order[r2 + r];
+      const x0 = m[r0 + v];
+      if (x0 > limit || (x0 >= floor && x0 > bandLow)) continue;
+      const x1 = m[r1 + v];
+      if (x1 > limit || (x1 >= floor && x1 > bandLow)) continue;
+      const j = (v > s0 ? 1 : 0) + (v > s1 ? 1 : 0) + (v > s2 ? 1 : 0);
+      sink.push(
+        sorted[r2 + r],
+        low[j] + values[(j + 1) * row + v] + high[j],
+        (j & 1) === 0 ? factor : negative,
+      );
+    }
+  }
+
   zeroCoface(dim: number, key: number, f: number): number {
     const count = dim + 1;
     this.prepareCofaceKeys(key, count);
@@ -419,6 +567,26 @@ export class CliqueCoboundaries implements CoboundaryModel {
       }
     }
   }
+
+  /**
+   * pushBand's runs per vertex for the last band it was given (a working column pushes many chain
+   * simplices with one band, and they share most vertices: at correlation n = 300, 87 % of the runs were
+   * found here instead of by two binary searches). A vertex's runs are valid while runStampOf[u] is
+   * runStamp; a new band takes a new stamp.
+   */
+  private runFloor = Number.NaN;
+  private runBandLow = Number.NaN;
+  private runHorizon = Number.NaN;
+  private runStamp = 0;
+  private readonly runStampOf: Int32Array;
+  private readonly runStart: Int32Array;
+  private readonly runStop: Int32Array;
+
+  /** The same for pushCoboundary: the number of edges of each vertex up to the last horizon it was given. */
+  private prefixHorizon = Number.NaN;
+  private prefixStamp = 0;
+  private readonly prefixStampOf: Int32Array;
+  private readonly prefixLength: Int32Array;
 
   /** Where earliestDenseCoface found its vertex among σ's vertices. */
   private cofaceSlot = 0;

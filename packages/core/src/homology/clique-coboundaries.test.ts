@@ -1,0 +1,203 @@
+/**
+ * pushCoboundary against the definition of the coboundary, for both clique layouts and every kind of band
+ * a working column asks for. The dense layout has several sweeps (all vertices; the sorted prefix of one
+ * row below a horizon; the sorted runs of σ's rows inside a band above σ's value; triangles apart, with
+ * cached run positions), chosen by the band and the row lengths, so a wrong value or a missed coface in one
+ * of them shows only on graphs large enough to reach it — larger than the differential tests' graphs.
+ *
+ * Definition (common practice; e.g. H. Edelsbrunner and J. Harer, Computational Topology, 2010, §IV.1 and
+ * §VII.1): the coboundary of σ = {s_0 < … < s_d} in the clique complex has an entry for every vertex v ∉ σ
+ * adjacent to all of σ, the coface τ = σ ∪ {v} with coefficient (−1)^j (j = vertices of σ below v) and
+ * filtration value max(f(σ), f({s_i, v})); τ is keyed by the combinatorial number system
+ * Σ_i C(τ_i, i + 1) (D. E. Knuth, The Art of Computer Programming 4A, 2011, §7.2.1.3).
+ * The sink's contract (coface-sink.ts): entries outside [floor, horizon] or ≤ bandLow may be sent or not,
+ * every entry inside must be sent once.
+ */
+import { describe, expect, it } from "vitest";
+import { edgeFiltration } from "../filtration/edge-filtration.js";
+import { fromEdgeList } from "../graph/from-edge-list.js";
+import type { WeightedGraph } from "../graph/weighted-graph.js";
+import { WorkMonitor } from "../work/work-monitor.js";
+import { CliqueCoboundaries, type CliqueLayout } from "./clique-coboundaries.js";
+import type { CofaceSink } from "./coface-sink.js";
+import { ByteLedger } from "./homology-budget.js";
+import { SimplexQuota } from "./simplex-quota.js";
+
+/** Small seeded generator (a linear congruential one) so that the cases are reproducible. */
+function generator(seed: number): () => number {
+  let state = seed >>> 0;
+  return () => {
+    state = (Math.imul(state, 1664525) + 1013904223) >>> 0;
+    return state / 2 ** 32;
+  };
+}
+
+function binomial(n: number, k: number): number {
+  if (k > n) return 0;
+  let r = 1;
+  for (let i = 1; i <= k; i++) r = (r * (n - k + i)) / i;
+  return Math.round(r);
+}
+
+interface Case {
+  graph: WeightedGraph;
+  value: (u: number, v: number) => number;
+}
+
+/** G(n, p) with weights from `levels` distinct values (ties when few), distance semantics. */
+function randomCase(n: number, p: number, levels: number, random: () => number): Case {
+  const sources: number[] = [];
+  const targets: number[] = [];
+  const weights: number[] = [];
+  const table = new Map<number, number>();
+  for (let u = 0; u < n; u++) {
+    for (let v = u + 1; v < n; v++) {
+      if (random() >= p) continue;
+      const w = 1 + Math.floor(random() * levels);
+      sources.push(u);
+      targets.push(v);
+      weights.push(w);
+      table.set(u * n + v, w);
+    }
+  }
+  const graph = fromEdgeList({ n, sources, targets, weights, directed: false });
+  const value = (u: number, v: number) => table.get(Math.min(u, v) * n + Math.max(u, v)) ?? Infinity;
+  return { graph, value };
+}
+
+/** A random simplex of `count` vertices that is in the complex, with its value; null after many tries. */
+function randomSimplex(c: Case, count: number, random: () => number): { s: number[]; f: number } | null {
+  const n = c.graph.n;
+  for (let attempt = 0; attempt < 200; attempt++) {
+    const set = new Set<number>();
+    while (set.size < count) set.add(Math.floor(random() * n));
+    const s = [...set].sort((a, b) => a - b);
+    let f = Number.NEGATIVE_INFINITY;
+    for (let a = 0; a < count; a++) for (let b = a + 1; b < count; b++) f = Math.max(f, c.value(s[a], s[b]));
+    if (f !== Infinity) return { s, f };
+  }
+  return null;
+}
+
+/** The coboundary entries of σ inside the band, from the definition, as "f key coef" lines, sorted. */
+function expectedEntries(
+  c: Case,
+  s: number[],
+  f: number,
+  factor: number,
+  p: number,
+  band: { floor: number; bandLow: number; horizon: number },
+): string[] {
+  const out: string[] = [];
+  for (let v = 0; v < c.graph.n; v++) {
+    if (s.includes(v)) continue;
+    let fv = f;
+    for (const u of s) fv = Math.max(fv, c.value(u, v));
+    if (fv === Infinity) continue;
+    if (fv < band.floor || fv <= band.bandLow || fv > band.horizon) continue;
+    const tau = [...s, v].sort((a, b) => a - b);
+    const key = tau.reduce((sum, x, i) => sum + binomial(x, i + 1), 0);
+    const j = s.filter((u) => u < v).length;
+    const coef = j % 2 === 0 ? factor : (p - factor) % p;
+    out.push(`${fv} ${key} ${coef}`);
+  }
+  return out.sort();
+}
+
+/** σ with one vertex replaced by another, if that is in the complex. */
+function neighbourSimplex(c: Case, s: number[], random: () => number): { s: number[]; f: number } | null {
+  const n = c.graph.n;
+  for (let attempt = 0; attempt < 50; attempt++) {
+    const v = Math.floor(random() * n);
+    if (s.includes(v)) continue;
+    const t = [...s];
+    t[Math.floor(random() * t.length)] = v;
+    t.sort((a, b) => a - b);
+    let f = Number.NEGATIVE_INFINITY;
+    for (let a = 0; a < t.length; a++)
+      for (let b = a + 1; b < t.length; b++) f = Math.max(f, c.value(t[a], t[b]));
+    if (f !== Infinity) return { s: t, f };
+  }
+  return null;
+}
+
+function keyOf(s: number[]): number {
+  return s.reduce((sum, x, i) => sum + binomial(x, i + 1), 0);
+}
+
+describe("CliqueCoboundaries.pushCoboundary against the definition of the coboundary", () => {
+  it("sends every coface inside the band once, with its value, key and sign, in both layouts", () => {
+    // Sizes from 20 to 140 vertices so that the dense layout takes each of its sweeps: the sorted-prefix
+    // and band sweeps need rows long against the band (the band sweep gives up above half a row).
+    const random = generator(20261202);
+    const layouts: CliqueLayout[] = ["dense", "sparse"];
+    const taken = { checked: 0, finiteHorizon: 0, bandAbove: 0 };
+    for (let g = 0; g < 24; g++) {
+      const n = 20 + Math.floor(random() * 121);
+      const p = g % 3 === 0 ? 1 : 0.6 + 0.4 * random();
+      const levels = g % 4 === 0 ? 12 : 5000;
+      const c = randomCase(n, p, levels, random);
+      const edgeF = edgeFiltration(c.graph, "distance");
+      const models = layouts.map(
+        (layout) =>
+          new CliqueCoboundaries(
+            c.graph,
+            edgeF,
+            5,
+            layout,
+            new ByteLedger(undefined),
+            new WorkMonitor(undefined),
+            new SimplexQuota(undefined, 4),
+          ),
+      );
+      let band = { floor: Number.NEGATIVE_INFINITY, bandLow: Number.NEGATIVE_INFINITY, horizon: Infinity };
+      let previous: number[] = [];
+      for (let t = 0; t < 90; t++) {
+        const count = 2 + (Math.floor(t / 3) % 3); // edges, triangles, tetrahedra
+        // Three simplices in a row share the band and, where possible, all but one vertex: a working
+        // column pushes many chain simplices with one band, and the dense sweeps cache per vertex.
+        const simplex =
+          t % 3 !== 0 && previous.length === count
+            ? neighbourSimplex(c, previous, random)
+            : randomSimplex(c, count, random);
+        if (simplex === null) continue;
+        const { s, f } = simplex;
+        previous = s;
+        if (t % 3 === 0) {
+          // Bands as a working column sets them: none; a horizon; a floor or an old horizon above f.
+          const spread = levels + 1;
+          const above = f + random() * (spread - f);
+          band = { floor: Number.NEGATIVE_INFINITY, bandLow: Number.NEGATIVE_INFINITY, horizon: Infinity };
+          const kind = Math.floor(t / 9) % 5;
+          if (kind >= 1)
+            band.horizon = random() < 0.2 ? Infinity : Math.ceil(above + random() * spread * 0.3);
+          if (kind === 2) band.floor = Math.floor(f + random() * (band.horizon - f));
+          if (kind === 3) band.bandLow = Math.floor(f + random() * (Math.min(band.horizon, spread) - f));
+          if (kind === 4) band.floor = f; // at σ's own value: entries of value f are kept
+        }
+        if (band.horizon !== Infinity) taken.finiteHorizon++;
+        if (band.floor > f || band.bandLow > f) taken.bandAbove++;
+        const prime = [2, 3, 5, 7][t % 4];
+        const factor = 1 + Math.floor(random() * (prime - 1));
+        const expected = expectedEntries(c, s, f, factor, prime, band);
+        for (const model of models) {
+          const got: string[] = [];
+          const sink: CofaceSink = {
+            ...band,
+            push(fv, key, coef) {
+              if (fv < band.floor || fv <= band.bandLow || fv > band.horizon) return;
+              got.push(`${fv} ${key} ${coef}`);
+            },
+          };
+          model.pushCoboundary(count - 1, keyOf(s), f, factor, prime, sink);
+          expect(got.sort(), `n=${n}, σ=${s}, f=${f}, band ${JSON.stringify(band)}`).toEqual(expected);
+          taken.checked++;
+        }
+      }
+    }
+    // The cases reach the bands that select the dense sweeps.
+    expect(taken.checked).toBeGreaterThan(2000);
+    expect(taken.finiteHorizon).toBeGreaterThan(500);
+    expect(taken.bandAbove).toBeGreaterThan(300);
+  });
+});

@@ -2,7 +2,7 @@ import type { CofaceSink } from "./coface-sink.js";
 import type { ByteLedger } from "./homology-budget.js";
 
 /**
- * Binary min-heap of (f, key, coefficient) entries ordered by filtration position (f, then key). Equal keys
+ * Four-ary min-heap of (f, key, coefficient) entries ordered by filtration position (f, then key). Equal keys
  * may sit in the heap several times; `popMerged` sums them when they reach the top.
  */
 export class CofaceHeap implements CofaceSink {
@@ -31,7 +31,7 @@ export class CofaceHeap implements CofaceSink {
     const hk = this.key;
     const hc = this.coef;
     while (i > 0) {
-      const parent = (i - 1) >> 1;
+      const parent = (i - 1) >> 2;
       const pf = hf[parent];
       if (pf < f || (pf === f && hk[parent] <= key)) break;
       hf[i] = pf;
@@ -56,16 +56,24 @@ export class CofaceHeap implements CofaceSink {
     const coef = hc[last];
     let i = 0;
     for (;;) {
-      let child = 2 * i + 1;
-      if (child >= last) break;
-      const right = child + 1;
-      if (right < last && (hf[right] < hf[child] || (hf[right] === hf[child] && hk[right] < hk[child]))) {
-        child = right;
+      const first = 4 * i + 1;
+      if (first >= last) break;
+      // The least of up to four children.
+      let child = first;
+      let cf = hf[first];
+      let ck = hk[first];
+      const end = Math.min(first + 4, last);
+      for (let c = first + 1; c < end; c++) {
+        const x = hf[c];
+        if (x < cf || (x === cf && hk[c] < ck)) {
+          child = c;
+          cf = x;
+          ck = hk[c];
+        }
       }
-      const cf = hf[child];
-      if (f < cf || (f === cf && key <= hk[child])) break;
+      if (f < cf || (f === cf && key <= ck)) break;
       hf[i] = cf;
-      hk[i] = hk[child];
+      hk[i] = ck;
       hc[i] = hc[child];
       i = child;
     }

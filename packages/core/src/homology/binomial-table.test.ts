@@ -35,6 +35,43 @@ describe("binomialTable", () => {
     expect(Math.max(...seen)).toBe(125);
   });
 
+  it("decodes the last two digits at every boundary C(v, 2) − 1, C(v, 2) up to v = 2^20 (n = 2^20 + 1)", () => {
+    // The pair digit is found in closed form from a square root; its rounding must not move a boundary.
+    const n = 2 ** 20 + 1;
+    const t = binomialTable(n, 2);
+    const out = new Int32Array(2);
+    const bad: string[] = [];
+    for (let v = 1; v < n; v++) {
+      const c = (v * (v - 1)) / 2; // C(v, 2): the pair {0, v}, and one less is {v − 2, v − 1}
+      decodeSimplex(t, c, 2, out);
+      if (out[0] !== 0 || out[1] !== v) bad.push(`${c} → ${out}`);
+      if (v >= 2) {
+        decodeSimplex(t, c - 1, 2, out);
+        if (out[0] !== v - 2 || out[1] !== v - 1) bad.push(`${c - 1} → ${out}`);
+      }
+    }
+    expect(bad.slice(0, 5)).toEqual([]);
+  });
+
+  it("decodes seeded random subsets of 2–5 of 1,500 vertices (C(1500, 5) < 2^53) back to themselves", () => {
+    const n = 1500;
+    const t = binomialTable(n, 5);
+    let state = 7;
+    const random = () => {
+      state = (Math.imul(state, 1664525) + 1013904223) >>> 0;
+      return state / 2 ** 32;
+    };
+    for (let trial = 0; trial < 20_000; trial++) {
+      const k = 2 + (trial % 4);
+      const set = new Set<number>();
+      while (set.size < k) set.add(Math.floor(random() * n));
+      const v = Int32Array.from([...set].sort((a, b) => a - b));
+      const out = new Int32Array(k);
+      decodeSimplex(t, encodeSimplex(t, v, k), k, out);
+      expect(Array.from(out)).toEqual(Array.from(v));
+    }
+  });
+
   it("refuses tables whose indices would not be exact", () => {
     expect(() => binomialTable(200000, 5)).toThrow(/2\^53/);
   });

@@ -42,7 +42,7 @@ export function encodeSimplex(table: BinomialTable, vertices: ArrayLike<number>,
 export function decodeSimplex(table: BinomialTable, key: number, count: number, out: Int32Array): void {
   const row = table.n + 1;
   let hi = table.n - 1;
-  for (let k = count; k >= 1; k--) {
+  for (let k = count; k >= 3; k--) {
     // Largest v ≤ hi with C(v, k) ≤ key (greedy digit of the combinatorial number system).
     let lo = k - 1;
     let top = hi;
@@ -56,4 +56,16 @@ export function decodeSimplex(table: BinomialTable, key: number, count: number, 
     key -= table.values[base + lo];
     hi = lo - 1;
   }
+  // The last two digits in closed form (decoding runs once per coboundary pushed): the largest v with
+  // v(v − 1)/2 ≤ key is ⌊(1 + √(1 + 8·key)) / 2⌋. 1 + 8·key is an exact double and √ is correctly
+  // rounded, so the root of a perfect square is exact; just below one, at C(v, 2) − 1, the root is about
+  // 4/(2v − 1) under 2v − 1, which rounding can lose only past v ≈ 1.3·10^8 — hence the check. Then
+  // C(v, 1) = v ≤ key leaves v = key.
+  if (count >= 2) {
+    let v = Math.floor((1 + Math.sqrt(1 + 8 * key)) / 2);
+    if ((v * (v - 1)) / 2 > key) v--;
+    out[1] = v;
+    key -= (v * (v - 1)) / 2;
+  }
+  if (count >= 1) out[0] = key;
 }

@@ -20,4 +20,27 @@ describe("ChainBuilder", () => {
     expect(Array.from(chain.coef.subarray(0, chain.size))).toEqual(expected.map(([, c]) => c));
     expect(Array.from(chain.f.subarray(0, chain.size))).toEqual(expected.map(([k]) => k / 10));
   });
+
+  it("gives the same tally when the keys are too large to sort packed with their positions (up to 2^53)", () => {
+    // Keys of 4-simplices among many vertices come close to 2^53; then the comparison sort is used.
+    for (const base of [0, 2 ** 40, 2 ** 52]) {
+      const chain = new ChainBuilder(new ByteLedger(undefined), 4);
+      const tally = new Map<number, number>();
+      let x = 11;
+      for (let i = 0; i < 3000; i++) {
+        x = (x * 69069 + 1) % 4294967296;
+        const key = base + (x % 389) * 7;
+        const coef = 1 + (x % 6);
+        chain.push(key, key, coef);
+        tally.set(key, ((tally.get(key) ?? 0) + coef) % 7);
+      }
+      chain.compact(7);
+      const expected = [...tally].filter(([, c]) => c !== 0).sort((a, b) => a[0] - b[0]);
+      expect(Array.from(chain.key.subarray(0, chain.size)), `keys from ${base}`).toEqual(
+        expected.map(([k]) => k),
+      );
+      expect(Array.from(chain.coef.subarray(0, chain.size))).toEqual(expected.map(([, c]) => c));
+      expect(Array.from(chain.f.subarray(0, chain.size))).toEqual(expected.map(([k]) => k));
+    }
+  });
 });

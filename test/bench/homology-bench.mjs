@@ -6,7 +6,7 @@
 //   node test/bench/homology-bench.mjs --child CASE BUDGET_BYTES      (one measurement, one JSON line)
 //
 // Cases: complete similarity matrices (Pearson correlations of n seeded Gaussian series of 50 samples, and
-// independent uniform weights) n = 100, 200, 400, H0–H2 of the full filtration; sparse undirected
+// independent uniform weights) n = 100, 200, 400 (uniform also 140, 160), H0–H2 of the full filtration; sparse undirected
 // Erdős–Rényi n = 5000, mean degree 20, H0–H1; directed Erdős–Rényi n = 300, p = 0.1, H0–H2.
 // A case that exceeds the time limit is reported as "timeout"; one that exceeds the memory budget reports
 // the HomologyBudgetError message.
@@ -21,6 +21,8 @@ const CASES = {
   corr100: { kind: "correlation", n: 100, maxDim: 2 },
   uniform100: { kind: "uniform", n: 100, maxDim: 2 },
   corr200: { kind: "correlation", n: 200, maxDim: 2 },
+  uniform140: { kind: "uniform", n: 140, maxDim: 2 },
+  uniform160: { kind: "uniform", n: 160, maxDim: 2 },
   uniform200: { kind: "uniform", n: 200, maxDim: 2 },
   corr400: { kind: "correlation", n: 400, maxDim: 2 },
   corr300: { kind: "correlation", n: 300, maxDim: 2 },

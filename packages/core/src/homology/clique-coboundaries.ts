@@ -6,6 +6,7 @@ import type { CofaceSink } from "./coface-sink.js";
 import type { ByteLedger } from "./homology-budget.js";
 import { SimplexListBuilder } from "./simplex-list-builder.js";
 import type { SimplexQuota } from "./simplex-quota.js";
+import { VertexMemo } from "./vertex-memo.js";
 
 /** How edge values are looked up: an n×n matrix (fast for dense graphs) or the sparse rows. */
 export type CliqueLayout = "dense" | "sparse";
@@ -100,20 +101,14 @@ export class CliqueCoboundaries implements CoboundaryModel {
       }
       this.rowOrder = order;
       this.rowSorted = sorted;
-      this.runStampOf = new Int32Array(n);
-      this.runStart = new Int32Array(n);
-      this.runStop = new Int32Array(n);
-      this.prefixStampOf = new Int32Array(n);
-      this.prefixLength = new Int32Array(n);
+      this.runs = new VertexMemo(n);
+      this.prefixes = new VertexMemo(n);
     } else {
       this.dense = null;
       this.rowOrder = null;
       this.rowSorted = null;
-      this.runStampOf = new Int32Array(0);
-      this.runStart = this.runStampOf;
-      this.runStop = this.runStampOf;
-      this.prefixStampOf = this.runStampOf;
-      this.prefixLength = this.runStampOf;
+      this.runs = new VertexMemo(0);
+      this.prefixes = this.runs;
     }
     this.s = new Int32Array(maxVertices + 1);
     this.low = new Float64Array(maxVertices + 2);
@@ -238,22 +233,14 @@ export class CliqueCoboundaries implements CoboundaryModel {
       if (horizon !== Number.POSITIVE_INFINITY) {
         // Only neighbours v of σ's vertex with the fewest edges ≤ horizon can give cofaces ≤ horizon.
         const sorted = this.rowSorted as Float64Array;
-        if (horizon !== this.prefixHorizon) {
-          this.prefixHorizon = horizon;
-          if (++this.prefixStamp === 0x7fffffff) {
-            this.prefixStampOf.fill(0);
-            this.prefixStamp = 1;
-          }
-        }
-        const stampOf = this.prefixStampOf;
-        const stamp = this.prefixStamp;
-        const prefix = this.prefixLength;
+        const prefixes = this.prefixes;
+        prefixes.use(horizon, 0, 0);
         let best = -1;
         let bestLength = n + 1;
         for (let i = 0; i < count; i++) {
           const u = s[i];
-          let lo = prefix[u];
-          if (stampOf[u] !== stamp) {
+          let lo = prefixes.first[u];
+          if (!prefixes.has(u)) {
             const base = u * n;
             lo = 0;
             let hi = n;
@@ -262,8 +249,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
               if (sorted[base + mid] <= horizon) lo = mid + 1;
               else hi = mid;
             }
-            stampOf[u] = stamp;
-            prefix[u] = lo;
+            prefixes.set(u, lo, 0);
           }
           if (lo < bestLength) {
             bestLength = lo;
@@ -399,24 +385,15 @@ export class CliqueCoboundaries implements CoboundaryModel {
     const ptr = this.ptr;
     const ends = this.bandEnd;
     let total = 0;
-    if (floor !== this.runFloor || bandLow !== this.runBandLow || horizon !== this.runHorizon) {
-      this.runFloor = floor;
-      this.runBandLow = bandLow;
-      this.runHorizon = horizon;
-      if (++this.runStamp === 0x7fffffff) {
-        this.runStampOf.fill(0);
-        this.runStamp = 1;
-      }
-    }
-    const stampOf = this.runStampOf;
-    const stamp = this.runStamp;
+    const runs = this.runs;
+    runs.use(floor, bandLow, horizon);
     for (let i = 0; i < count; i++) {
       const u = s[i];
       const base = u * n;
       rows[i] = base;
-      if (stampOf[u] === stamp) {
-        ptr[i] = this.runStart[u];
-        ends[i] = this.runStop[u];
+      if (runs.has(u)) {
+        ptr[i] = runs.first[u];
+        ends[i] = runs.second[u];
         total += ends[i] - ptr[i];
         continue;
       }
@@ -440,9 +417,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
       }
       ends[i] = lo;
       total += lo - ptr[i];
-      stampOf[u] = stamp;
-      this.runStart[u] = ptr[i];
-      this.runStop[u] = lo;
+      runs.set(u, ptr[i], lo);
     }
     if (total * 2 > n) return false;
     if (count === 3) {
@@ -569,24 +544,12 @@ export class CliqueCoboundaries implements CoboundaryModel {
   }
 
   /**
-   * pushBand's runs per vertex for the last band it was given (a working column pushes many chain
-   * simplices with one band, and they share most vertices: at correlation n = 300, 87 % of the runs were
-   * found here instead of by two binary searches). A vertex's runs are valid while runStampOf[u] is
-   * runStamp; a new band takes a new stamp.
+   * pushBand's runs of each vertex for the band last asked (at correlation n = 300, 87 % of the runs were
+   * found here instead of by two binary searches), and pushCoboundary's prefix of each vertex's row up to
+   * the horizon last asked.
    */
-  private runFloor = Number.NaN;
-  private runBandLow = Number.NaN;
-  private runHorizon = Number.NaN;
-  private runStamp = 0;
-  private readonly runStampOf: Int32Array;
-  private readonly runStart: Int32Array;
-  private readonly runStop: Int32Array;
-
-  /** The same for pushCoboundary: the number of edges of each vertex up to the last horizon it was given. */
-  private prefixHorizon = Number.NaN;
-  private prefixStamp = 0;
-  private readonly prefixStampOf: Int32Array;
-  private readonly prefixLength: Int32Array;
+  private readonly runs: VertexMemo;
+  private readonly prefixes: VertexMemo;
 
   /** Where earliestDenseCoface found its vertex among σ's vertices. */
   private cofaceSlot = 0;

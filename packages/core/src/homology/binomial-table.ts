@@ -38,7 +38,7 @@ export function encodeSimplex(table: BinomialTable, vertices: ArrayLike<number>,
   return key;
 }
 
-/** Writes the ascending vertices of the `count`-vertex simplex with index `key` into `out`. */
+/** Writes the ascending vertices of the `count`-vertex simplex (count ≥ 1) with index `key` into `out`. */
 export function decodeSimplex(table: BinomialTable, key: number, count: number, out: Int32Array): void {
   const row = table.n + 1;
   let hi = table.n - 1;
@@ -67,5 +67,5 @@ export function decodeSimplex(table: BinomialTable, key: number, count: number, 
     out[1] = v;
     key -= (v * (v - 1)) / 2;
   }
-  if (count >= 1) out[0] = key;
+  out[0] = key;
 }

@@ -43,4 +43,16 @@ describe("ChainBuilder", () => {
       expect(Array.from(chain.f.subarray(0, chain.size))).toEqual(expected.map(([k]) => k));
     }
   });
+
+  it("keeps positions exact at the edge of the packed sort: key·4 = 2^53 with four entries", () => {
+    // With 4 entries the positions take 2 bits; a key of 2^51 would pack to 2^53 + position, where doubles
+    // are 2 apart, so that chain must take the comparison sort (keys and coefficients kept together).
+    const chain = new ChainBuilder(new ByteLedger(undefined), 4);
+    const keys = [5, 2 ** 51, 2 ** 51 - 1, 7]; // 2^51 at position 1: 2^53 + 1 is not a double
+    keys.forEach((key, i) => chain.push(key, i, i + 1));
+    chain.compact(11);
+    expect(Array.from(chain.key.subarray(0, 4))).toEqual([5, 7, 2 ** 51 - 1, 2 ** 51]);
+    expect(Array.from(chain.f.subarray(0, 4))).toEqual([0, 3, 2, 1]);
+    expect(Array.from(chain.coef.subarray(0, 4))).toEqual([1, 4, 3, 2]);
+  });
 });

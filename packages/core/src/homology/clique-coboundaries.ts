@@ -483,7 +483,10 @@ export class CliqueCoboundaries implements CoboundaryModel {
     const row = this.row;
     // An absent edge (Infinity) must fail the horizon test even when the horizon is +∞.
     const limit = Math.min(horizon, Number.MAX_VALUE);
-    // An edge value x with x ≥ floor and x > bandLow is in the band; any such value is above σ's own.
+    // An edge value x with x ≥ floor and x > bandLow is in the band or past it (the runs are empty unless
+    // floor and bandLow lie below the horizon); any such value is above σ's own. In the second and third
+    // runs an earlier row's edge there drops v: that coface came from an earlier run, or lies past the
+    // horizon.
     for (let r = ptr[0]; r < ends[0]; r++) {
       const v = order[r0 + r];
       let fv = sorted[r0 + r];
@@ -499,7 +502,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
     for (let r = ptr[1]; r < ends[1]; r++) {
       const v = order[r1 + r];
       const x0 = m[r0 + v];
-      if (x0 > limit || (x0 >= floor && x0 > bandLow)) continue;
+      if (x0 >= floor && x0 > bandLow) continue;
       const x2 = m[r2 + v];
       if (x2 > limit) continue;
       let fv = sorted[r1 + r];
@@ -510,9 +513,9 @@ export class CliqueCoboundaries implements CoboundaryModel {
     for (let r = ptr[2]; r < ends[2]; r++) {
       const v = order[r2 + r];
       const x0 = m[r0 + v];
-      if (x0 > limit || (x0 >= floor && x0 > bandLow)) continue;
+      if (x0 >= floor && x0 > bandLow) continue;
       const x1 = m[r1 + v];
-      if (x1 > limit || (x1 >= floor && x1 > bandLow)) continue;
+      if (x1 >= floor && x1 > bandLow) continue;
       const j = (v > s0 ? 1 : 0) + (v > s1 ? 1 : 0) + (v > s2 ? 1 : 0);
       sink.push(
         sorted[r2 + r],

@@ -13,6 +13,9 @@
  * A simplex that opens an apparent pair is positive, so it is never a cleared column: the counter is the
  * number of apparent pairs, whatever else the reduction skips. The cliques are listed here by brute force
  * over vertex subsets, independently of the code under test.
+ *
+ * The same brute-force pairs also bound the `columnAdditions` counter from below (see additionLowerBound):
+ * its exact value depends on the order of additions, but a column whose pivot must move needs at least one.
  */
 import { computeBarcode, fromEdgeList } from "@cliquescape/core";
 import { describe, expect, it } from "vitest";
@@ -135,31 +138,59 @@ function emergentPairs(
   return counts;
 }
 
+/** G(n, density) with integer weights in 1..levels (seeded): its weight matrix and its edge list. */
+function sampleGraph(seed: number, n = 11, density = 0.75, levels = 4) {
+  const random = seededRandom(seed);
+  const w: number[][] = Array.from({ length: n }, () => new Array<number>(n).fill(Infinity));
+  const edges = {
+    n,
+    directed: false,
+    sources: [] as number[],
+    targets: [] as number[],
+    weights: [] as number[],
+  };
+  for (let u = 0; u < n; u++) {
+    for (let v = u + 1; v < n; v++) {
+      if (random() >= density) continue;
+      const weight = 1 + Math.floor(random() * levels);
+      w[u][v] = weight;
+      w[v][u] = weight;
+      edges.sources.push(u);
+      edges.targets.push(v);
+      edges.weights.push(weight);
+    }
+  }
+  return { n, w, edges };
+}
+
+/**
+ * A lower bound on the column additions of dimension d. In a matrix reduction a column's pivot changes
+ * only when another column is added to it (H. Edelsbrunner and J. Harer, Computational Topology, 2010,
+ * §VII.1, the reduction algorithm). Reduced as coboundaries (the persistence pairs are the same:
+ * V. de Silva, D. Morozov, M. Vejdemo-Johansson, "Dualities in persistent (co)homology", Inverse Problems 27,
+ * 2011), the column of a positive d-simplex σ starts with its earliest coface as pivot and ends with σ's
+ * partner as pivot, or empty when σ never dies. So every positive σ that has a coface and whose partner is
+ * not its earliest coface costs at least one addition; negative simplices' columns are cleared.
+ */
+function additionLowerBound(bySize: Simplex[][], n: number, d: number): number {
+  const partners = persistencePartners(bySize, n);
+  let count = 0;
+  for (const sigma of bySize[d + 1]) {
+    const partner = partners.get(`${sigma.vertices}`);
+    if (partner !== undefined && partner.vertices.length === d) continue; // negative: kills a (d-1)-class
+    const cofaces = bySize[d + 2].filter((t) => isFace(sigma.vertices, t.vertices));
+    if (cofaces.length === 0) continue;
+    const earliest = cofaces.reduce((a, b) => (before(b, a) ? b : a));
+    if (partner !== earliest) count++;
+  }
+  return count;
+}
+
 describe("apparent and emergent pairs against their definitions, by brute force", () => {
   for (const seed of [701, 702, 703, 704]) {
     it(`G(11, 0.75) with weights in 1..4, seed ${seed}: counters and zero-length bars, both layouts`, () => {
-      const random = seededRandom(seed);
-      const n = 11;
+      const { n, w, edges } = sampleGraph(seed);
       const maxDim = 2;
-      const w: number[][] = Array.from({ length: n }, () => new Array<number>(n).fill(Infinity));
-      const edges = {
-        n,
-        directed: false,
-        sources: [] as number[],
-        targets: [] as number[],
-        weights: [] as number[],
-      };
-      for (let u = 0; u < n; u++) {
-        for (let v = u + 1; v < n; v++) {
-          if (random() >= 0.75) continue;
-          const weight = 1 + Math.floor(random() * 4);
-          w[u][v] = weight;
-          w[v][u] = weight;
-          edges.sources.push(u);
-          edges.targets.push(v);
-          edges.weights.push(weight);
-        }
-      }
       const bySize = cliques(n, w, maxDim + 2);
       const expected = apparentPairs(bySize, maxDim);
       const emergent = emergentPairs(bySize, n, maxDim, expected);
@@ -194,6 +225,40 @@ describe("apparent and emergent pairs against their definitions, by brute force"
       expect(expected.get(2)?.length).toBeGreaterThan(0);
       expect(total).toBeGreaterThan(0);
       expect(emergent.get(2)).toBeGreaterThan(0);
+    });
+  }
+});
+
+describe("column additions against a lower bound from the reduction's definition", () => {
+  // With few weight levels many pivots move by the apparent-pair shortcut; with distinct weights (1..1000)
+  // most move by adding a finished column.
+  const samples = [
+    ...[701, 702, 703, 704].map((seed) => ({ seed, n: 11, density: 0.75, levels: 4 })),
+    ...[1, 2, 3].map((seed) => ({ seed, n: 14, density: 0.7, levels: 1000 })),
+  ];
+  for (const { seed, n, density, levels } of samples) {
+    it(`G(${n}, ${density}) with weights in 1..${levels}, seed ${seed}: at least one addition per column whose pivot moves`, () => {
+      const { w, edges } = sampleGraph(seed, n, density, levels);
+      const maxDim = 2;
+      const bySize = cliques(n, w, maxDim + 2);
+      const bounds = [1, 2].map((d) => additionLowerBound(bySize, n, d));
+      // The sample has such columns in both dimensions, so the bound is not vacuous.
+      expect(bounds[0]).toBeGreaterThan(0);
+      expect(bounds[1]).toBeGreaterThan(0);
+      for (const cliqueLayout of ["dense", "sparse"] as const) {
+        const barcode = computeBarcode(fromEdgeList(edges), {
+          semantics: "distance",
+          maxDim,
+          prime: 2,
+          cliqueLayout,
+        });
+        for (const d of [1, 2]) {
+          expect(
+            barcode.stats.columnAdditions[d],
+            `additions of dimension ${d}, ${cliqueLayout}`,
+          ).toBeGreaterThanOrEqual(bounds[d - 1]);
+        }
+      }
     });
   }
 });

@@ -124,6 +124,23 @@ describe("barcode against direct ranks on larger complete graphs", () => {
   }
 });
 
+/** G(n, density) with integer weights 1–1000 drawn from a seeded generator: long filtrations with few ties. */
+function longFiltrationGraph(n: number, density: number, seed: number): WeightedGraph {
+  const random = seededRandom(seed);
+  const sources: number[] = [];
+  const targets: number[] = [];
+  const weights: number[] = [];
+  for (let u = 0; u < n; u++) {
+    for (let v = u + 1; v < n; v++) {
+      if (random() >= density) continue;
+      sources.push(u);
+      targets.push(v);
+      weights.push(1 + Math.floor(random() * 1000));
+    }
+  }
+  return fromEdgeList({ n, sources, targets, weights, directed: false });
+}
+
 describe("a long filtration, where columns keep sorted entries and the coface horizon widens", () => {
   // G(26, 0.7) with integer distances 1–1000 (seeded): long enough for dimension-2 columns to keep their
   // reduced entries and be read back while the horizon widens — paths that no other test here reaches and
@@ -133,20 +150,8 @@ describe("a long filtration, where columns keep sorted entries and the coface ho
     // G(34, 0.8), integer similarities 1–1000 (seeded): a column that had read a stored column to its end
     // must push that column's next band when the horizon widens; skipping it gave wrong β2 between 306 and
     // 442 (found by replaying mutants on random graphs). Four levels of that range, against direct ranks.
-    const n = 34;
-    const random = seededRandom(804);
-    const sources: number[] = [];
-    const targets: number[] = [];
-    const weights: number[] = [];
-    for (let u = 0; u < n; u++) {
-      for (let v = u + 1; v < n; v++) {
-        if (random() >= 0.8) continue;
-        sources.push(u);
-        targets.push(v);
-        weights.push(1 + Math.floor(random() * 1000));
-      }
-    }
-    const graph = fromEdgeList({ n, sources, targets, weights, directed: false });
+    const graph = longFiltrationGraph(34, 0.8, 804);
+    const weights = [...graph.weights];
     const barcode = computeBarcode(graph, {
       semantics: "similarity",
       maxDim: 2,
@@ -164,20 +169,8 @@ describe("a long filtration, where columns keep sorted entries and the coface ho
   });
 
   it("Betti numbers at each level between 740 and 820 equal the ranks' (Z/2, Z/3)", () => {
-    const n = 26;
-    const random = seededRandom(800);
-    const sources: number[] = [];
-    const targets: number[] = [];
-    const weights: number[] = [];
-    for (let u = 0; u < n; u++) {
-      for (let v = u + 1; v < n; v++) {
-        if (random() >= 0.7) continue;
-        sources.push(u);
-        targets.push(v);
-        weights.push(1 + Math.floor(random() * 1000));
-      }
-    }
-    const graph = fromEdgeList({ n, sources, targets, weights, directed: false });
+    const graph = longFiltrationGraph(26, 0.7, 800);
+    const weights = [...graph.weights];
     const levels = [...new Set(weights)].filter((w) => w >= 740 && w <= 820).sort((a, b) => a - b);
     expect(levels.length).toBeGreaterThan(5);
     for (const prime of [2, 3]) {
@@ -190,4 +183,51 @@ describe("a long filtration, where columns keep sorted entries and the coface ho
       }
     }
   });
+});
+
+describe("long filtrations found by replaying changes of the reduction on random graphs", () => {
+  /**
+   * Betti numbers read off the barcode against direct ranks (`bettiAt`; the fundamental lemma of persistent
+   * homology: β_k at a level is the number of bars alive there) at `count` levels evenly spread over the
+   * distinct weights in [from, to]. The graphs and ranges are where a changed reduction went wrong.
+   */
+  function checkLevels(
+    graph: WeightedGraph,
+    semantics: "distance" | "similarity",
+    maxDim: number,
+    range: [number, number],
+  ) {
+    const barcode = computeBarcode(graph, { semantics, maxDim, prime: 2, timeLimitMs: 20_000 });
+    const inRange = [...new Set(graph.weights)]
+      .filter((w) => w >= range[0] && w <= range[1])
+      .sort((a, b) => a - b);
+    expect(inRange.length).toBeGreaterThanOrEqual(4);
+    const levels = [0, 1, 2, 3].map((k) => inRange[Math.floor((k * (inRange.length - 1)) / 3)]);
+    for (const threshold of levels) {
+      expect(bettiFromBarcode(barcode, threshold), `Betti numbers at ${threshold}`).toEqual(
+        bettiAt(graph, { threshold, semantics, maxDim, prime: 2 }),
+      );
+    }
+    return barcode;
+  }
+
+  it("a column whose first coface window ends exactly at the last value (G(36, 0.85), similarities)", () => {
+    // Some dimension-2 column has exactly 64 columns to reduce after it, so its first window of cofaces
+    // reaches past the last value: the horizon must then be +∞. Read as "the value after the last" it was
+    // undefined, a later widening pushed whole coboundaries again, and β2 was wrong from 1 to 644.
+    checkLevels(longFiltrationGraph(36, 0.85, 3), "similarity", 2, [560, 644]);
+  });
+
+  for (const seed of [3, 4]) {
+    it(`edges whose columns add more than 64 stored columns (G(200, 0.2), seed ${seed}, distances)`, () => {
+      // 200 vertices, dimension 1 only: over 200 edge columns keep their reduced entries, and single columns
+      // add more than 64 of them, so the list of stored columns added to one column must grow. Without the
+      // growth (or grown to half) β1 went wrong between 610 and 675, as it did when a column without stored
+      // entries was read as one, when the values bounding the coface windows were left unsorted (seed 3),
+      // or when a widened window was pushed from the lower of a stored column's cover and the old horizon
+      // (seed 4).
+      const barcode = checkLevels(longFiltrationGraph(200, 0.2, seed), "distance", 1, [610, 635]);
+      expect(barcode.stats.storedColumns[1]).toBeGreaterThan(64);
+    });
+  }
 });

@@ -218,6 +218,12 @@ describe("long filtrations found by replaying changes of the reduction on random
     checkLevels(longFiltrationGraph(36, 0.85, 3), "similarity", 2, [560, 644]);
   });
 
+  it("a column whose widened coface window ends exactly at the last value (G(45, 0.67), similarities)", () => {
+    // The same boundary when the window doubles: read as "the value after the last", the horizon was
+    // undefined and β2 was wrong between 338 and 382.
+    checkLevels(longFiltrationGraph(45, 0.67, 20), "similarity", 2, [338, 382]);
+  });
+
   for (const seed of [3, 4]) {
     it(`edges whose columns add more than 64 stored columns (G(200, 0.2), seed ${seed}, distances)`, () => {
       // 200 vertices, dimension 1 only: over 200 edge columns keep their reduced entries, and single columns

@@ -1,4 +1,5 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
+import { seededRandom } from "../../../../test/support/random.js";
 import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
@@ -84,7 +85,8 @@ describe("reduceDimension's progress", () => {
     vi.restoreAllMocks();
   });
 
-  it("reports columns done between 0 and the column count, never going back", () => {
+  /** Progress reports of "reducing columns" while computing the barcode, with a clock that reports at every check. */
+  function reductionProgress(graph: WeightedGraph, maxDim: number): WorkProgress[] {
     // A clock that moves 1.1 s per reading, so that every check reports (the default interval is 1 s).
     let clock = 0;
     vi.spyOn(Date, "now").mockImplementation(() => {
@@ -92,20 +94,50 @@ describe("reduceDimension's progress", () => {
       return clock;
     });
     const seen: WorkProgress[] = [];
+    computeBarcode(graph, { semantics: "distance", maxDim, onProgress: (p) => seen.push(p) });
+    return seen.filter((p) => p.stage === "reducing columns");
+  }
+
+  function expectMonotoneWithinTotal(reports: WorkProgress[]) {
+    for (let i = 0; i < reports.length; i++) {
+      expect(reports[i].done).toBeGreaterThanOrEqual(i === 0 ? 0 : reports[i - 1].done);
+      expect(reports[i].done).toBeLessThanOrEqual(reports[i].total);
+    }
+  }
+
+  it("reports columns done between 0 and the column count, never going back", () => {
     // K_31: 465 edge columns and 4,495 triangle columns (C(31, 3)), more than one 4,096-column stride.
-    computeBarcode(completeGraph(31, 9), {
-      semantics: "distance",
-      maxDim: 2,
-      onProgress: (p) => seen.push(p),
-    });
+    const seen = reductionProgress(completeGraph(31, 9), 2);
     for (const dim of [1, 2]) {
-      const reports = seen.filter((p) => p.stage === "reducing columns" && p.dim === dim);
+      const reports = seen.filter((p) => p.dim === dim);
       expect(reports.length).toBeGreaterThan(2);
       expect(reports[0].total).toBe(dim === 1 ? 465 : 4495);
-      for (let i = 0; i < reports.length; i++) {
-        expect(reports[i].done).toBeGreaterThanOrEqual(i === 0 ? 0 : reports[i - 1].done);
-        expect(reports[i].done).toBeLessThanOrEqual(reports[i].total);
+      expectMonotoneWithinTotal(reports);
+    }
+  });
+
+  it("also when many of the columns past 4,096 need work (G(100, 0.85), edges)", () => {
+    // Over 4,096 edge columns, hundreds of them reduced: a report made while the columns are being chosen
+    // must count only those settled so far, or it passes the total.
+    const random = seededRandom(1);
+    const sources: number[] = [];
+    const targets: number[] = [];
+    const weights: number[] = [];
+    for (let u = 0; u < 100; u++) {
+      for (let v = u + 1; v < 100; v++) {
+        if (random() >= 0.85) continue;
+        sources.push(u);
+        targets.push(v);
+        weights.push(1 + Math.floor(random() * 1000));
       }
     }
+    const reports = reductionProgress(
+      fromEdgeList({ n: 100, sources, targets, weights, directed: false }),
+      1,
+    );
+    expect(reports.length).toBeGreaterThan(2);
+    expect(reports[0].total).toBe(sources.length);
+    expect(sources.length).toBeGreaterThan(4096);
+    expectMonotoneWithinTotal(reports);
   });
 });

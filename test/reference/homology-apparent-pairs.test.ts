@@ -165,10 +165,9 @@ function sampleGraph(seed: number, n = 11, density = 0.75, levels = 4) {
 
 /**
  * A lower bound on the column additions of dimension d. In a matrix reduction a column's pivot changes
- * only when another column is added to it (H. Edelsbrunner and J. Harer, Computational Topology, 2010,
- * §VII.1, the reduction algorithm). Reduced as coboundaries (the persistence pairs are the same:
- * V. de Silva, D. Morozov, M. Vejdemo-Johansson, "Dualities in persistent (co)homology", Inverse Problems 27,
- * 2011), the column of a positive d-simplex σ starts with its earliest coface as pivot and ends with σ's
+ * only when another column is added to it (the reduction algorithm of the textbook Computational Topology:
+ * An Introduction, AMS, 2010, §VII.1). Reduced as coboundaries (the persistence pairs are the same:
+ * "Dualities in persistent (co)homology", Inverse Problems 27, 2011), the column of a positive d-simplex σ starts with its earliest coface as pivot and ends with σ's
  * partner as pivot, or empty when σ never dies. So every positive σ that has a coface and whose partner is
  * not its earliest coface costs at least one addition; negative simplices' columns are cleared.
  */

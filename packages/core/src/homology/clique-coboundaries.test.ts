@@ -121,6 +121,17 @@ function neighbourSimplex(c: Case, s: number[], random: () => number): { s: numb
   return null;
 }
 
+/** The value of a random edge {s_i, v} with f < value < horizon, or 0 if there is none (values are ≥ 1). */
+function rowValueAbove(c: Case, s: number[], f: number, horizon: number, random: () => number): number {
+  const values: number[] = [];
+  for (const u of s)
+    for (let v = 0; v < c.graph.n; v++) {
+      const x = c.value(u, v);
+      if (x > f && x < horizon) values.push(x);
+    }
+  return values.length === 0 ? 0 : values[Math.floor(random() * values.length)];
+}
+
 function keyOf(s: number[]): number {
   return s.reduce((sum, x, i) => sum + binomial(x, i + 1), 0);
 }
@@ -135,7 +146,7 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
     for (let g = 0; g < 24; g++) {
       const n = 20 + Math.floor(random() * 121);
       const p = g % 3 === 0 ? 1 : 0.6 + 0.4 * random();
-      const levels = g % 4 === 0 ? 12 : 5000;
+      const levels = [12, 40, 5000, 5000][g % 4];
       const c = randomCase(n, p, levels, random);
       const edgeF = edgeFiltration(c.graph, "distance");
       const models = layouts.map(
@@ -152,7 +163,7 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
       );
       let band = { floor: Number.NEGATIVE_INFINITY, bandLow: Number.NEGATIVE_INFINITY, horizon: Infinity };
       let previous: number[] = [];
-      for (let t = 0; t < 90; t++) {
+      for (let t = 0; t < 150; t++) {
         const count = 2 + (Math.floor(t / 3) % 3); // edges, triangles, tetrahedra
         // Three simplices in a row share the band and, where possible, all but one vertex: a working
         // column pushes many chain simplices with one band, and the dense sweeps cache per vertex.
@@ -168,11 +179,18 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
           const spread = levels + 1;
           const above = f + random() * (spread - f);
           band = { floor: Number.NEGATIVE_INFINITY, bandLow: Number.NEGATIVE_INFINITY, horizon: Infinity };
-          const kind = Math.floor(t / 9) % 5;
+          const kind = Math.floor(random() * 5);
           if (kind >= 1)
             band.horizon = random() < 0.2 ? Infinity : Math.ceil(above + random() * spread * 0.3);
-          if (kind === 2) band.floor = Math.floor(f + random() * (band.horizon - f));
-          if (kind === 3) band.bandLow = Math.floor(f + random() * (Math.min(band.horizon, spread) - f));
+          // Half the floors and old horizons sit exactly on an edge value of σ's rows: ties at the band's
+          // ends are where ≥ and > differ.
+          const edgeAbove = () => rowValueAbove(c, s, f, band.horizon, random);
+          if (kind === 2)
+            band.floor = (random() < 0.5 && edgeAbove()) || Math.floor(f + random() * (band.horizon - f));
+          if (kind === 3)
+            band.bandLow =
+              (random() < 0.5 && edgeAbove()) ||
+              Math.floor(f + random() * (Math.min(band.horizon, spread) - f));
           if (kind === 4) band.floor = f; // at σ's own value: entries of value f are kept
         }
         if (band.horizon !== Infinity) taken.finiteHorizon++;

@@ -49,7 +49,7 @@ describe("ChainBuilder", () => {
     // are 2 apart, so that chain must take the comparison sort (keys and coefficients kept together).
     const chain = new ChainBuilder(new ByteLedger(undefined), 4);
     const keys = [5, 2 ** 51, 2 ** 51 - 1, 7]; // 2^51 at position 1: 2^53 + 1 is not a double
-    keys.forEach((key, i) => chain.push(key, i, i + 1));
+    for (const [i, key] of keys.entries()) chain.push(key, i, i + 1);
     chain.compact(11);
     expect(Array.from(chain.key.subarray(0, 4))).toEqual([5, 7, 2 ** 51 - 1, 2 ** 51]);
     expect(Array.from(chain.f.subarray(0, 4))).toEqual([0, 3, 2, 1]);

@@ -48,7 +48,8 @@ function randomEntries(next: () => number, count: number, keys: number, p: numbe
 
 function stored(out: ReducedEntries, from: number, to: number): Entry[] {
   const list: Entry[] = [];
-  for (let i = from; i < to; i++) list.push({ f: out.entryF[i], key: out.entryKey[i], coef: out.entryCoef[i] });
+  for (let i = from; i < to; i++)
+    list.push({ f: out.entryF[i], key: out.entryKey[i], coef: out.entryCoef[i] });
   return list;
 }
 

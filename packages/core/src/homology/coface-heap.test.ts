@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { CofaceHeap } from "./coface-heap.js";
-import { ByteLedger } from "./homology-budget.js";
+import { ByteLedger, HomologyBudgetError } from "./homology-budget.js";
 
 describe("CofaceHeap", () => {
   it("pops entries in (f, key) order, like a sorted array (common practice)", () => {
@@ -28,5 +28,58 @@ describe("CofaceHeap", () => {
     heap.push(1, 5, 2);
     expect(heap.popMerged()).toBe(3);
     expect([heap.f[0], heap.key[0], heap.size]).toEqual([2, 9, 1]);
+  });
+
+  it("moves each coefficient with its entry", () => {
+    const heap = new CofaceHeap(new ByteLedger(undefined), 2);
+    const entries: [number, number, number][] = [];
+    let x = 11;
+    for (let key = 0; key < 300; key++) {
+      x = (x * 48271) % 2147483647;
+      entries.push([x % 17, key, x % 1000]);
+    }
+    for (const [f, k, c] of entries) heap.push(f, k, c);
+    entries.sort((a, b) => a[0] - b[0] || a[1] - b[1]);
+    const popped: [number, number, number][] = [];
+    while (heap.size > 0) {
+      popped.push([heap.f[0], heap.key[0], heap.coef[0]]);
+      heap.pop();
+    }
+    expect(popped).toEqual(entries);
+  });
+
+  it("stops merging when the heap runs empty", () => {
+    const heap = new CofaceHeap(new ByteLedger(undefined), 2);
+    heap.push(1, 5, 1);
+    heap.push(1, 5, 2);
+    heap.push(1, 5, 4);
+    expect(heap.popMerged()).toBe(7);
+    expect(heap.size).toBe(0);
+    heap.push(3, 5, 1);
+    expect(heap.popMerged()).toBe(1);
+    expect(heap.size).toBe(0);
+  });
+
+  it("holds 20 bytes per entry of capacity in the ledger, grows through it, and gives them back", () => {
+    const ledger = new ByteLedger(undefined);
+    const heap = new CofaceHeap(ledger, 4);
+    expect(ledger.held).toBe(4 * 20);
+    for (let i = 0; i < 4; i++) heap.push(i, i, 1);
+    expect(heap.f.length).toBe(4);
+    heap.push(9, 9, 1);
+    expect([heap.f.length, heap.key.length, heap.coef.length]).toEqual([8, 8, 8]);
+    expect(ledger.held).toBe(8 * 20);
+    heap.dispose();
+    expect(ledger.held).toBe(0);
+    let error: unknown;
+    try {
+      const small = new CofaceHeap(new ByteLedger({ maxBytes: 100 }), 4);
+      for (let i = 0; i < 5; i++) small.push(i, i, 1);
+    } catch (e) {
+      error = e;
+    }
+    expect(error).toBeInstanceOf(HomologyBudgetError);
+    expect((error as HomologyBudgetError).stage).toBe("growing the working column");
+    expect(() => new CofaceHeap(new ByteLedger({ maxBytes: 79 }), 4)).toThrow(/growing the working column/);
   });
 });

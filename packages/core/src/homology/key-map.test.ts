@@ -25,4 +25,36 @@ describe("KeyMap", () => {
       for (let i = 0; i < 100_000; i++) map.set(i, i);
     }).toThrow(HomologyBudgetError);
   });
+
+  it("holds its table in the ledger, at most half full, and gives every byte back", () => {
+    // 12 bytes per slot (f64 key, i32 value); open addressing keeps at least half of the slots empty.
+    const ledger = new ByteLedger(undefined);
+    const map = new KeyMap(ledger, "test", 4);
+    for (let i = 0; i < 3000; i++) {
+      map.set(i * 7919, i);
+      const slots = ledger.held / 12;
+      expect(Number.isInteger(Math.log2(slots))).toBe(true);
+      expect(slots).toBeGreaterThanOrEqual(2 * map.size);
+    }
+    expect(ledger.held).toBeLessThanOrEqual(12 * 4 * 3000);
+    map.dispose();
+    expect(ledger.held).toBe(0);
+  });
+
+  it("overwrites the value of a key set twice, and names the stage a budget error came from", () => {
+    const map = new KeyMap(new ByteLedger(undefined), "test", 4);
+    map.set(2 ** 40 + 3, 1);
+    map.set(2 ** 40 + 3, 9);
+    expect(map.size).toBe(1);
+    expect(map.get(2 ** 40 + 3)).toBe(9);
+    expect(map.has(2 ** 40 + 3)).toBe(true);
+    const small = new KeyMap(new ByteLedger({ maxBytes: 1000 }), "recording pivots", 4);
+    let error: unknown;
+    try {
+      for (let i = 0; i < 100; i++) small.set(i, i);
+    } catch (e) {
+      error = e;
+    }
+    expect((error as HomologyBudgetError).stage).toBe("recording pivots");
+  });
 });

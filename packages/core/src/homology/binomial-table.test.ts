@@ -75,4 +75,33 @@ describe("binomialTable", () => {
   it("refuses tables whose indices would not be exact", () => {
     expect(() => binomialTable(200000, 5)).toThrow(/2\^53/);
   });
+
+  it("holds C(v, k) = v! / (k! (v − k)!) for every v ≤ n and k ≤ maxK, 0 for k > v (the definition)", () => {
+    const n = 40;
+    const maxK = 7;
+    const t = binomialTable(n, maxK);
+    const exact = (v: number, k: number): bigint => {
+      if (k > v) return 0n;
+      let c = 1n;
+      for (let i = 0; i < k; i++) c = (c * BigInt(v - i)) / BigInt(i + 1);
+      return c;
+    };
+    for (let k = 0; k <= maxK; k++)
+      for (let v = 0; v <= n; v++) expect(BigInt(binomial(t, v, k))).toBe(exact(v, k));
+  });
+
+  it("decodes the largest and the smallest index of each size among many vertices", () => {
+    const n = 60;
+    const t = binomialTable(n, 5);
+    const out = new Int32Array(5);
+    for (let k = 1; k <= 5; k++) {
+      const top = Array.from({ length: k }, (_, i) => n - k + i); // the last k vertices
+      const key = encodeSimplex(t, top, k);
+      expect(key).toBe(binomial(t, n, k) - 1);
+      decodeSimplex(t, key, k, out);
+      expect(Array.from(out.subarray(0, k))).toEqual(top);
+      decodeSimplex(t, 0, k, out);
+      expect(Array.from(out.subarray(0, k))).toEqual(Array.from({ length: k }, (_, i) => i));
+    }
+  });
 });

@@ -14,8 +14,15 @@ describe("primeField", () => {
     expect(() => primeField(1)).toThrow(RangeError);
     expect(() => primeField(2.5)).toThrow(RangeError);
     expect(() => primeField(65537)).toThrow(RangeError);
+    expect(() => primeField(4)).toThrow("coefficients need a prime p with 2 ≤ p ≤ 65521, got 4");
     expect(isPrime(97)).toBe(true);
     expect(isPrime(91)).toBe(false);
+    // Against trial division by every smaller number (the definition), squares of primes included.
+    for (let n = -2; n < 200; n++) {
+      let divisors = 0;
+      for (let d = 2; d < n; d++) if (n % d === 0) divisors++;
+      expect(isPrime(n)).toBe(n >= 2 && divisors === 0);
+    }
   });
 
   it("reduces negatives into 0 .. p-1", () => {

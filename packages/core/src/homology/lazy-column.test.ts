@@ -314,6 +314,36 @@ describe("LazyColumn", () => {
     expect(out.used).toBe(0);
     expect(column.drainInto(out, 0, 2)).toBe(9); // the next value is the cover itself: it goes on
     expect(stored(out, 0, out.used)).toEqual([{ f: 2, key: 1, coef: 1 }]);
+    column.push(9, 3, 1); // at the horizon: not complete until drained
+    expect(column.drainInto(out, 0, 1)).toBe(1);
+    expect(column.size).toBe(1);
+  });
+
+  it("forgets its cursors on reset, and numbers the next ones from 0 again", () => {
+    const store = new ReducedEntries(new ByteLedger(undefined));
+    storeColumn(
+      store,
+      0,
+      [
+        { f: 1, key: 1, coef: 1 },
+        { f: 2, key: 2, coef: 1 },
+      ],
+      Number.POSITIVE_INFINITY,
+    );
+    const exhausted: number[] = [];
+    const column = newColumn(2);
+    column.attach(store, (cursor) => exhausted.push(cursor));
+    column.addStored(0, 2, 1);
+    column.addStored(0, 2, 1);
+    column.addStored(0, 1, 1);
+    expect(column.settle()).toBe(true); // key 1 three times: 1 (mod 2); two cursors are left at key 2
+    column.reset(3);
+    expect(column.settle()).toBe(false);
+    exhausted.length = 0;
+    column.addStored(1, 2, 1);
+    expect(column.settle()).toBe(true);
+    expect([column.pivotF, column.pivotKey]).toEqual([2, 2]);
+    expect(exhausted).toEqual([0]);
   });
 
   it("stops with the entries of complete values when the store runs out of room", () => {

@@ -1,0 +1,111 @@
+import { describe, expect, it } from "vitest";
+import { explicitGrid } from "../filtration/threshold-grid.js";
+import type { WeightSemantics } from "../filtration/weight-semantics.js";
+import type { Bar, Barcode } from "./barcode.js";
+import { bettiCurves, bettiFromBarcode } from "./betti-curves.js";
+
+// Barcodes written by hand, and their Betti numbers worked by hand from the definition the module states:
+// β_k(t) counts the bars of dimension k with birth ≤ t < death in filtration order; before the filtration
+// starts, the n vertices stand alone.
+
+function bar(dim: number, birth: number, death: number | null): Bar {
+  return { dim, birth, death, birthSimplex: [0], deathSimplex: death === null ? null : [0, 1] };
+}
+
+function barcode(bars: Bar[], semantics: WeightSemantics, start: number, n: number, maxDim: number): Barcode {
+  const zeros = new Array(maxDim + 1).fill(0);
+  return {
+    bars,
+    prime: 2,
+    maxDim,
+    semantics,
+    directed: false,
+    start,
+    keepZeroLength: false,
+    stats: {
+      simplices: [n, ...zeros.slice(1)],
+      clearedColumns: zeros,
+      apparentPairs: zeros,
+      emergentPairs: zeros,
+      columnsReduced: zeros,
+      columnAdditions: zeros,
+      storedColumns: zeros,
+      peakBytes: 0,
+      representation: "clique-sparse",
+    },
+  };
+}
+
+describe("bettiFromBarcode and bettiCurves", () => {
+  // Four vertices born at 0; components die at 1, 2, 2; one essential. Loops [2, 3), [2, 5), [3, ∞).
+  const distance = barcode(
+    [bar(0, 0, 1), bar(0, 0, 2), bar(0, 0, 2), bar(0, 0, null), bar(1, 2, 3), bar(1, 2, 5), bar(1, 3, null)],
+    "distance",
+    0,
+    4,
+    1,
+  );
+  const worked: [number, number[]][] = [
+    [-1, [4, 0]], // before the start: four lone vertices
+    [0, [4, 0]],
+    [0.5, [4, 0]],
+    [1, [3, 0]], // a death counts at its own value
+    [2, [1, 2]],
+    [2.5, [1, 2]],
+    [3, [1, 2]], // [2, 3) has ended, [3, ∞) has begun
+    [4.99, [1, 2]],
+    [5, [1, 1]],
+    [100, [1, 1]],
+  ];
+
+  it("read at one threshold, by the definition (worked by hand)", () => {
+    for (const [t, betti] of worked) expect(bettiFromBarcode(distance, t)).toEqual(betti);
+  });
+
+  it("on a grid, the same numbers at every grid value", () => {
+    const curves = bettiCurves(
+      distance,
+      explicitGrid(
+        worked.map(([t]) => t),
+        "distance",
+      ),
+    );
+    expect(curves.map((row) => Array.from(row))).toEqual(worked.map(([, betti]) => betti));
+  });
+
+  it("with similarity weights, where thresholds go down", () => {
+    // The same barcode in similarity units: weight = −distance value, start 0, so thresholds run 1 … −100.
+    const similarity = barcode(
+      distance.bars.map((b) => bar(b.dim, -b.birth, b.death === null ? null : -b.death)),
+      "similarity",
+      0,
+      4,
+      1,
+    );
+    for (const [t, betti] of worked) expect(bettiFromBarcode(similarity, -t)).toEqual(betti);
+    const curves = bettiCurves(
+      similarity,
+      explicitGrid(
+        worked.map(([t]) => -t),
+        "similarity",
+      ),
+    );
+    expect(curves.map((row) => Array.from(row))).toEqual(worked.map(([, betti]) => betti));
+  });
+
+  it("at the start itself, where edges of the start value have already joined vertices", () => {
+    // Three vertices; an edge at the start value 0 (its zero-length bar not kept) and one at 2.
+    const joined = barcode([bar(0, 0, 2), bar(0, 0, null)], "distance", 0, 3, 0);
+    expect(bettiFromBarcode(joined, -0.5)).toEqual([3]);
+    expect(bettiFromBarcode(joined, 0)).toEqual([2]);
+    expect(bettiFromBarcode(joined, 2)).toEqual([1]);
+    const curves = bettiCurves(joined, explicitGrid([-0.5, 0, 2], "distance"));
+    expect(curves.map((row) => Array.from(row))).toEqual([[3], [2], [1]]);
+  });
+
+  it("refuses a grid in other units than the barcode's", () => {
+    expect(() => bettiCurves(distance, explicitGrid([1], "similarity"))).toThrow(
+      'grid semantics "similarity" differ from the barcode\'s "distance"',
+    );
+  });
+});

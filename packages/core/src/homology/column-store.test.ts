@@ -79,6 +79,9 @@ describe("ColumnStore", () => {
     }
     expect(error).toBeInstanceOf(HomologyBudgetError);
     expect((error as HomologyBudgetError).stage).toBe("storing reduced columns");
+    expect(() => new ColumnStore(new ByteLedger({ maxBytes: 256 * 12 + 1024 * 20 - 1 }))).toThrow(
+      /storing reduced columns/,
+    );
     expect(() => {
       for (let c = 0; c < 300; c++) store.open(1);
     }).toThrow(/storing reduced columns/);

@@ -254,6 +254,23 @@ describe("LazyColumn", () => {
     ]);
   });
 
+  it("is zero when the stored columns added cancel, and stops at a cap before the cursors' next value", () => {
+    const store = new ReducedEntries(new ByteLedger(undefined));
+    const own = [1, 2, 3].map((f) => ({ f, key: f, coef: 1 }));
+    storeColumn(store, 0, own, Number.POSITIVE_INFINITY);
+    const column = newColumn(3);
+    column.attach(store, () => {});
+    column.addStored(0, 3, 1);
+    column.addStored(0, 3, 2); // 1 + 2 ≡ 0 (mod 3) for every entry
+    expect(column.settle()).toBe(false);
+    column.reset(3);
+    column.addStored(0, 3, 1);
+    const from = store.used;
+    // The heap is empty, a cursor is left at f = 2: the entries are complete up to 1 only.
+    expect(column.drainInto(store, 1, Number.NEGATIVE_INFINITY)).toBe(1);
+    expect(stored(store, from, store.used)).toEqual([{ f: 1, key: 1, coef: 1 }]);
+  });
+
   it("reads stored entries only up to the horizon", () => {
     const store = new ReducedEntries(new ByteLedger(undefined));
     const own = [1, 2, 3, 4, 5, 6].map((f) => ({ f, key: 10 - f, coef: 1 }));

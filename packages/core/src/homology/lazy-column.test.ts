@@ -171,6 +171,14 @@ describe("LazyColumn", () => {
     ]);
   });
 
+  it("gives its heap's bytes back to the ledger on dispose", () => {
+    const ledger = new ByteLedger(undefined);
+    const column = new LazyColumn(ledger, 4);
+    expect(ledger.held).toBe(4 * 20); // 20 bytes per heap entry (f64 f, f64 key, i32 coefficient)
+    column.dispose();
+    expect(ledger.held).toBe(0);
+  });
+
   it("records the largest heap size seen when settling", () => {
     const column = newColumn(2);
     for (let k = 0; k < 9; k++) column.push(k, k, 1);

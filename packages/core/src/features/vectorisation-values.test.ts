@@ -121,4 +121,62 @@ describe("vectorisation families on the weighted square", () => {
       [0, 1].flatMap((k) => weights.values.map((w) => `pcurve_entropy_d${k}_w${w}`)),
     );
   });
+
+  it("each family alone gives its own columns only, with the values it has among all four", () => {
+    const names = topologicalFeatureNames(vectorised, weights);
+    const { values } = topologicalFeatures(weightedSquare(), {
+      config: vectorised,
+      axis: weights,
+      semantics: "distance",
+    });
+    const off = { landscapes: false, images: false, entropy: false, persistenceCurves: false };
+    for (const family of ["landscapes", "images", "entropy", "persistenceCurves"] as const) {
+      const config = { ...vectorised, families: { ...vectorised.families, ...off, [family]: true } };
+      const own = topologicalFeatureNames(config, weights);
+      expect(own.length, family).toBeGreaterThan(0);
+      // row() checks that the values are exactly as many as the names.
+      const get = row(config, weights);
+      for (const name of own) expect(get(name), name).toBe(values[names.indexOf(name)]);
+    }
+  });
+
+  it("entropy reads lengths death − birth, also when bars are born away from the axis start", () => {
+    // Mirrored square as similarities on the axis 6 … 0 (positions 6 − w): vertices are born at weight 5
+    // (position 1); H0 bars [1, 2) and [1, 3) in positions (the one dying at 5 has length 0 and is not
+    // kept), the essential one cut at 6 → lengths 1, 2, 5 (worked by hand from the fixture's description).
+    const h = (lengths: number[]) => {
+      const total = lengths.reduce((s, x) => s + x, 0);
+      return -lengths.reduce((s, x) => s + (x / total) * Math.log(x / total), 0);
+    };
+    const mirroredAxis = { kind: "weight", values: weights.values.map((w) => 6 - w) } as const;
+    expect(row(vectorised, mirroredAxis, true)("entropy_d0")).toBeCloseTo(h([1, 2, 5]), 14);
+  });
+
+  it("a one-value axis has no width: every image pixel is 0", () => {
+    const config = {
+      ...vectorised,
+      families: { ...vectorised.families, landscapes: false, entropy: false, persistenceCurves: false },
+      vectorisation: { imageResolution: 3 },
+    };
+    const axis = { kind: "weight", values: [4.5] } as const;
+    const names = topologicalFeatureNames(config, axis);
+    expect(names).toHaveLength(2 * 9);
+    const get = row(config, axis);
+    for (const name of names) expect(get(name), name).toBe(0);
+  });
+
+  it("imageSigma is a fraction of the axis span: 0.25 of a span of 6 is the one-pixel default at 4 pixels", () => {
+    // Default sigma: one pixel = span / resolution = 6 / 4 = 1.5 = 0.25 · 6 (the option's documented meaning).
+    const images = { ...vectorised.families, landscapes: false, entropy: false, persistenceCurves: false };
+    const at = (sigma: number | null) =>
+      topologicalFeatures(weightedSquare(), {
+        config: { ...vectorised, families: images, vectorisation: { imageResolution: 4, imageSigma: sigma } },
+        axis: weights,
+        semantics: "distance",
+      }).values;
+    const byDefault = at(null);
+    expect(Array.from(at(0.25))).toEqual(Array.from(byDefault));
+    expect(byDefault.some((x) => x > 0)).toBe(true);
+    expect(Array.from(at(0.05))).not.toEqual(Array.from(byDefault));
+  });
 });

@@ -35,4 +35,15 @@ describe("axisLabels", () => {
   it("refuses repeated values", () => {
     expect(() => axisLabels([1, 1])).toThrow(RangeError);
   });
+
+  it("goes up to 17 digits: 0.1 and the next double above it read alike at 16", () => {
+    const next = 0.1 + 2 ** -56; // one unit in the last place of 0.1 (2^-4 · 2^-52)
+    expect(next).not.toBe(0.1);
+    expect(Number(next.toPrecision(16))).toBe(0.1); // alike at 16 significant digits
+    expect(axisLabels([0.1, next])).toEqual(["0.1", "0.10000000000000002"]);
+  });
+
+  it("says why repeated values are refused", () => {
+    expect(() => axisLabels([2, 2])).toThrow("axis values repeat, so their columns cannot be told apart");
+  });
 });

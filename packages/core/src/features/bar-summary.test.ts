@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { fromEdgeList } from "../graph/from-edge-list.js";
 import { computeBarcode } from "../homology/compute-barcode.js";
 import { persistenceEntropy, summarizeBars } from "./bar-summary.js";
 import { weightedSquare } from "./weighted-square.fixture.js";
@@ -71,5 +72,25 @@ describe("summarizeBars", () => {
       maxPersistence: 0,
       entropy: 0,
     });
+  });
+
+  it("takes the longest bar wherever it sits in the bar order, not the last one", () => {
+    // Two disjoint squares (worked by hand: a 4-cycle's loop is born when its fourth side enters and dies
+    // when a diagonal fills it in): sides 1, 1, 1, 2 and diagonal 9 give H1 [2, 9); sides 1, 1, 1, 3 and
+    // diagonal 4 give H1 [3, 4). Bars are sorted by birth, so the longer one comes first.
+    const graph = fromEdgeList({
+      n: 8,
+      sources: [0, 1, 2, 3, 0, 4, 5, 6, 7, 4],
+      targets: [1, 2, 3, 0, 2, 5, 6, 7, 4, 6],
+      weights: [1, 1, 1, 2, 9, 1, 1, 1, 3, 4],
+      directed: false,
+    });
+    const barcode = computeBarcode(graph, { semantics: "distance", maxDim: 1 });
+    const h1 = barcode.bars.filter((bar) => bar.dim === 1).map((bar) => [bar.birth, bar.death]);
+    expect(h1).toEqual([
+      [2, 9],
+      [3, 4],
+    ]);
+    expect(summarizeBars(barcode, 1)).toMatchObject({ count: 2, totalPersistence: 8, maxPersistence: 7 });
   });
 });

@@ -44,4 +44,9 @@ describe("summarizeCurve", () => {
     expect(summarizeCurve(table, [0, 1, 2], 2, 1)).toEqual({ max: 30, peakAt: 1, area: 45 });
     expect(summarizeCurve(table, [0, 1, 2], 2, 0)).toEqual({ max: 3, peakAt: 2, area: 4 });
   });
+
+  it("refuses a curve with no points", () => {
+    expect(() => summarizeCurve([], [])).toThrow(RangeError);
+    expect(() => summarizeCurve([], [])).toThrow("a curve needs at least one point");
+  });
 });

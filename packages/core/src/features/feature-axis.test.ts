@@ -3,7 +3,7 @@ import { randomGraph } from "../../../../test/support/known-graphs.js";
 import { seededRandom } from "../../../../test/support/random.js";
 import { densityGrid } from "../filtration/threshold-grid.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
-import { axisGrid } from "./feature-axis.js";
+import { axisGrid, checkFeatureAxis } from "./feature-axis.js";
 
 describe("axisGrid", () => {
   it("gives each density the threshold densityGrid gives it alone, in axis order", () => {
@@ -35,5 +35,44 @@ describe("axisGrid", () => {
     expect(
       Array.from(axisGrid(graph, { kind: "weight", values: [3, 2, 1] }, "similarity").thresholds),
     ).toEqual([3, 2, 1]);
+  });
+});
+
+describe("checkFeatureAxis", () => {
+  it("accepts weight axes of any sign and size in filtration order, and densities within [0, 1]", () => {
+    expect(() => checkFeatureAxis({ kind: "weight", values: [-3, 0, 2.5, 40] }, "distance")).not.toThrow();
+    expect(() => checkFeatureAxis({ kind: "weight", values: [40, 2.5, 0, -3] }, "similarity")).not.toThrow();
+    expect(() => checkFeatureAxis({ kind: "density", values: [0, 0.5, 1] }, "similarity")).not.toThrow();
+  });
+
+  it("names what is wrong: kind, no values, a value not finite, a density outside [0, 1], repeats", () => {
+    const cases: [Parameters<typeof checkFeatureAxis>, string][] = [
+      [[{ kind: "ratio" as "weight", values: [0.5] }, "distance"], 'unknown axis kind "ratio"'],
+      [[{ kind: "weight", values: [] }, "distance"], "the feature axis has no values"],
+      [
+        [{ kind: "weight", values: [0, Number.POSITIVE_INFINITY] }, "distance"],
+        "axis value 1 is not a finite number (Infinity)",
+      ],
+      [[{ kind: "weight", values: [Number.NaN] }, "distance"], "axis value 0 is not a finite number (NaN)"],
+      [[{ kind: "density", values: [0.5, 1.5] }, "distance"], "density 1.5 is outside [0, 1]"],
+      [[{ kind: "density", values: [-0.1] }, "distance"], "density -0.1 is outside [0, 1]"],
+      // Densities always ascend, whatever the weights mean; weights follow the filtration.
+      [
+        [{ kind: "density", values: [0.5, 0.5] }, "similarity"],
+        "axis values must be strictly ascending without repeats (value 1: 0.5)",
+      ],
+      [
+        [{ kind: "weight", values: [1, 2] }, "similarity"],
+        "axis values must be strictly descending without repeats (value 1: 2)",
+      ],
+      [
+        [{ kind: "weight", values: [2, 1] }, "distance"],
+        "axis values must be strictly ascending without repeats (value 1: 1)",
+      ],
+    ];
+    for (const [[axis, semantics], message] of cases) {
+      expect(() => checkFeatureAxis(axis, semantics), message).toThrow(RangeError);
+      expect(() => checkFeatureAxis(axis, semantics), message).toThrow(message);
+    }
   });
 });

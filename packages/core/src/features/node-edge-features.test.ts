@@ -164,4 +164,18 @@ describe("nodeEdgeFeatures", () => {
       new Array(10).fill(binomial(3, 1)),
     );
   });
+
+  it("takes topDim 1 (edges only), refuses less, and wants semantics with a threshold", () => {
+    const square = weightedSquare();
+    const f = nodeEdgeFeatures(square, { topDim: 1 });
+    expect(f.nodeFeatureNames).toEqual(["degree", "strength", "simplices_d1"]);
+    expect(column(f.x, f.nodeFeatureNames, "simplices_d1")).toEqual([3, 2, 3, 2]);
+    for (const topDim of [0, 1.5])
+      expect(() => nodeEdgeFeatures(square, { topDim })).toThrow(
+        `topDim must be an integer ≥ 1, got ${topDim}`,
+      );
+    expect(() => nodeEdgeFeatures(square, { topDim: 2, threshold: 3 })).toThrow(
+      "a threshold needs semantics: 'distance' or 'similarity'",
+    );
+  });
 });

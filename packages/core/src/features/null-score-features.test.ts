@@ -16,7 +16,12 @@ import { bettiAt } from "../homology/betti-at.js";
 import { nullSample, rewiringStrata } from "../null-model/null-sample.js";
 import { TimeLimitError } from "../work/time-limit-error.js";
 import { axisGrid, type FeatureAxis } from "./feature-axis.js";
-import { type NullScoreConfig, nullScoreNames, nullScoreValues } from "./null-score-features.js";
+import {
+  checkNullScoreConfig,
+  type NullScoreConfig,
+  nullScoreNames,
+  nullScoreValues,
+} from "./null-score-features.js";
 
 const TOP_DIM = 2;
 
@@ -65,6 +70,76 @@ describe("nullScoreNames", () => {
     );
     expect(() => nullScoreNames({ ...config, samples: 1 }, 2)).toThrow(/samples/);
     expect(() => nullScoreNames({ ...config, features: ["loops" as "betti"] }, 2)).toThrow(/loops/);
+  });
+});
+
+describe("checkNullScoreConfig", () => {
+  const config: NullScoreConfig = {
+    model: "rewire",
+    samples: 10,
+    seed: 3,
+    features: ["simplices"],
+    threshold: { kind: "density", value: 0.1 },
+  };
+
+  it("accepts every bound: 2 samples, seed 0, densities 0 and 1, no swaps", () => {
+    const accepted: NullScoreConfig[] = [
+      config,
+      { ...config, model: "er" },
+      { ...config, model: "shuffle" },
+      { ...config, samples: 2 },
+      { ...config, seed: 0 },
+      { ...config, seed: Number.MAX_SAFE_INTEGER },
+      { ...config, threshold: { kind: "density", value: 0 } },
+      { ...config, threshold: { kind: "density", value: 1 } },
+      { ...config, threshold: { kind: "weight", value: -2.5 } },
+      { ...config, threshold: { kind: "all" } },
+      { ...config, swapsPerEdge: 0 },
+      { ...config, swapsPerEdge: 0.5 },
+    ];
+    for (const c of accepted) expect(() => checkNullScoreConfig(c), JSON.stringify(c)).not.toThrow();
+  });
+
+  it("refuses each setting out of range, naming it and the value given", () => {
+    const refused: [NullScoreConfig, string][] = [
+      [
+        { ...config, model: "lattice" as "er" },
+        'unknown null model "lattice"; choose from er, rewire, shuffle',
+      ],
+      [
+        { ...config, samples: 1 },
+        "null samples must be a whole number ≥ 2 (a z-score needs a spread), got 1",
+      ],
+      [{ ...config, seed: -1 }, "the null-model seed must be a whole number ≥ 0, got -1"],
+      [{ ...config, seed: 1.5 }, "the null-model seed must be a whole number ≥ 0, got 1.5"],
+      [{ ...config, seed: 2 ** 53 }, `the null-model seed must be a whole number ≥ 0, got ${2 ** 53}`],
+      [
+        { ...config, features: ["betti", "loops" as "betti"] },
+        'unknown null-model feature "loops"; choose from simplices, betti, bettiAreas',
+      ],
+      [
+        { ...config, threshold: { kind: "density", value: 1.5 } },
+        "the null-model density 1.5 is outside [0, 1]",
+      ],
+      [
+        { ...config, threshold: { kind: "density", value: -0.5 } },
+        "the null-model density -0.5 is outside [0, 1]",
+      ],
+      [
+        { ...config, threshold: { kind: "weight", value: Number.NaN } },
+        "the null-model threshold must be a finite weight, got NaN",
+      ],
+      [{ ...config, swapsPerEdge: -1 }, "swapsPerEdge must be a number ≥ 0, got -1"],
+      [
+        { ...config, swapsPerEdge: Number.POSITIVE_INFINITY },
+        "swapsPerEdge must be a number ≥ 0, got Infinity",
+      ],
+      [{ ...config, swapsPerEdge: Number.NaN }, "swapsPerEdge must be a number ≥ 0, got NaN"],
+    ];
+    for (const [c, message] of refused) {
+      expect(() => checkNullScoreConfig(c), message).toThrow(RangeError);
+      expect(() => checkNullScoreConfig(c), message).toThrow(message);
+    }
   });
 });
 
@@ -154,6 +229,13 @@ describe("nullScoreValues", () => {
       semantics: "similarity",
     });
     expect(Array.from(betti)).toEqual(Array.from(all.subarray(2, 4)));
+    const withoutBetti = nullScoreValues(graph, {
+      config: { ...config, features: ["bettiAreas", "simplices"] },
+      topDim: TOP_DIM,
+      axis,
+      semantics: "similarity",
+    });
+    expect(Array.from(withoutBetti)).toEqual([...all.subarray(0, 2), ...all.subarray(4, 6)]);
   });
 
   it("stops at the time limit, saying it was drawing null samples", () => {

@@ -169,6 +169,12 @@ describe("topologicalFeatures", () => {
     expect([axisRange.get("bars_d1_count"), axisRange.get("bars_d1_essential")]).toEqual([0, 1]);
     expect([fullRange.get("bars_d1_count"), fullRange.get("bars_d1_essential")]).toEqual([1, 0]);
     expect(fullRange.get("bars_d1_total_persistence")).toBe(1);
+    // A configuration that does not name the range at all reads it as "axis".
+    const { barcodeRange: _, ...unnamed } = DEFAULT_FEATURE_CONFIG;
+    expect(unnamed).not.toHaveProperty("barcodeRange");
+    expect(Array.from(row(square, unnamed, axis, "distance").result.values)).toEqual(
+      Array.from(axisRange.result.values),
+    );
     expect(axisRange.result.barcode?.bars.find((b) => b.dim === 1)).toMatchObject({ birth: 4, death: null });
     expect(() =>
       row(square, { ...DEFAULT_FEATURE_CONFIG, barcodeRange: "some" as "full" }, axis, "distance"),

@@ -57,8 +57,8 @@ export class ChainBuilder {
 
   /**
    * Sorts by the typed array's own sort when key·2^b + position (2^b ≥ size) stays an exact double, then
-   * gathers f and the coefficients by position: a third of the time of the comparison sort below, which
-   * swaps three arrays (chains are sorted once per reduced column). False when the keys are too large.
+   * gathers f and the coefficients by position, instead of the comparison sort below, which swaps three
+   * arrays (correlation n = 200: 2 % fewer instructions in all). False when the keys are too large.
    */
   private sortPacked(): boolean {
     const size = this.size;

@@ -2,7 +2,7 @@ import { existsSync, readdirSync, readFileSync, realpathSync, statSync } from "n
 import { basename, dirname, join, relative, resolve, sep } from "node:path";
 import { UsageError } from "../options/graph-options.js";
 import { OutputIOError } from "./output-io-error.js";
-import { type FolderMarker, RUN_FOLDER, RUN_FOLDER_MARKER } from "./run-folder.js";
+import { type FolderMarker, markerText, RUN_FOLDER } from "./run-folder.js";
 
 /** Raised when --out names a folder we must not write into (the user's own files, or the dataset). */
 export class OutFolderError extends UsageError {}
@@ -112,7 +112,7 @@ function earlierRunHint(out: string): string {
     if (spec.format === "cliquescape-run-spec/1" && existsSync(join(out, "graphs")))
       return (
         ` If it is a run folder written by an earlier cliquescape, mark it as one and run again: ` +
-        `echo '{"kind":"cliquescape run folder","version":1}' > ${join(out, RUN_FOLDER_MARKER)}`
+        `echo '${markerText(RUN_FOLDER)}' > ${join(out, RUN_FOLDER.file)}`
       );
   } catch {
     // no spec of ours: no hint

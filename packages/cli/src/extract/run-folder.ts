@@ -56,13 +56,19 @@ export interface FolderMarker {
 export const RUN_FOLDER_MARKER = "cliquescape-run.json";
 export const RUN_FOLDER: FolderMarker = { file: RUN_FOLDER_MARKER, kind: "cliquescape run folder" };
 
+/** What a marker file holds (one line, fixed). */
+export function markerText(marker: FolderMarker): string {
+  return JSON.stringify({ kind: marker.kind, version: 1 });
+}
+
 /** Creates the folder (if need be) and marks it as ours; call only after checkOutFolder accepted it. */
 export function markFolder(root: string, marker: FolderMarker): void {
   makeFolder(root);
   const file = join(root, marker.file);
-  if (!existsSync(file)) writeFileSync(file, `${JSON.stringify({ kind: marker.kind, version: 1 })}\n`);
+  if (!existsSync(file)) writeFileSync(file, `${markerText(marker)}\n`);
 }
 
+/** markFolder for a run folder. */
 export function markRunFolder(folder: RunFolder): void {
   markFolder(folder.root, RUN_FOLDER);
 }

@@ -73,6 +73,10 @@ describe("readGraphFile: choosing the reader", () => {
     const path = file("ij.csv", "i,j\n0,1\n1,0\n");
     expect(readGraphFile(path, { directed: true }).format).toBe("edge-list");
     expect(readGraphFile(path, { labelRow: true }).format).toBe("dense-matrix");
+    // Placing the label column alone says the same: only a matrix has one (the first row is then its labels).
+    const matrix = readGraphFile(path, { labelColumn: false });
+    expect(matrix.format).toBe("dense-matrix");
+    expect(matrix.graphs[0].labels).toEqual(["i", "j"]);
   });
 });
 

@@ -84,6 +84,10 @@ describe("textRows: quoted records, their edges and their line numbers", () => {
     expect(rows(' "a" , b\n', ",")).toEqual([{ line: 1, cells: ["a", "b"] }]);
     expect(rows('\t"a"\tb\n', "\t")).toEqual([{ line: 1, cells: ["", "a", "b"] }]);
     expect(rows('"a"\t,b\n', ",")).toEqual([{ line: 1, cells: ["a", "b"] }]);
+    // Tabs are blanks too before a quoted cell of a comma-separated record (RFC 4180 has no blanks at all;
+    // spreadsheet exports that pad cells use both).
+    expect(rows('1,\t"a"\n', ",")).toEqual([{ line: 1, cells: ["1", "a"] }]);
+    expect(rows('"a", \t"b"\n', ",")).toEqual([{ line: 1, cells: ["a", "b"] }]);
   });
 
   it("a quoted record may end the file without a line break, with a quoted or an unquoted last cell", () => {

@@ -135,6 +135,10 @@ describe("fromEdgeList: warnings and duplicates", () => {
         .message,
     ).toBe("sources, targets and weights differ in length");
     expect(
+      thrown(() => fromEdgeList({ n: 2, sources: [0], targets: [1], weights: [1, 2], directed: true }))
+        .message,
+    ).toBe("sources, targets and weights differ in length");
+    expect(
       thrown(() =>
         fromEdgeList({ n: 2, sources: [0], targets: [1], weights: [1], directed: true, labels: ["a"] }),
       ).message,
@@ -144,6 +148,17 @@ describe("fromEdgeList: warnings and duplicates", () => {
     );
     expect(range.message).toBe("node 3 is not in 0..2");
     expect(range.location).toEqual({ edge: 1 });
+    // Below the range and between two nodes are out of it too.
+    for (const [bad, edge] of [
+      [-1, 0],
+      [0.5, 1],
+    ] as const) {
+      const sources = edge === 0 ? [bad, 0] : [0, 1];
+      const targets = edge === 0 ? [1, 1] : [1, bad];
+      const error = thrown(() => fromEdgeList({ n: 3, sources, targets, weights: [1, 1], directed: true }));
+      expect(error.message).toBe(`node ${bad} is not in 0..2`);
+      expect(error.location).toEqual({ edge });
+    }
   });
 });
 

@@ -1,0 +1,136 @@
+/**
+ * The TypeScript counter (bitset-counter.ts) on each of its paths. In mutation runs and wherever the
+ * runtime has WebAssembly, `kernel: "auto"` counts in the WebAssembly kernel, so these tests name
+ * `kernel: "typescript"`.
+ *
+ * The reference is a closed form (common practice): a clique of a complete multipartite graph takes at
+ * most one vertex from each part, and any such choice is a clique, so with part sizes a_1 … a_r there are
+ * e_{k+1}(a_1, …, a_r) k-simplices (e_j: the j-th elementary symmetric polynomial). Oriented along a
+ * total order of the vertices, each clique has exactly one admissible vertex order (the order itself), so
+ * the directed flag complex has the same counts; with both arcs on every edge, each of the (k+1)! orders
+ * is admissible. The vertices are relabelled by a seeded permutation, so parts are spread over the words
+ * of the bit rows. Part sizes are chosen so the local universes (lists of later or out-neighbours) span
+ * one, two and three to six 32-bit words, and candidate sets of 2, 3, ≤ 32, 32, 33 to 64, 64 and more
+ * than 64 members arise; counts go to maxDim 3 or 4 (a few million simplices) where all dimensions would
+ * be too many.
+ */
+import { describe, expect, it } from "vitest";
+import { binomial, factorial } from "../../../../test/support/combinatorics.js";
+import { randomPermutation, seededRandom } from "../../../../test/support/random.js";
+import { fromEdgeList } from "../graph/from-edge-list.js";
+import type { WeightedGraph } from "../graph/weighted-graph.js";
+import { countSimplices } from "./count-simplices.js";
+import { SimplexBudgetError } from "./simplex-budget-error.js";
+
+type Mode = "undirected" | "ordered" | "both";
+
+/**
+ * Complete multipartite graph with parts of the given sizes, vertices relabelled by a permutation drawn
+ * from `seed`; "ordered": each edge becomes one arc along a second random total order; "both": both arcs.
+ */
+function multipartite(sizes: number[], mode: Mode, seed: number): WeightedGraph {
+  const random = seededRandom(seed);
+  const part = sizes.flatMap((size, i) => Array.from({ length: size }, () => i));
+  const n = part.length;
+  const name = randomPermutation(n, random);
+  const rank = randomPermutation(n, random);
+  const sources: number[] = [];
+  const targets: number[] = [];
+  for (let u = 0; u < n; u++) {
+    for (let v = u + 1; v < n; v++) {
+      if (part[u] === part[v]) continue;
+      const [a, b] = [name[u], name[v]];
+      if (mode === "undirected" || (mode === "ordered" && rank[a] < rank[b])) {
+        sources.push(a);
+        targets.push(b);
+      } else if (mode === "ordered") {
+        sources.push(b);
+        targets.push(a);
+      } else {
+        sources.push(a, b);
+        targets.push(b, a);
+      }
+    }
+  }
+  return fromEdgeList({ n, directed: mode !== "undirected", sources, targets, weights: sources.map(() => 1) });
+}
+
+/** k-simplices for k = 0 … r − 1: e_{k+1}(sizes), times (k+1)! with both arcs (see the header). */
+function expectedCounts(sizes: number[], mode: Mode): number[] {
+  const e = [1];
+  for (const a of sizes) {
+    e.push(0);
+    for (let j = e.length - 1; j >= 1; j--) e[j] += a * e[j - 1];
+  }
+  return e.slice(1).map((c, k) => (mode === "both" ? c * factorial(k + 1) : c));
+}
+
+const count = (g: WeightedGraph, maxDim?: number, budget?: number) =>
+  countSimplices(g, { kernel: "typescript", maxDim, budget });
+
+/** The counts to maxDim (every level below the top level, which is one of 0 … maxDim). */
+function checkTo(g: WeightedGraph, want: number[], maxDim: number, label: string): void {
+  const got = count(g, maxDim);
+  expect(Array.from(got.counts), label).toEqual(want.slice(0, maxDim + 1));
+  expect(got.truncated, `${label}: truncated`).toBe(want.length > maxDim + 1);
+}
+
+describe("the TypeScript counter against the multipartite closed form, at every cap", () => {
+  // [sizes, modes, maxDim]: the largest list of later (undirected) or out- (directed) neighbours, the
+  // number of words of a root's bit rows (W), and what is reached, noted beside each
+  const cases: [number[], Mode[], number][] = [
+    // lists of 45–51 (two words): two- and three-member children settled inline, children in the low
+    // or the high word only, children across both words; a cap in every level of the recursion
+    [[1, 2, 3, 4, 5, 6, 7, 8, 9, 10], ["undirected", "ordered"], 4],
+    // every dimension (12 · 2 · 3 · 11 · 11 − 1 cliques): out-lists of 33 (two words), to the last level
+    [[11, 1, 2, 10, 10], ["both"], 5],
+    // lists of 80 (three words): candidate sets of 33–64 members packed into two words, of ≤ 32 and of
+    // exactly 32 into one, pairs in a wide set, one-word sets of a wide universe; with both arcs, no
+    // "later members only" shortcut in the rows
+    [[40, 40, 40], ["undirected", "ordered", "both"], 3],
+    // lists of 160 and 175 (five and six words): sets of more than 64 members renumbered into a narrower
+    // universe, sets of exactly 64, whole cliques in closed form; cut off at maxDim 3
+    [[40, 40, 40, 40, 40], ["undirected"], 3],
+    [[10, 20, 30, 40, 50, 60], ["ordered"], 3],
+    // both arcs, lists of 47, cut off at maxDim 3 inside two-word sets
+    [[3, 5, 8, 13, 21], ["both"], 3],
+  ];
+  for (const [sizes, modes, maxDim] of cases) {
+    for (const mode of modes) {
+      it(`parts ${sizes.join(", ")}, ${mode}, maxDim 0 … ${maxDim}`, () => {
+        const g = multipartite(sizes, mode, sizes.length * 7 + modes.indexOf(mode));
+        const want = expectedCounts(sizes, mode);
+        for (let m = 0; m <= maxDim; m++) checkTo(g, want, m, `maxDim ${m}`);
+      });
+    }
+  }
+});
+
+describe("every simplex counted towards the budget, on each path", () => {
+  // a budget of exactly the total passes, one less stops (the budget counts every simplex, vertices
+  // included); totals from the closed form: Π(1 + a_i) − 1 cliques (choose none or one vertex of
+  // each part), or Σ_k (k+1)! e_{k+1} with both arcs
+  const cases: [number[], Mode][] = [
+    [[11, 1, 2, 10, 10], "both"],
+    [[40, 40, 40], "undirected"],
+    [[40, 40, 40], "both"],
+    [[2, 3, 60, 60], "undirected"],
+    [[2, 3, 60, 60], "ordered"],
+  ];
+  for (const [sizes, mode] of cases) {
+    it(`parts ${sizes.join(", ")}, ${mode}`, () => {
+      const g = multipartite(sizes, mode, 99);
+      const want = expectedCounts(sizes, mode);
+      const total = want.reduce((a, b) => a + b, 0);
+      if (mode === "undirected") expect(total).toBe(sizes.reduce((p, a) => p * (1 + a), 1) - 1);
+      expect(Array.from(count(g, undefined, total).counts)).toEqual(want);
+      expect(() => count(g, undefined, total - 1)).toThrow(SimplexBudgetError);
+    });
+  }
+});
+
+describe("the closed form itself", () => {
+  it("equal parts give C(r, k+1)·a^(k+1), as count-simplices.test.ts states it", () => {
+    expect(expectedCounts([4, 4, 4], "undirected")).toEqual([1, 2, 3].map((j) => binomial(3, j) * 4 ** j));
+  });
+});

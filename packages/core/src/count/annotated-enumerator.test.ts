@@ -1,0 +1,242 @@
+/**
+ * The annotated enumeration (annotated-enumerator.ts: participation, and the sweep's threshold bins) on
+ * complete multipartite graphs, entry by entry against closed forms (common practice; the same reasoning
+ * as bitset-counter.test.ts): a clique takes at most one vertex from each part, so with part sizes
+ * a_1 … a_r there are e_{k+1}(a) k-simplices (e_j: the j-th elementary symmetric polynomial);
+ * - a vertex v of part p lies in e_k(a without a_p) k-simplices (it is one of the k + 1 vertices, the other
+ *   k come from k other parts), an edge between parts p and q in e_{k−1}(a without a_p, a_q);
+ * - oriented along a total order ("ordered"), each clique is one directed simplex, its vertices in that
+ *   order: v is its source in e_k over the other parts of the number of vertices after v, its sink in
+ *   e_k of those before v;
+ * - with both arcs ("both"), all (k+1)! orders are simplices: v is in (k+1)!·e_k(…), first in k!·e_k(…) of
+ *   them and last in as many; the arc u→v is in those orders with u before v, half of them;
+ * - threshold bins: an edge between parts p < q gets weight q (or p), so at threshold t the graph is the
+ *   complete multipartite graph on the parts below t (plus isolated vertices), or that graph joined to
+ *   every vertex of the parts from t on, which are pairwise not adjacent: e_{k+1}(a_0..a_{t−1}) +
+ *   e_k(a_0..a_{t−1})·(a_t + … + a_{r−1}).
+ * Part sizes put local universes in one, two and three words of the bit rows; vertices are relabelled by
+ * a seeded permutation.
+ */
+import { describe, expect, it } from "vitest";
+import { factorial } from "../../../../test/support/combinatorics.js";
+import { randomPermutation, seededRandom } from "../../../../test/support/random.js";
+import { explicitGrid } from "../filtration/threshold-grid.js";
+import { fromEdgeList } from "../graph/from-edge-list.js";
+import type { WeightedGraph } from "../graph/weighted-graph.js";
+import { countSimplices } from "./count-simplices.js";
+import { SimplexBudgetError } from "./simplex-budget-error.js";
+import { sweepSimplexCounts } from "./sweep-simplex-counts.js";
+
+type Mode = "undirected" | "ordered" | "both";
+
+interface Multipartite {
+  graph: WeightedGraph;
+  sizes: number[];
+  /** part[v] of each (relabelled) vertex, and its place in the total order of "ordered" */
+  part: Int32Array;
+  rank: Int32Array;
+}
+
+/**
+ * Complete multipartite graph, vertices relabelled by a seeded permutation; an edge between parts p < q
+ * weighs `weight(p, q)`; "ordered": one arc along a seeded total order (`rank`), "both": both arcs.
+ */
+function multipartite(
+  sizes: number[],
+  mode: Mode,
+  seed: number,
+  weight: (p: number, q: number) => number = () => 1,
+): Multipartite {
+  const random = seededRandom(seed);
+  const partOf = sizes.flatMap((size, i) => Array.from({ length: size }, () => i));
+  const n = partOf.length;
+  const name = randomPermutation(n, random);
+  const rank = randomPermutation(n, random);
+  const part = new Int32Array(n);
+  for (let u = 0; u < n; u++) part[name[u]] = partOf[u];
+  const sources: number[] = [];
+  const targets: number[] = [];
+  const weights: number[] = [];
+  for (let a = 0; a < n; a++) {
+    for (let b = a + 1; b < n; b++) {
+      if (part[a] === part[b]) continue;
+      const w = weight(Math.min(part[a], part[b]), Math.max(part[a], part[b]));
+      if (mode === "undirected" || (mode === "ordered" && rank[a] < rank[b])) {
+        sources.push(a);
+        targets.push(b);
+        weights.push(w);
+      } else if (mode === "ordered") {
+        sources.push(b);
+        targets.push(a);
+        weights.push(w);
+      } else {
+        sources.push(a, b);
+        targets.push(b, a);
+        weights.push(w, w);
+      }
+    }
+  }
+  const graph = fromEdgeList({ n, directed: mode !== "undirected", sources, targets, weights });
+  return { graph, sizes, part, rank };
+}
+
+/** e_0 … e_r of the numbers given (elementary symmetric polynomials, by the usual recurrence). */
+function elementary(values: number[]): number[] {
+  const e = [1];
+  for (const a of values) {
+    e.push(0);
+    for (let j = e.length - 1; j >= 1; j--) e[j] += a * e[j - 1];
+  }
+  return e;
+}
+
+const at = (e: number[], j: number) => (j >= 0 && j < e.length ? e[j] : 0);
+
+/** e_j of the part sizes without the parts listed. */
+function without(sizes: number[], ...parts: number[]): number[] {
+  return elementary(sizes.filter((_, i) => !parts.includes(i)));
+}
+
+function checkParticipation(m: Multipartite, mode: Mode): void {
+  const { graph, sizes, part, rank } = m;
+  const r = countSimplices(graph, { participation: true, edgeParticipation: true });
+  const top = sizes.length - 1;
+  const orders = (k: number) => (mode === "both" ? factorial(k + 1) : 1);
+  expect(Array.from(r.counts)).toEqual(elementary(sizes).slice(1).map((c, k) => c * orders(k)));
+  const p = r.participation!;
+  expect(p.member.length).toBe(top + 1);
+  // expected rows, compared whole (one assertion per row)
+  const member = Array.from({ length: top + 1 }, () => new Array<number>(graph.n).fill(0));
+  const source = member.map((row) => row.slice());
+  const sink = member.map((row) => row.slice());
+  for (let v = 0; v < graph.n; v++) {
+    const others = without(sizes, part[v]);
+    // ordered: vertices of the other parts after (before) v in the total order
+    const after: number[] = new Array(sizes.length).fill(0);
+    const before: number[] = new Array(sizes.length).fill(0);
+    for (let u = 0; u < graph.n; u++) {
+      if (part[u] === part[v]) continue;
+      if (rank[u] > rank[v]) after[part[u]]++;
+      else before[part[u]]++;
+    }
+    const afterE = elementary(after);
+    const beforeE = elementary(before);
+    for (let k = 0; k <= top; k++) {
+      member[k][v] = at(others, k) * orders(k);
+      source[k][v] = mode === "both" ? at(others, k) * factorial(k) : at(afterE, k);
+      sink[k][v] = mode === "both" ? at(others, k) * factorial(k) : at(beforeE, k);
+    }
+  }
+  expect(p.member.map((row) => Array.from(row)), "member").toEqual(member);
+  if (mode === "undirected") expect(p.source).toBeUndefined();
+  else {
+    expect(p.source!.map((row) => Array.from(row)), "source").toEqual(source);
+    expect(p.sink!.map((row) => Array.from(row)), "sink").toEqual(sink);
+  }
+  const edges = Array.from({ length: top + 1 }, () => new Array<number>(graph.targets.length).fill(0));
+  for (let u = 0; u < graph.n; u++) {
+    for (let s = graph.offsets[u]; s < graph.offsets[u + 1]; s++) {
+      const rest = without(sizes, part[u], part[graph.targets[s]]);
+      for (let k = 1; k <= top; k++)
+        edges[k][s] = at(rest, k - 1) * (mode === "both" ? factorial(k + 1) / 2 : 1);
+    }
+  }
+  expect(r.edgeParticipation!.map((row) => Array.from(row)), "edges").toEqual(edges);
+}
+
+describe("node and edge participation against the multipartite closed forms", () => {
+  // [sizes, modes]: largest local universe (later or out-neighbours) beside each
+  const cases: [number[], Mode[]][] = [
+    [[1, 2, 3, 4, 5], ["undirected", "ordered", "both"]], // one word
+    [[2, 3, 4, 6, 7, 9, 11], ["undirected", "ordered"]], // 30–40: one and two words
+    [[20, 20, 20], ["undirected", "ordered", "both"]], // 40: two words
+    [[1, 36, 36], ["undirected", "ordered"]], // 72: three words
+  ];
+  for (const [sizes, modes] of cases) {
+    for (const mode of modes) {
+      it(`parts ${sizes.join(", ")}, ${mode}`, () => {
+        checkParticipation(multipartite(sizes, mode, 5 + sizes.length), mode);
+      });
+    }
+  }
+});
+
+/** Counts at threshold t (1 … r) of the two weightings in the header, k = 0 … r − 1. */
+function sweepExpected(sizes: number[], t: number, joinedToLater: boolean, mode: Mode): number[] {
+  const n = sizes.reduce((a, b) => a + b, 0);
+  const e = elementary(sizes.slice(0, t));
+  const later = sizes.slice(t).reduce((a, b) => a + b, 0);
+  return sizes.map((_, k) => {
+    if (k === 0) return n;
+    const cliques = at(e, k + 1) + (joinedToLater ? at(e, k) * later : 0);
+    return cliques * (mode === "both" ? factorial(k + 1) : 1);
+  });
+}
+
+describe("the sweep's threshold bins against the multipartite closed forms", () => {
+  const cases: [number[], Mode[]][] = [
+    [[1, 2, 3, 4, 5, 6], ["undirected", "ordered", "both"]],
+    [[3, 5, 7, 9, 11, 13], ["undirected", "ordered"]], // lists up to 45: two words
+    [[2, 3, 33, 34], ["undirected", "ordered"]], // up to 72: three words
+  ];
+  for (const [sizes, modes] of cases) {
+    for (const mode of modes) {
+      for (const joinedToLater of [false, true]) {
+        it(`parts ${sizes.join(", ")}, ${mode}, weight ${joinedToLater ? "min" : "max"}(p, q) + 1`, () => {
+          const weight = (p: number, q: number) => (joinedToLater ? p : q) + 1;
+          const { graph } = multipartite(sizes, mode, 11, weight);
+          const r = sizes.length;
+          const thresholds = Array.from({ length: r }, (_, t) => t + 1);
+          const sweep = sweepSimplexCounts(graph, explicitGrid(thresholds, "distance"), {
+            kernel: "typescript",
+          });
+          for (let t = 1; t <= r; t++) {
+            const want = sweepExpected(sizes, t, joinedToLater, mode);
+            expect(Array.from(sweep.counts[t - 1]), `threshold ${t}`).toEqual(want);
+            const chi = want.reduce((s, c, k) => s + (k % 2 === 0 ? c : -c), 0);
+            expect(sweep.euler[t - 1], `χ at ${t}`).toBe(chi);
+          }
+          expect(sweep.truncated).toBe(false);
+          // capped: the counts up to the cap, and the cut reported
+          for (let cap = 1; cap < r - 1; cap++) {
+            const capped = sweepSimplexCounts(graph, explicitGrid(thresholds, "distance"), {
+              kernel: "typescript",
+              maxDim: cap,
+            });
+            expect(
+              capped.counts.map((row) => Array.from(row)),
+              `maxDim ${cap}`,
+            ).toEqual(thresholds.map((t) => sweepExpected(sizes, t, joinedToLater, mode).slice(0, cap + 1)));
+            expect(capped.truncated, `maxDim ${cap}`).toBe(true);
+          }
+        });
+      }
+    }
+  }
+});
+
+describe("every simplex of the annotated enumeration counts towards the budget", () => {
+  for (const [sizes, mode] of [
+    [[1, 2, 3, 4, 5], "undirected"],
+    [[20, 20, 20], "ordered"],
+    [[2, 3, 33, 34], "undirected"],
+    [[3, 4, 5], "both"],
+  ] as [number[], Mode][]) {
+    it(`parts ${sizes.join(", ")}, ${mode}: a budget of the total passes, one less stops`, () => {
+      const { graph } = multipartite(sizes, mode, 3);
+      const want = elementary(sizes)
+        .slice(1)
+        .map((c, k) => c * (mode === "both" ? factorial(k + 1) : 1));
+      const total = want.reduce((a, b) => a + b, 0);
+      for (const participation of [true, false]) {
+        const sweep = (budget: number) =>
+          participation
+            ? countSimplices(graph, { participation, budget }).counts
+            : sweepSimplexCounts(graph, explicitGrid([1], "distance"), { kernel: "typescript", budget })
+                .counts[0];
+        expect(Array.from(sweep(total)), `participation ${participation}`).toEqual(want);
+        expect(() => sweep(total - 1), `participation ${participation}`).toThrow(SimplexBudgetError);
+      }
+    });
+  }
+});

@@ -19,6 +19,7 @@ import { binomial, factorial } from "../../../../test/support/combinatorics.js";
 import { randomPermutation, seededRandom } from "../../../../test/support/random.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
+import { checkLocalSize } from "./bitset-counter.js";
 import { countSimplices } from "./count-simplices.js";
 import { SimplexBudgetError } from "./simplex-budget-error.js";
 
@@ -132,5 +133,32 @@ describe("every simplex counted towards the budget, on each path", () => {
 describe("the closed form itself", () => {
   it("equal parts give C(r, k+1)·a^(k+1), as count-simplices.test.ts states it", () => {
     expect(expectedCounts([4, 4, 4], "undirected")).toEqual([1, 2, 3].map((j) => binomial(3, j) * 4 ** j));
+  });
+});
+
+describe("a local universe too large for its bit matrix is refused before anything is allocated", () => {
+  // d vertices need d·⌈d/32⌉ words of 4 bytes; above 2^30 bytes (1 GiB) the counters refuse. Worked by
+  // hand: 92 672 vertices (2896 words per row) need 1 073 512 448 bytes, 92 682 (2897 words) 1 073 999 016
+  // (2^30 = 1 073 741 824).
+  it("the largest allowed and the smallest refused size, and the message", () => {
+    expect(() => checkLocalSize(92_672, 2896)).not.toThrow();
+    expect(() => checkLocalSize(92_682, 2897)).toThrow(RangeError);
+    expect(() => checkLocalSize(92_682, 2897)).toThrow(
+      "a local universe of 92682 vertices needs a 1.0 GiB bit matrix; the counter supports local universes " +
+        "up to about 90,000 vertices (threshold the graph more strictly)",
+    );
+  });
+
+  it("a directed star with 92 682 arcs out of one vertex, in both enumerations", () => {
+    const arcs = 92_682;
+    const star = fromEdgeList({
+      n: arcs + 1,
+      directed: true,
+      sources: new Array<number>(arcs).fill(0),
+      targets: Array.from({ length: arcs }, (_, i) => i + 1),
+      weights: new Array<number>(arcs).fill(1),
+    });
+    expect(() => countSimplices(star, { kernel: "typescript" })).toThrow(/a local universe of 92682 vertices/);
+    expect(() => countSimplices(star, { participation: true })).toThrow(/a local universe of 92682 vertices/);
   });
 });

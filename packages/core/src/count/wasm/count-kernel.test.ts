@@ -1,0 +1,81 @@
+/**
+ * The loader of the WebAssembly counting kernel (count-kernel.ts): one instance until it is discarded,
+ * and null — so that counting goes on in TypeScript — wherever the runtime cannot give a kernel: no
+ * WebAssembly at all, or a WebAssembly that refuses to compile (as under a content security policy that
+ * forbids it). Counts are checked against C(n, k+1) for K_n (common practice).
+ */
+import { afterEach, describe, expect, it, vi } from "vitest";
+import { binomial } from "../../../../../test/support/combinatorics.js";
+import { fromEdgeList } from "../../graph/from-edge-list.js";
+
+afterEach(() => {
+  vi.unstubAllGlobals();
+  vi.resetModules();
+});
+
+/** K_n, undirected. */
+function complete(n: number) {
+  const sources: number[] = [];
+  const targets: number[] = [];
+  for (let u = 0; u < n; u++)
+    for (let v = u + 1; v < n; v++) {
+      sources.push(u);
+      targets.push(v);
+    }
+  return fromEdgeList({ n, directed: false, sources, targets, weights: sources.map(() => 1) });
+}
+
+/** Fresh copies of the loader and of countSimplices, which see the globals as stubbed now. */
+async function freshModules() {
+  vi.resetModules();
+  const loader = await import("./count-kernel.js");
+  const { countSimplices } = await import("../count-simplices.js");
+  return { ...loader, countSimplices };
+}
+
+describe("the kernel instance", () => {
+  it("is the same object until discarded, then a new one that counts the same", async () => {
+    const { countKernel, discardKernel, countSimplices } = await freshModules();
+    const first = countKernel();
+    expect(first).not.toBeNull();
+    expect(countKernel()).toBe(first);
+    discardKernel();
+    const second = countKernel();
+    expect(second).not.toBeNull();
+    expect(second).not.toBe(first);
+    expect(countKernel()).toBe(second);
+    const k7 = Array.from({ length: 7 }, (_, k) => binomial(7, k + 1));
+    expect(Array.from(countSimplices(complete(7), { kernel: "webassembly" }).counts)).toEqual(k7);
+  });
+
+  it("is null where WebAssembly refuses to compile the kernel, and counting goes on in TypeScript", async () => {
+    const real = (globalThis as { WebAssembly: { Instance: unknown } }).WebAssembly;
+    let compiles = 0;
+    vi.stubGlobal("WebAssembly", {
+      Module: class {
+        constructor() {
+          compiles++;
+          throw new Error("WebAssembly.Module(): refused by the content security policy");
+        }
+      },
+      Instance: real.Instance,
+    });
+    const { countKernel, countSimplices } = await freshModules();
+    expect(countKernel()).toBeNull();
+    expect(countKernel()).toBeNull();
+    expect(compiles).toBe(1); // a refusal is remembered, not retried on every count
+    const k7 = Array.from({ length: 7 }, (_, k) => binomial(7, k + 1));
+    expect(Array.from(countSimplices(complete(7)).counts)).toEqual(k7);
+    expect(() => countSimplices(complete(7), { kernel: "webassembly" })).toThrow(
+      /WebAssembly counting kernel is not available here/,
+    );
+  });
+
+  it("is null, not an error, if WebAssembly is gone when a discarded instance is made again", async () => {
+    const { countKernel, discardKernel } = await freshModules();
+    expect(countKernel()).not.toBeNull();
+    discardKernel();
+    vi.stubGlobal("WebAssembly", undefined);
+    expect(countKernel()).toBeNull();
+  });
+});

@@ -10,9 +10,10 @@
  * the directed flag complex has the same counts; with both arcs on every edge, each of the (k+1)! orders
  * is admissible. The vertices are relabelled by a seeded permutation, so parts are spread over the words
  * of the bit rows. Part sizes are chosen so the local universes (lists of later or out-neighbours) span
- * one, two and three to six 32-bit words, and candidate sets of 2, 3, ≤ 32, 32, 33 to 64, 64 and more
- * than 64 members arise; counts go to maxDim 3 or 4 (a few million simplices) where all dimensions would
- * be too many.
+ * one, two and three to five 32-bit words, and candidate sets of 2, 3, ≤ 32, 32, 33 to 64, 64 and more
+ * than 64 members arise (which path each case reaches was read off a copy of the counter with counters
+ * in its branches, not committed); each case stays below a million simplices, as mutation runs repeat
+ * them for every mutant.
  */
 import { describe, expect, it } from "vitest";
 import { binomial, factorial } from "../../../../test/support/combinatorics.js";
@@ -80,21 +81,19 @@ describe("the TypeScript counter against the multipartite closed form, at every 
   // [sizes, modes, maxDim]: the largest list of later (undirected) or out- (directed) neighbours, the
   // number of words of a root's bit rows (W), and what is reached, noted beside each
   const cases: [number[], Mode[], number][] = [
-    // lists of 45–51 (two words): two- and three-member children settled inline, children in the low
-    // or the high word only, children across both words; a cap in every level of the recursion
-    [[1, 2, 3, 4, 5, 6, 7, 8, 9, 10], ["undirected", "ordered"], 4],
-    // every dimension (12 · 2 · 3 · 11 · 11 − 1 cliques): out-lists of 33 (two words), to the last level
+    // 18 pairs (lists of 34, two words): children of two and three members settled inline, children in
+    // the low word only, across both words, whole cliques in closed form; a cap in every level
+    [[2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2], ["undirected", "ordered"], 4],
+    // every dimension: two-word rows with both arcs (no "later members only" shortcut in the rows)
     [[11, 1, 2, 10, 10], ["both"], 5],
-    // lists of 80 (three words): candidate sets of 33–64 members packed into two words, of ≤ 32 and of
-    // exactly 32 into one, pairs in a wide set, one-word sets of a wide universe; with both arcs, no
-    // "later members only" shortcut in the rows
-    [[40, 40, 40], ["undirected", "ordered", "both"], 3],
-    // lists of 160 and 175 (five and six words): sets of more than 64 members renumbered into a narrower
-    // universe, sets of exactly 64, whole cliques in closed form; cut off at maxDim 3
-    [[40, 40, 40, 40, 40], ["undirected"], 3],
-    [[10, 20, 30, 40, 50, 60], ["ordered"], 3],
-    // both arcs, lists of 47, cut off at maxDim 3 inside two-word sets
-    [[3, 5, 8, 13, 21], ["both"], 3],
+    // lists of 121 (four words): candidate sets of 33–64 members packed into two words, of ≤ 32 and of
+    // exactly 32 and 64, pairs spread over words, one-word sets in the first and in later words
+    [[66, 66, 1, 1, 1], ["ordered"], 5],
+    // lists of 66 (three words) with both arcs, to the top; and cut off inside wide sets
+    [[33, 33, 33], ["both"], 3],
+    [[66, 66, 1, 1, 1], ["both"], 2],
+    // lists of 140 (five words): sets of more than 64 members renumbered into a narrower universe
+    [[70, 70, 70], ["undirected", "ordered"], 2],
   ];
   for (const [sizes, modes, maxDim] of cases) {
     for (const mode of modes) {
@@ -102,6 +101,13 @@ describe("the TypeScript counter against the multipartite closed form, at every 
         const g = multipartite(sizes, mode, sizes.length * 7 + modes.indexOf(mode));
         const want = expectedCounts(sizes, mode);
         for (let m = 0; m <= maxDim; m++) checkTo(g, want, m, `maxDim ${m}`);
+        // a cap at or above the top dimension still stops the deeper levels short (their "is there a
+        // level below" tests); with no cap, every path runs to the end
+        if (want.length <= maxDim + 1) {
+          const all = count(g);
+          expect(Array.from(all.counts), "no cap").toEqual(want);
+          expect(all.truncated, "no cap: truncated").toBe(false);
+        }
       });
     }
   }
@@ -113,8 +119,10 @@ describe("every simplex counted towards the budget, on each path", () => {
   // each part), or Σ_k (k+1)! e_{k+1} with both arcs
   const cases: [number[], Mode][] = [
     [[11, 1, 2, 10, 10], "both"],
-    [[40, 40, 40], "undirected"],
-    [[40, 40, 40], "both"],
+    [[2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2], "undirected"],
+    [[70, 70, 1, 1], "undirected"],
+    [[66, 66, 1, 1, 1], "ordered"],
+    [[33, 33, 33], "both"],
     [[2, 3, 60, 60], "undirected"],
     [[2, 3, 60, 60], "ordered"],
   ];

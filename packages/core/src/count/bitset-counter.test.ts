@@ -89,9 +89,10 @@ describe("the TypeScript counter against the multipartite closed form, at every 
     // lists of 121 (four words): candidate sets of 33–64 members packed into two words, of ≤ 32 and of
     // exactly 32 and 64, pairs spread over words, one-word sets in the first and in later words
     [[66, 66, 1, 1, 1], ["ordered"], 5],
-    // lists of 66 (three words) with both arcs, to the top; and cut off inside wide sets
+    // lists of 66 (three words) with both arcs, to the top
     [[33, 33, 33], ["both"], 3],
-    [[66, 66, 1, 1, 1], ["both"], 2],
+    // both arcs, lists of 134: the sets renumbered into a narrower universe have edges inside
+    [[66, 66, 1, 1, 1], ["both"], 3],
     // lists of 140 (five words): sets of more than 64 members renumbered into a narrower universe
     [[70, 70, 70], ["undirected", "ordered"], 2],
   ];
@@ -134,6 +135,44 @@ describe("every simplex counted towards the budget, on each path", () => {
       if (mode === "undirected") expect(total).toBe(sizes.reduce((p, a) => p * (1 + a), 1) - 1);
       expect(Array.from(count(g, undefined, total).counts)).toEqual(want);
       expect(() => count(g, undefined, total - 1)).toThrow(SimplexBudgetError);
+    });
+  }
+});
+
+describe("a pair of candidates in a wide set, one of them the universe's first member", () => {
+  // Worked by hand. Vertex 0 has arcs to 1 … 69 (a local universe of 69 members, three words; member 0 is
+  // vertex 1). Vertex 69 has arcs to 1 and 41 and there is one arc between 1 and 41, so the candidates
+  // after (0, 69) are exactly {1, 41}, in two different words. Simplices: 70 vertices; 72 arcs; the
+  // triangles (0, 69, 1), (0, 69, 41), (0, 1, 41) or (0, 41, 1), (69, 1, 41) or (69, 41, 1): 4; one
+  // 3-simplex, (0, 69, 1, 41) or (0, 69, 41, 1); χ = 70 − 72 + 4 − 1 = 1.
+  for (const [a, b] of [
+    [1, 41],
+    [41, 1],
+  ]) {
+    it(`with the arc ${a} → ${b}`, () => {
+      const sources = [...Array.from({ length: 69 }, () => 0), 69, 69, a];
+      const targets = [...Array.from({ length: 69 }, (_, i) => i + 1), 1, 41, b];
+      const g = fromEdgeList({ n: 70, directed: true, sources, targets, weights: sources.map(() => 1) });
+      const r = countSimplices(g, { kernel: "typescript" });
+      expect(Array.from(r.counts)).toEqual([70, 72, 4, 1]);
+      expect(r.euler).toBe(1);
+    });
+  }
+});
+
+describe("a cap one below the top, found inside a one-word universe", () => {
+  // K4 (undirected) and the transitive tournament on 4 vertices (arcs i → j for i < j) have 4, 6, 4, 1
+  // simplices (common practice: every subset is a clique, in one admissible order); at maxDim 2 the
+  // tetrahedron is cut off, which only the last level's "is there an edge among the candidates" shows.
+  for (const directed of [false, true]) {
+    it(directed ? "transitive tournament on 4 vertices" : "K4", () => {
+      const sources = [0, 0, 0, 1, 1, 2];
+      const targets = [1, 2, 3, 2, 3, 3];
+      const g = fromEdgeList({ n: 4, directed, sources, targets, weights: sources.map(() => 1) });
+      const r = count(g, 2);
+      expect(Array.from(r.counts)).toEqual([4, 6, 4]);
+      expect(r.truncated).toBe(true);
+      expect(count(g, 3).truncated).toBe(false);
     });
   }
 });

@@ -177,6 +177,62 @@ describe("a cap one below the top, found inside a one-word universe", () => {
   }
 });
 
+describe("a cut seen only in a two- or three-word universe, after a set with no edge inside", () => {
+  // Worked by hand. A: vertex 0 has arcs to 1 … 33 (33 members, two words; vertex 33 is member 32, the
+  // first of the second word), and 1 → 2, 1 → 3, 2 → 3; 33 → 4, 33 → 5 (no arc between 4 and 5);
+  // 6 → 7, 6 → 33, 7 → 33. Arcs: 33 + 3 + 2 + 3 = 41. Triangles from 0: the 8 pairs with an arc among
+  // 1 … 33; from 1: (1, 2, 3); from 6: (6, 7, 33): 10. 3-simplices: (0, 1, 2, 3), (0, 6, 7, 33): 2.
+  // B: vertex 0 has arcs to 1 … 65 (three words; 65 is member 64), 1 → 2, 1 → 3, 2 → 3, 65 → 4, 65 → 5:
+  // 66 vertices, 70 arcs, 6 triangles, one 3-simplex (0, 1, 2, 3).
+  // Only vertex 0 has a candidate set with an edge inside, so only its universe can see that maxDim 2
+  // cuts something off; its sets are settled from the highest member of the first word down, and the
+  // last one checked, {4, 5}, has no edge inside, which must not clear what {2, 3} showed.
+  const graphOf = (arcs: [number, number][], n: number) =>
+    fromEdgeList({
+      n,
+      directed: true,
+      sources: arcs.map((a) => a[0]),
+      targets: arcs.map((a) => a[1]),
+      weights: arcs.map(() => 1),
+    });
+  const star = (k: number): [number, number][] => Array.from({ length: k }, (_, i) => [0, i + 1]);
+  const a = graphOf(
+    [
+      ...star(33),
+      [1, 2],
+      [1, 3],
+      [2, 3],
+      [33, 4],
+      [33, 5],
+      [6, 7],
+      [6, 33],
+      [7, 33],
+    ],
+    34,
+  );
+  const b = graphOf([...star(65), [1, 2], [1, 3], [2, 3], [65, 4], [65, 5]], 66);
+  it("A, two words", () => {
+    expect(Array.from(count(a).counts)).toEqual([34, 41, 10, 2]);
+    expect(count(a).euler).toBe(1);
+    const cut = count(a, 2);
+    expect(Array.from(cut.counts)).toEqual([34, 41, 10]);
+    expect(cut.truncated).toBe(true);
+  });
+  it("C, two words: a pair made of the first members of both words", () => {
+    // vertex 0 → 1 … 33; 2 → 1, 2 → 33, 1 → 33: the candidates after (0, 2) are members 0 and 32 (worked
+    // by hand: 34 vertices, 36 arcs; triangles (0, 2, 1), (0, 2, 33), (0, 1, 33), (2, 1, 33); one
+    // 3-simplex (0, 2, 1, 33))
+    const c = graphOf([...star(33), [2, 1], [2, 33], [1, 33]], 34);
+    expect(Array.from(count(c).counts)).toEqual([34, 36, 4, 1]);
+  });
+  it("B, three words", () => {
+    expect(Array.from(count(b).counts)).toEqual([66, 70, 6, 1]);
+    const cut = count(b, 2);
+    expect(Array.from(cut.counts)).toEqual([66, 70, 6]);
+    expect(cut.truncated).toBe(true);
+  });
+});
+
 describe("the closed form itself", () => {
   it("equal parts give C(r, k+1)·a^(k+1), as count-simplices.test.ts states it", () => {
     expect(expectedCounts([4, 4, 4], "undirected")).toEqual([1, 2, 3].map((j) => binomial(3, j) * 4 ** j));

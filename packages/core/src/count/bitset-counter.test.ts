@@ -233,6 +233,52 @@ describe("a cut seen only in a two- or three-word universe, after a set with no 
   });
 });
 
+describe("three candidates across two words, settled inline, in every orientation", () => {
+  // Vertex 0 → 1 … 33 (two words), vertex 1 → 31, 32, 33 (members 30, 31, 32 of 0's universe), and arcs
+  // among 31, 32, 33. Transitive (one arc per pair, along an order of the three): 0, 1 and the three form
+  // a transitive tournament on 5 vertices, C(5, k+1) simplices (common practice), so with the 29 other
+  // vertices and their arcs from 0: 34, 39, 10, 5, 1. Both arcs on each pair (worked by hand): a simplex
+  // is 0 and/or 1 in front, then any ordered choice from the three: 34, 29 + 13, 21, 18, 6.
+  const orders = [
+    [31, 32, 33],
+    [31, 33, 32],
+    [32, 31, 33],
+    [32, 33, 31],
+    [33, 31, 32],
+    [33, 32, 31],
+  ];
+  const withArcs = (inner: [number, number][]) => {
+    const arcs: [number, number][] = [
+      ...Array.from({ length: 33 }, (_, i): [number, number] => [0, i + 1]),
+      [1, 31],
+      [1, 32],
+      [1, 33],
+      ...inner,
+    ];
+    return fromEdgeList({
+      n: 34,
+      directed: true,
+      sources: arcs.map((a) => a[0]),
+      targets: arcs.map((a) => a[1]),
+      weights: arcs.map(() => 1),
+    });
+  };
+  for (const [s, m, t] of orders) {
+    it(`arcs ${s} → ${m}, ${s} → ${t}, ${m} → ${t}`, () => {
+      const g = withArcs([
+        [s, m],
+        [s, t],
+        [m, t],
+      ]);
+      expect(Array.from(count(g).counts)).toEqual([34, 39, 10, 5, 1]);
+    });
+  }
+  it("both arcs on each pair", () => {
+    const g = withArcs(orders.map(([a, b]) => [a, b]));
+    expect(Array.from(count(g).counts)).toEqual([34, 42, 21, 18, 6]);
+  });
+});
+
 describe("the closed form itself", () => {
   it("equal parts give C(r, k+1)·a^(k+1), as count-simplices.test.ts states it", () => {
     expect(expectedCounts([4, 4, 4], "undirected")).toEqual([1, 2, 3].map((j) => binomial(3, j) * 4 ** j));

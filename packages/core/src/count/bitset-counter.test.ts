@@ -299,6 +299,19 @@ describe("a cone over the ordered tripartite graph: sets re-packed twice", () =>
   });
 });
 
+describe("a budget passed only by a wide universe's last tally", () => {
+  // Worked by hand: vertex 0 → 1 … 66 (three words) and 1 → 2, 3 → 4, …, 65 → 66: every candidate set
+  // after 0 has one member, so no deeper level runs, and the triangles (0, 2i − 1, 2i) are tallied at the
+  // end of 0's universe. 67 vertices, 99 arcs, 33 triangles: 199 simplices.
+  it("199 passes, 198 stops", () => {
+    const sources = [...Array.from({ length: 66 }, () => 0), ...Array.from({ length: 33 }, (_, i) => 2 * i + 1)];
+    const targets = [...Array.from({ length: 66 }, (_, i) => i + 1), ...Array.from({ length: 33 }, (_, i) => 2 * i + 2)];
+    const g = fromEdgeList({ n: 67, directed: true, sources, targets, weights: sources.map(() => 1) });
+    expect(Array.from(count(g, undefined, 199).counts)).toEqual([67, 99, 33]);
+    expect(() => count(g, undefined, 198)).toThrow(SimplexBudgetError);
+  });
+});
+
 describe("the closed form itself", () => {
   it("equal parts give C(r, k+1)·a^(k+1), as count-simplices.test.ts states it", () => {
     expect(expectedCounts([4, 4, 4], "undirected")).toEqual([1, 2, 3].map((j) => binomial(3, j) * 4 ** j));

@@ -102,7 +102,11 @@ function checkParticipation(m: Multipartite, mode: Mode): void {
   const r = countSimplices(graph, { participation: true, edgeParticipation: true });
   const top = sizes.length - 1;
   const orders = (k: number) => (mode === "both" ? factorial(k + 1) : 1);
-  expect(Array.from(r.counts)).toEqual(elementary(sizes).slice(1).map((c, k) => c * orders(k)));
+  expect(Array.from(r.counts)).toEqual(
+    elementary(sizes)
+      .slice(1)
+      .map((c, k) => c * orders(k)),
+  );
   const p = r.participation!;
   expect(p.member.length).toBe(top + 1);
   // expected rows, compared whole (one assertion per row)
@@ -127,11 +131,20 @@ function checkParticipation(m: Multipartite, mode: Mode): void {
       sink[k][v] = mode === "both" ? at(others, k) * factorial(k) : at(beforeE, k);
     }
   }
-  expect(p.member.map((row) => Array.from(row)), "member").toEqual(member);
+  expect(
+    p.member.map((row) => Array.from(row)),
+    "member",
+  ).toEqual(member);
   if (mode === "undirected") expect(p.source).toBeUndefined();
   else {
-    expect(p.source!.map((row) => Array.from(row)), "source").toEqual(source);
-    expect(p.sink!.map((row) => Array.from(row)), "sink").toEqual(sink);
+    expect(
+      p.source!.map((row) => Array.from(row)),
+      "source",
+    ).toEqual(source);
+    expect(
+      p.sink!.map((row) => Array.from(row)),
+      "sink",
+    ).toEqual(sink);
   }
   const edges = Array.from({ length: top + 1 }, () => new Array<number>(graph.targets.length).fill(0));
   for (let u = 0; u < graph.n; u++) {
@@ -141,16 +154,31 @@ function checkParticipation(m: Multipartite, mode: Mode): void {
         edges[k][s] = at(rest, k - 1) * (mode === "both" ? factorial(k + 1) / 2 : 1);
     }
   }
-  expect(r.edgeParticipation!.map((row) => Array.from(row)), "edges").toEqual(edges);
+  expect(
+    r.edgeParticipation!.map((row) => Array.from(row)),
+    "edges",
+  ).toEqual(edges);
 }
 
 describe("node and edge participation against the multipartite closed forms", () => {
   // [sizes, modes]: largest local universe (later or out-neighbours) beside each
   const cases: [number[], Mode[]][] = [
-    [[1, 2, 3, 4, 5], ["undirected", "ordered", "both"]], // one word
-    [[2, 3, 4, 6, 7, 9, 11], ["undirected", "ordered"]], // 30–40: one and two words
-    [[20, 20, 20], ["undirected", "ordered", "both"]], // 40: two words
-    [[1, 36, 36], ["undirected", "ordered"]], // 72: three words
+    [
+      [1, 2, 3, 4, 5],
+      ["undirected", "ordered", "both"],
+    ], // one word
+    [
+      [2, 3, 4, 6, 7, 9, 11],
+      ["undirected", "ordered"],
+    ], // 30–40: one and two words
+    [
+      [20, 20, 20],
+      ["undirected", "ordered", "both"],
+    ], // 40: two words
+    [
+      [1, 36, 36],
+      ["undirected", "ordered"],
+    ], // 72: three words
   ];
   for (const [sizes, modes] of cases) {
     for (const mode of modes) {
@@ -175,9 +203,18 @@ function sweepExpected(sizes: number[], t: number, joinedToLater: boolean, mode:
 
 describe("the sweep's threshold bins against the multipartite closed forms", () => {
   const cases: [number[], Mode[]][] = [
-    [[1, 2, 3, 4, 5, 6], ["undirected", "ordered", "both"]],
-    [[3, 5, 7, 9, 11, 13], ["undirected", "ordered"]], // lists up to 45: two words
-    [[2, 3, 33, 34], ["undirected", "ordered"]], // up to 72: three words
+    [
+      [1, 2, 3, 4, 5, 6],
+      ["undirected", "ordered", "both"],
+    ],
+    [
+      [3, 5, 7, 9, 11, 13],
+      ["undirected", "ordered"],
+    ], // lists up to 45: two words
+    [
+      [2, 3, 33, 34],
+      ["undirected", "ordered"],
+    ], // up to 72: three words
   ];
   for (const [sizes, modes] of cases) {
     for (const mode of modes) {

@@ -60,7 +60,13 @@ function multipartite(sizes: number[], mode: Mode, seed: number, apex = false): 
     targets.push(v);
   }
   const size = apex ? n + 1 : n;
-  return fromEdgeList({ n: size, directed: mode !== "undirected", sources, targets, weights: sources.map(() => 1) });
+  return fromEdgeList({
+    n: size,
+    directed: mode !== "undirected",
+    sources,
+    targets,
+    weights: sources.map(() => 1),
+  });
 }
 
 /** k-simplices for k = 0 … r − 1: e_{k+1}(sizes), times (k+1)! with both arcs (see the header). */
@@ -202,20 +208,7 @@ describe("a cut seen only in a two- or three-word universe, after a set with no 
       weights: arcs.map(() => 1),
     });
   const star = (k: number): [number, number][] => Array.from({ length: k }, (_, i) => [0, i + 1]);
-  const a = graphOf(
-    [
-      ...star(33),
-      [1, 2],
-      [1, 3],
-      [2, 3],
-      [33, 4],
-      [33, 5],
-      [6, 7],
-      [6, 33],
-      [7, 33],
-    ],
-    34,
-  );
+  const a = graphOf([...star(33), [1, 2], [1, 3], [2, 3], [33, 4], [33, 5], [6, 7], [6, 33], [7, 33]], 34);
   const b = graphOf([...star(65), [1, 2], [1, 3], [2, 3], [65, 4], [65, 5]], 66);
   it("A, two words", () => {
     expect(Array.from(count(a).counts)).toEqual([34, 41, 10, 2]);
@@ -304,8 +297,14 @@ describe("a budget passed only by a wide universe's last tally", () => {
   // after 0 has one member, so no deeper level runs, and the triangles (0, 2i − 1, 2i) are tallied at the
   // end of 0's universe. 67 vertices, 99 arcs, 33 triangles: 199 simplices.
   it("199 passes, 198 stops", () => {
-    const sources = [...Array.from({ length: 66 }, () => 0), ...Array.from({ length: 33 }, (_, i) => 2 * i + 1)];
-    const targets = [...Array.from({ length: 66 }, (_, i) => i + 1), ...Array.from({ length: 33 }, (_, i) => 2 * i + 2)];
+    const sources = [
+      ...Array.from({ length: 66 }, () => 0),
+      ...Array.from({ length: 33 }, (_, i) => 2 * i + 1),
+    ];
+    const targets = [
+      ...Array.from({ length: 66 }, (_, i) => i + 1),
+      ...Array.from({ length: 33 }, (_, i) => 2 * i + 2),
+    ];
     const g = fromEdgeList({ n: 67, directed: true, sources, targets, weights: sources.map(() => 1) });
     expect(Array.from(count(g, undefined, 199).counts)).toEqual([67, 99, 33]);
     expect(() => count(g, undefined, 198)).toThrow(SimplexBudgetError);
@@ -340,7 +339,9 @@ describe("a local universe too large for its bit matrix is refused before anythi
       targets: Array.from({ length: arcs }, (_, i) => i + 1),
       weights: new Array<number>(arcs).fill(1),
     });
-    expect(() => countSimplices(star, { kernel: "typescript" })).toThrow(/a local universe of 92682 vertices/);
+    expect(() => countSimplices(star, { kernel: "typescript" })).toThrow(
+      /a local universe of 92682 vertices/,
+    );
     expect(() => countSimplices(star, { participation: true })).toThrow(/a local universe of 92682 vertices/);
   });
 });

@@ -7,9 +7,9 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { deflateSync, zlibSync } from "fflate";
 import { afterAll, describe, expect, it } from "vitest";
-import { InputFileError } from "../input-file-error.js";
 import { readGraphFile } from "../read-graph-file.js";
 import { encodeNpz } from "../write/encode-npz.js";
+import { concat, errorOf, matFile, matrixElement } from "./mat-bytes.fixture.js";
 import { readNpzFile } from "./read-npz.js";
 
 const dir = mkdtempSync(join(tmpdir(), "cliquescape-bad-"));
@@ -19,91 +19,6 @@ const put = (name: string, bytes: Uint8Array) => {
   writeFileSync(path, bytes);
   return path;
 };
-
-/** A Level 5 MAT-file with one double matrix, column-major, in either byte order, optionally compressed. */
-function matFile(
-  name: string,
-  rows: number,
-  cols: number,
-  values: number[],
-  littleEndian: boolean,
-  compress: boolean,
-) {
-  const element = matrixElement(name, rows, cols, values, littleEndian);
-  const header = new Uint8Array(128).fill(0x20);
-  const text = "MATLAB 5.0 MAT-file, built by a test";
-  for (let k = 0; k < text.length; k++) header[k] = text.charCodeAt(k);
-  const view = new DataView(header.buffer);
-  view.setUint16(124, 0x0100, littleEndian);
-  header.set(littleEndian ? [0x49, 0x4d] : [0x4d, 0x49], 126); // "IM" as written by the machine's order
-  if (!compress) return concat(header, element);
-  const packed = zlibSync(element);
-  const tag = new Uint8Array(8);
-  new DataView(tag.buffer).setUint32(0, 15, littleEndian);
-  new DataView(tag.buffer).setUint32(4, packed.length, littleEndian);
-  return concat(header, tag, packed);
-}
-
-function matrixElement(
-  name: string,
-  rows: number,
-  cols: number,
-  values: number[],
-  le: boolean,
-  storage: "miDOUBLE" | "miUINT8" = "miDOUBLE",
-): Uint8Array {
-  const sub = (type: number, data: Uint8Array) => {
-    const tag = new Uint8Array(8 + Math.ceil(data.length / 8) * 8);
-    const view = new DataView(tag.buffer);
-    view.setUint32(0, type, le);
-    view.setUint32(4, data.length, le);
-    tag.set(data, 8);
-    return tag;
-  };
-  const flags = new Uint8Array(8);
-  new DataView(flags.buffer).setUint32(0, 6, le); // mxDOUBLE_CLASS, no flags
-  const dims = new Uint8Array(8);
-  new DataView(dims.buffer).setInt32(0, rows, le);
-  new DataView(dims.buffer).setInt32(4, cols, le);
-  // MATLAB may store a double array's values in a smaller type when they fit (format document, "Numeric
-  // Arrays"): the class stays double.
-  const size = storage === "miDOUBLE" ? 8 : 1;
-  const data = new Uint8Array(values.length * size);
-  for (const [k, v] of values.entries()) {
-    if (size === 8) new DataView(data.buffer).setFloat64(k * 8, v, le);
-    else data[k] = v;
-  }
-  const body = concat(
-    sub(6, flags),
-    sub(5, dims),
-    sub(1, new TextEncoder().encode(name)),
-    sub(storage === "miDOUBLE" ? 9 : 2, data),
-  );
-  const tag = new Uint8Array(8);
-  new DataView(tag.buffer).setUint32(0, 14, le);
-  new DataView(tag.buffer).setUint32(4, body.length, le);
-  return concat(tag, body);
-}
-
-function concat(...parts: Uint8Array[]): Uint8Array {
-  const out = new Uint8Array(parts.reduce((a, p) => a + p.length, 0));
-  let at = 0;
-  for (const p of parts) {
-    out.set(p, at);
-    at += p.length;
-  }
-  return out;
-}
-
-function errorOf(read: () => unknown): InputFileError {
-  try {
-    read();
-  } catch (error) {
-    if (error instanceof InputFileError) return error;
-    throw error;
-  }
-  throw new Error("no error was thrown");
-}
 
 // A directed 3-node matrix in column-major order: M(1,2) = 0.5, M(2,3) = 0.25, M(3,1) = 2.
 const COLUMN_MAJOR = [0, 0, 2, 0.5, 0, 0, 0, 0.25, 0];

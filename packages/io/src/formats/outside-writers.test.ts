@@ -72,6 +72,20 @@ for name, g in [("und", G), ("dir", D)]:
     nx.write_graphml(g, f"{d}/{name}.graphml"); nx.write_gexf(g, f"{d}/{name}.gexf")
     out[name] = {"nodes": list(g.nodes()), "directed": g.is_directed(),
                  "edges": [[u, v, a["weight"], a.get("strength")] for u, v, a in g.edges(data=True)]}
+# A compressed variable of 12800 bytes: more than the 4096 read first for its header (issue 14).
+big = directed(40)
+sio.savemat(f"{d}/big.mat", {"W": big}, do_compression=True)
+record("big.mat", [big])
+# An n×n×n cube: read as MATLAB's convention, with a warning.
+sio.savemat(f"{d}/cube.mat", {"A": np.stack([sym(4) for _ in range(4)], axis=2)})
+sio.savemat(f"{d}/none.mat", {})
+nan = sym(4); nan[1, 2] = np.nan
+sio.savemat(f"{d}/nan.mat", {"C": nan})
+np.savez(f"{d}/nan.npz", w=nan)
+np.savez(f"{d}/vectors.npz", s=np.float64(2.5), v=np.arange(3))
+import zipfile
+with zipfile.ZipFile(f"{d}/no-arrays.npz", "w") as z:
+    z.writestr("notes.txt", "no arrays here")
 # A flipped bit, in a stored member's data or in the CRC-32 the central directory keeps for it: Python's
 # zipfile (under numpy.load) refuses both with BadZipFile; we must refuse them too.
 np.savez(f"{d}/flip-data.npz", w=m)
@@ -145,6 +159,7 @@ describe.skipIf(missing !== null)(
       ["type-i64.mat", "type-i64.mat", {}, false],
       ["type-single.mat", "type-single.mat", {}, false],
       ["type-logical.mat", "type-logical.mat", {}, false],
+      ["big.mat", "big.mat", {}, true],
     ];
     it.each(matrixCases)("%s reads back exactly", (key, file, options, directed) => {
       const expected = cases[key];
@@ -209,6 +224,51 @@ describe.skipIf(missing !== null)(
     ])("refuses %s with its class named", (file, variable, message) => {
       expect(() => readGraphFile(join(dir, file))).toThrow(/has no real numeric 2-D or 3-D variable/);
       expect(() => readGraphFile(join(dir, file), { variable })).toThrow(message);
+    });
+
+    it("says what a MAT-file holds when nothing can be read, and where a refused variable starts", () => {
+      const none = join(dir, "none.mat");
+      expect(() => readGraphFile(none)).toThrow(
+        `${none}: the MAT-file has no real numeric 2-D or 3-D variable; name the one to read (variable option); its variables are: none`,
+      );
+      expect(() => readGraphFile(none, { variable: "X" })).toThrow(
+        `${none}: the MAT-file has no variable "X"; its variables are: none`,
+      );
+      const complex = join(dir, "complex.mat");
+      expect(() => readGraphFile(complex)).toThrow(/its variables are: Z \(6×6 complex double\)$/);
+      // scipy writes the first variable right after the 128-byte header.
+      expect(() => readGraphFile(complex, { variable: "Z" })).toThrow(
+        `${complex}: byte 128: variable "Z" is complex double;`,
+      );
+    });
+
+    it("an n×n×n MAT variable is read as n graphs A(:,:,k), with a warning; n×n×k without one", () => {
+      const cube = readGraphFile(join(dir, "cube.mat"));
+      expect(cube.graphs).toHaveLength(4);
+      expect(cube.warnings).toEqual(['variable "A" is 4×4×4: read as 4 graphs A(:,:,k)']);
+      expect(readGraphFile(join(dir, "stack-matlab.mat")).warnings).toEqual([]);
+      expect(readGraphFile(join(dir, "plain.mat")).warnings).toEqual([]);
+    });
+
+    it("an error inside a .mat or .npz matrix names the variable or array and the element, not a byte", () => {
+      // numpy's (1, 2) is MATLAB's C(2, 3): 0-based (1, 2) either way.
+      const mat = join(dir, "nan.mat");
+      expect(() => readGraphFile(mat, { nanIsNoEdge: false })).toThrow(
+        `${mat}: element (1, 2): variable "C": NaN is not a finite weight`,
+      );
+      const npz = join(dir, "nan.npz");
+      expect(() => readGraphFile(npz, { nanIsNoEdge: false })).toThrow(
+        `${npz}: element (1, 2): array "w": NaN is not a finite weight`,
+      );
+    });
+
+    it("an .npz without a matrix, or without arrays at all, says so", () => {
+      const vectors = join(dir, "vectors.npz");
+      expect(() => readGraphFile(vectors)).toThrow(
+        `${vectors}: the .npz has no 2-D or 3-D numeric array; name the one to read (array option); its arrays are: s (scalar <f8), v (3 <i8)`,
+      );
+      const empty = join(dir, "no-arrays.npz");
+      expect(() => readGraphFile(empty)).toThrow(`${empty}: the .npz archive holds no .npy arrays`);
     });
 
     it.each(["graphml", "gexf"])(

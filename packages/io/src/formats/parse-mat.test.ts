@@ -22,18 +22,29 @@ import { parseMat } from "./parse-mat.js";
 
 const FILE = "t.mat";
 const BIG = 2 ** 31;
-const parse = (bytes: Uint8Array, maxBytes = BIG, maxCells?: number) => parseMat(bytes, FILE, maxBytes, maxCells);
+const parse = (bytes: Uint8Array, maxBytes = BIG, maxCells?: number) =>
+  parseMat(bytes, FILE, maxBytes, maxCells);
 
 /** An miMATRIX of class double with the given dimensions and name, all values 0 (compresses to little). */
 function zeros(name: string, dims: number[]): Uint8Array {
   const count = dims.reduce((a, b) => a * b, 1);
-  return miMatrix([flagsElement(6), dimsElement(dims), nameElement(name), doublesElement(new Array(count).fill(0))]);
+  return miMatrix([
+    flagsElement(6),
+    dimsElement(dims),
+    nameElement(name),
+    doublesElement(new Array(count).fill(0)),
+  ]);
 }
 
 /** The doubles of a variable's array, in its (column-major) order. */
-function doublesOf(array: NonNullable<ReturnType<typeof parseMat>[number]["array"]>, count: number): number[] {
+function doublesOf(
+  array: NonNullable<ReturnType<typeof parseMat>[number]["array"]>,
+  count: number,
+): number[] {
   const view = new DataView(array.bytes.buffer, array.bytes.byteOffset, array.bytes.byteLength);
-  return Array.from({ length: count }, (_, k) => view.getFloat64(array.dataOffset + 8 * k, array.dtype.littleEndian));
+  return Array.from({ length: count }, (_, k) =>
+    view.getFloat64(array.dataOffset + 8 * k, array.dtype.littleEndian),
+  );
 }
 
 describe("parseMat: headers that are not Level 5", () => {
@@ -43,7 +54,9 @@ describe("parseMat: headers that are not Level 5", () => {
     hdf5.set([0x89, 0x48, 0x44, 0x46, 0x0d, 0x0a, 0x1a, 0x0a]);
     const e = errorOf(() => parse(hdf5));
     expect(e.problem).toBe("unknown-format");
-    expect(e.message).toBe(`${FILE}: a MATLAB 7.3 MAT-file (HDF5) is not read; save it with save(..., '-v7')`);
+    expect(e.message).toBe(
+      `${FILE}: a MATLAB 7.3 MAT-file (HDF5) is not read; save it with save(..., '-v7')`,
+    );
     // A second byte "H" alone does not make a file HDF5.
     const text = new TextEncoder().encode("THE MATRIX\n1 2\n2 1\n");
     expect(errorOf(() => parse(text)).message).toBe(
@@ -75,14 +88,36 @@ describe("parseMat: miMATRIX elements", () => {
     // Format document, "MATLAB Array Types and Classes": 1 cell … 15 uint64; 16 and 17 as scipy.io.matlab's
     // _mio5_params names them (mxFUNCTION_CLASS = 16, mxOPAQUE_CLASS = 17; python3-scipy 1.17.1).
     const names = [
-      "cell", "struct", "object", "char", "sparse", "double", "single", "int8", "uint8", "int16", "uint16",
-      "int32", "uint32", "int64", "uint64", "function handle", "opaque",
+      "cell",
+      "struct",
+      "object",
+      "char",
+      "sparse",
+      "double",
+      "single",
+      "int8",
+      "uint8",
+      "int16",
+      "uint16",
+      "int32",
+      "uint32",
+      "int64",
+      "uint64",
+      "function handle",
+      "opaque",
     ];
     const parts = names.map((_, k) =>
       miMatrix([flagsElement(k + 1), dimsElement([1, 1]), nameElement(`v${k + 1}`), doublesElement([k + 1])]),
     );
     // Logical: flag 0x02 over class uint8, one byte per value.
-    parts.push(miMatrix([flagsElement(9, 0x02), dimsElement([1, 1]), nameElement("b"), element(2, new Uint8Array([1]))]));
+    parts.push(
+      miMatrix([
+        flagsElement(9, 0x02),
+        dimsElement([1, 1]),
+        nameElement("b"),
+        element(2, new Uint8Array([1])),
+      ]),
+    );
     parts.push(miMatrix([flagsElement(20), dimsElement([1, 1]), nameElement("odd")]));
     const variables = parse(concat(matHeader(), ...parts));
     expect(variables.map((v) => [v.name, v.className])).toEqual([
@@ -146,7 +181,9 @@ describe("parseMat: miMATRIX elements", () => {
     new DataView(tag.buffer).setUint32(4, 100, true);
     const e = errorOf(() => parse(concat(matHeader(), tag, new Uint8Array(10))));
     expect(e.problem).toBe("truncated");
-    expect(e.message).toBe(`${FILE}: byte 128: file is truncated: a type 2 element declares 100 bytes but only 10 follow`);
+    expect(e.message).toBe(
+      `${FILE}: byte 128: file is truncated: a type 2 element declares 100 bytes but only 10 follow`,
+    );
   });
 });
 
@@ -171,7 +208,13 @@ describe("parseMat: miCOMPRESSED elements", () => {
   });
 
   it("a bad tag where a compressed variable's data starts is placed at the compressed element", () => {
-    const inner = miMatrix([flagsElement(6), dimsElement([1, 1]), nameElement("D"), BAD_TAG, new Uint8Array(8)]);
+    const inner = miMatrix([
+      flagsElement(6),
+      dimsElement([1, 1]),
+      nameElement("D"),
+      BAD_TAG,
+      new Uint8Array(8),
+    ]);
     const first = matrixElement("A", 1, 1, [1], true);
     expect(first.length).toBe(72);
     const e = errorOf(() => parse(concat(matHeader(), first, compressedElement(inner))));
@@ -196,7 +239,12 @@ describe("parseMat: miCOMPRESSED elements", () => {
 
   it("a zlib stream cut short at exactly 1024 bytes cannot be unpacked", () => {
     // 248 doubles: an element of 2056 bytes, one stored block; the stream stops inside it.
-    const inner = miMatrix([flagsElement(6), dimsElement([1, 248]), nameElement("v"), doublesElement(new Array(248).fill(1))]);
+    const inner = miMatrix([
+      flagsElement(6),
+      dimsElement([1, 248]),
+      nameElement("v"),
+      doublesElement(new Array(248).fill(1)),
+    ]);
     const stream = storedZlib(inner).subarray(0, 1024);
     const e = errorOf(() => parse(concat(matHeader(), compressedElement(inner, true, stream))));
     expect(e.problem).toBe("truncated");
@@ -208,7 +256,12 @@ describe("parseMat: miCOMPRESSED elements", () => {
   it("a zlib stream of exactly 1024 bytes is read whole", () => {
     // 118 doubles: an element of 1008 bytes in two stored blocks, 2 + 509 + 509 + 4 = 1024 bytes.
     const values = Array.from({ length: 118 }, (_, k) => k + 0.5);
-    const inner = miMatrix([flagsElement(6), dimsElement([1, 118]), nameElement("v"), doublesElement(values)]);
+    const inner = miMatrix([
+      flagsElement(6),
+      dimsElement([1, 118]),
+      nameElement("v"),
+      doublesElement(values),
+    ]);
     expect(inner.length).toBe(1008);
     const stream = storedZlib(inner, [504]);
     expect(stream.length).toBe(1024);
@@ -218,7 +271,12 @@ describe("parseMat: miCOMPRESSED elements", () => {
   });
 
   it("a compressed variable whose stream holds less than it declares is truncated, with the byte counts", () => {
-    const parts = [flagsElement(6), dimsElement([3, 3]), nameElement("M"), doublesElement(new Array(9).fill(2))];
+    const parts = [
+      flagsElement(6),
+      dimsElement([3, 3]),
+      nameElement("M"),
+      doublesElement(new Array(9).fill(2)),
+    ];
     const body = concat(...parts);
     expect(body.length).toBe(128);
     const e = errorOf(() => parse(concat(matHeader(), compressedElement(miMatrix(parts, true, 928)))));
@@ -324,7 +382,12 @@ describe("parseMat: the limits on compressed variables", () => {
   });
 
   it("negative dimensions are refused as such, not by maxCells", () => {
-    const inner = miMatrix([flagsElement(6), dimsElement([-10000, -10000, 2]), nameElement("N"), doublesElement([])]);
+    const inner = miMatrix([
+      flagsElement(6),
+      dimsElement([-10000, -10000, 2]),
+      nameElement("N"),
+      doublesElement([]),
+    ]);
     const e = errorOf(() => parse(concat(matHeader(), compressedElement(inner))));
     expect(e.problem).toBe("bad-header");
     expect(e.message).toBe(`${FILE}: byte 128: variable "N" has a negative dimension (-10000×-10000×2)`);

@@ -57,7 +57,8 @@ export function flagsElement(classNumber: number, flags = 0, le = true): Uint8Ar
 /** Dimensions as an miINT32 (5) sub-element. */
 export function dimsElement(dims: number[], le = true): Uint8Array {
   const data = new Uint8Array(4 * dims.length);
-  dims.forEach((d, k) => new DataView(data.buffer).setInt32(4 * k, d, le));
+  const view = new DataView(data.buffer);
+  for (const [k, d] of dims.entries()) view.setInt32(4 * k, d, le);
   return element(5, data, le);
 }
 
@@ -69,7 +70,8 @@ export function nameElement(name: string, le = true): Uint8Array {
 /** Float64 values as an miDOUBLE (9) sub-element. */
 export function doublesElement(values: number[], le = true): Uint8Array {
   const data = new Uint8Array(8 * values.length);
-  values.forEach((v, k) => new DataView(data.buffer).setFloat64(8 * k, v, le));
+  const view = new DataView(data.buffer);
+  for (const [k, v] of values.entries()) view.setFloat64(8 * k, v, le);
   return element(9, data, le);
 }
 

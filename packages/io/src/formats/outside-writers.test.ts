@@ -76,6 +76,10 @@ for name, g in [("und", G), ("dir", D)]:
 big = directed(40)
 sio.savemat(f"{d}/big.mat", {"W": big}, do_compression=True)
 record("big.mat", [big])
+# 80000 bytes of random doubles: more than one 64 KiB step of compressed input, so several inflated pieces.
+large = directed(100)
+sio.savemat(f"{d}/large.mat", {"W": large}, do_compression=True)
+record("large.mat", [large])
 # An n×n×n cube: read as MATLAB's convention, with a warning.
 sio.savemat(f"{d}/cube.mat", {"A": np.stack([sym(4) for _ in range(4)], axis=2)})
 sio.savemat(f"{d}/none.mat", {})
@@ -160,6 +164,7 @@ describe.skipIf(missing !== null)(
       ["type-single.mat", "type-single.mat", {}, false],
       ["type-logical.mat", "type-logical.mat", {}, false],
       ["big.mat", "big.mat", {}, true],
+      ["large.mat", "large.mat", {}, true],
     ];
     it.each(matrixCases)("%s reads back exactly", (key, file, options, directed) => {
       const expected = cases[key];

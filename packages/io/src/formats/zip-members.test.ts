@@ -6,7 +6,7 @@ import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { deflateSync } from "fflate";
-import { afterAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { missingPythonModules, PYTHON } from "../../../../test/support/python.js";
 import { errorOf } from "./mat-bytes.fixture.js";
 import { zipArchive } from "./zip-bytes.fixture.js";

@@ -172,3 +172,207 @@ describe("GraphML and GEXF weights follow the text readers' number rules", () =>
     }
   });
 });
+
+// Issue 14, the survivors of the io-fmt-xml mutation run: GEXF 1.3 edge attributes (<attributes
+// class="edge">, <attvalue for=…> or the older id=…, <default>) and GraphML keys (<key for="edge">, <default>),
+// each written so that a weight found in the wrong place, or left to graphology's parser (which casts with
+// +text), changes what is read; and the messages of the reader's own checks. Documents written by hand from
+// the GEXF 1.3 schema (gexf.net) and the GraphML Primer.
+describe("weights from GEXF attributes and GraphML keys", () => {
+  const gexfOf = (attributes: string, edges: string) => `<?xml version="1.0" encoding="UTF-8"?>
+<gexf xmlns="http://gexf.net/1.3" version="1.3">
+  <graph defaultedgetype="directed">
+    ${attributes}
+    <nodes><node id="a"/><node id="b"/><node id="c"/></nodes>
+    <edges>
+${edges}
+    </edges>
+  </graph>
+</gexf>
+`;
+  const strength = (fallback: string) =>
+    `<attributes class="edge"><attribute id="s" title="strength" type="double"><default>${fallback}</default></attribute></attributes>`;
+  const weights = (path: string, format: "gexf" | "graphml", weightAttribute?: string) => {
+    const graph = readXmlGraphFile(path, format, weightAttribute ? { weightAttribute } : {}).graphs[0];
+    const out: string[] = [];
+    for (let u = 0; u < graph.n; u++) {
+      for (let e = graph.offsets[u]; e < graph.offsets[u + 1]; e++)
+        out.push(`${u}>${graph.targets[e]}:${graph.weights[e]}`);
+    }
+    return out;
+  };
+
+  it("GEXF: an attvalue's text (for= or id=) and the attribute's default follow the number rules", () => {
+    for (const [name, attr] of [
+      ["for", "for"],
+      ["id", "id"],
+    ]) {
+      const path = put(
+        `att-${name}.gexf`,
+        gexfOf(
+          strength("1"),
+          `<edge id="e0" source="a" target="b"><attvalues><attvalue ${attr}="s" value="0x10"/></attvalues></edge>`,
+        ),
+      );
+      expect(() => readXmlGraphFile(path, "gexf", { weightAttribute: "strength" })).toThrow(
+        'edge "e0" (a -> b): weight "0x10" is not a number',
+      );
+    }
+    const fallback = put(
+      "att-default.gexf",
+      gexfOf(strength("0x2"), `<edge id="e1" source="b" target="c"/>`),
+    );
+    expect(() => readXmlGraphFile(fallback, "gexf", { weightAttribute: "strength" })).toThrow(
+      'edge "e1" (b -> c): weight "0x2" is not a number',
+    );
+  });
+
+  it("GEXF: only edge attributes count, and the weight= XML attribute only for the attribute weight", () => {
+    const nodeStrength = `<attributes class="node"><attribute id="ns" title="strength" type="double"><default>0x3</default></attribute></attributes>`;
+    const path = put(
+      "att-classes.gexf",
+      gexfOf(
+        `${strength("1.5")}${nodeStrength}`,
+        `<edge id="e0" source="a" target="b" weight="7"/>
+<edge id="e1" source="b" target="c" weight="8"><attvalues><attvalue for="s" value="2.5"/></attvalues></edge>`,
+      ),
+    );
+    expect(weights(path, "gexf", "strength")).toEqual(["0>1:1.5", "1>2:2.5"]);
+    expect(weights(path, "gexf")).toEqual(["0>1:7", "1>2:8"]);
+  });
+
+  const graphmlOf = (keys: string, edges: string) => `<?xml version="1.0" encoding="UTF-8"?>
+<graphml xmlns="http://graphml.graphdrawing.org/xmlns">
+  ${keys}
+  <graph id="G" edgedefault="undirected">
+    <node id="a"/><node id="b"/><node id="c"/>
+${edges}
+  </graph>
+</graphml>
+`;
+
+  it("GraphML: the weight key's default follows the number rules", () => {
+    const path = put(
+      "key-default.graphml",
+      graphmlOf(
+        `<key id="w" for="edge" attr.name="weight"><default>0x2</default></key>`,
+        `<edge id="e1" source="a" target="b"/>`,
+      ),
+    );
+    expect(() => readXmlGraphFile(path, "graphml")).toThrow(
+      'edge "e1" (a -- b): weight "0x2" is not a number',
+    );
+  });
+
+  it("GraphML: only the edge key named by the attribute gives the default", () => {
+    const keys = `<key id="w" for="edge" attr.name="weight"><default>2</default></key>
+  <key id="c" for="edge" attr.name="color"><default>red</default></key>
+  <key id="nw" for="node" attr.name="weight"><default>0x5</default></key>`;
+    const path = put(
+      "key-classes.graphml",
+      graphmlOf(
+        keys,
+        `<edge id="e1" source="a" target="b"/><edge id="e2" source="b" target="c"><data key="w">3</data></edge>`,
+      ),
+    );
+    expect(weights(path, "graphml")).toEqual(["0>1:2", "1>0:2", "1>2:3", "2>1:3"]);
+  });
+});
+
+describe("the XML reader's messages", () => {
+  it("an edge without an id, source or target is named as written", () => {
+    const noId = put("no-id.graphml", graphml(`<edge source="a" target="b"><data key="w">abc</data></edge>`));
+    expect(() => readXmlGraphFile(noId, "graphml")).toThrow(
+      `${noId}:6:1: edge (a -- b): weight "abc" is not a number`,
+    );
+    const noSource = put("no-source.graphml", graphml(`<edge id="e1" target="b"/>`));
+    expect(() => readXmlGraphFile(noSource, "graphml")).toThrow(
+      `${noSource}:6:1: edge "e1" ( -- b): node "" is not declared by a <node> element`,
+    );
+    const noTarget = put("no-target.graphml", graphml(`<edge id="e1" source="a"/>`));
+    expect(() => readXmlGraphFile(noTarget, "graphml")).toThrow(
+      `${noTarget}:6:1: edge "e1" (a -- ): node "" is not declared by a <node> element`,
+    );
+  });
+
+  it("a GraphML file read as GEXF, and a file of two graphs, are refused", () => {
+    const path = put("as-gexf.gexf", graphml(""));
+    expect(() => readXmlGraphFile(path, "gexf")).toThrow(
+      `${path}: the root element is <graphml>, not <gexf>: not a GEXF file`,
+    );
+    const two = put(
+      "two.graphml",
+      `<graphml xmlns="http://graphml.graphdrawing.org/xmlns"><graph edgedefault="undirected"><node id="a"/></graph><graph edgedefault="undirected"><node id="b"/></graph></graphml>`,
+    );
+    const e = (() => {
+      try {
+        readXmlGraphFile(two, "graphml");
+      } catch (error) {
+        return error as { problem: string; message: string };
+      }
+      throw new Error("no error");
+    })();
+    expect(e.problem).toBe("bad-header");
+    expect(e.message).toBe(`${two}: the file holds 2 <graph> elements; exactly one is read`);
+  });
+
+  it("warns only when the options ask for the other direction than the file's", () => {
+    const und = put("und.graphml", graphml(`<edge source="a" target="b"/>`));
+    expect(readXmlGraphFile(und, "graphml", { directed: true }).warnings).toEqual([
+      "the file declares undirected edges; read them as such, not as directed",
+    ]);
+    expect(readXmlGraphFile(und, "graphml", { directed: false }).warnings).toEqual([]);
+    const dir = put("dir2.gexf", gexf(`<edge id="0" source="a" target="b" weight="0.5"/>`));
+    expect(readXmlGraphFile(dir, "gexf", { directed: true }).warnings).toEqual([]);
+  });
+
+  it("counts the edges dropped as weight 0 or NaN", () => {
+    const path = put(
+      "two-zeros.gexf",
+      gexf(
+        `<edge id="0" source="a" target="b" weight="0"/><edge id="1" source="b" target="c" weight="NaN"/>`,
+      ),
+    );
+    expect(readXmlGraphFile(path, "gexf").warnings).toEqual(["2 edges of weight 0 or NaN read as no edge"]);
+  });
+
+  it("a negative weight and a repeated edge carry their own problem codes", () => {
+    const codeOf = (path: string, format: "gexf" | "graphml", options = {}) => {
+      try {
+        readXmlGraphFile(path, format, options);
+      } catch (error) {
+        return [(error as { problem: string }).problem, (error as Error).message];
+      }
+      return ["none", ""];
+    };
+    const negative = put(
+      "negative.graphml",
+      graphml(`<edge id="e1" source="a" target="b"><data key="w">-2</data></edge>`),
+    );
+    expect(codeOf(negative, "graphml", { negative: "error" })[0]).toBe("negative-weight");
+    // By default a negative similarity is dropped, with the core's note passed on.
+    expect(readXmlGraphFile(negative, "graphml").warnings).toEqual(["dropped 1 edge with a negative weight"]);
+    const twice = put(
+      "twice.gexf",
+      gexf(
+        `<edge id="e1" source="a" target="b" weight="1"/><edge id="e2" source="a" target="b" weight="2"/>`,
+      ),
+    );
+    const [problem, message] = codeOf(twice, "gexf");
+    expect(problem).toBe("duplicate-edge");
+    expect(message).toMatch(/: edge "e2" \(a -> b\): /);
+  });
+
+  it("XML errors stop the reading; XML warnings do not", () => {
+    // xmldom reports an undefined entity as an error, a missing space between attributes as a warning.
+    const entity = put(
+      "entity.graphml",
+      graphml(`<edge id="e1" source="a" target="b"><data key="w">&foo;</data></edge>`),
+    );
+    expect(() => readXmlGraphFile(entity, "graphml")).toThrow(
+      /entity\.graphml:6:\d+: not well-formed XML: entity not found:&foo;$/,
+    );
+    const spaced = put("spaced.graphml", graphml(`<edge id="e1"source="a" target="b"/>`));
+    expect(readXmlGraphFile(spaced, "graphml").graphs[0].weights.length).toBe(2);
+  });
+});

@@ -218,6 +218,17 @@ ${edges}
         'edge "e0" (a -> b): weight "0x10" is not a number',
       );
     }
+    // An attvalue without a value= is an empty weight, not a missing one.
+    const blank = put(
+      "att-blank.gexf",
+      gexfOf(
+        strength("1"),
+        `<edge id="e2" source="a" target="c"><attvalues><attvalue for="s"/></attvalues></edge>`,
+      ),
+    );
+    expect(() => readXmlGraphFile(blank, "gexf", { weightAttribute: "strength" })).toThrow(
+      'edge "e2" (a -> c): weight strength is empty',
+    );
     const fallback = put(
       "att-default.gexf",
       gexfOf(strength("0x2"), `<edge id="e1" source="b" target="c"/>`),

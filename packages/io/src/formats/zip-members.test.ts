@@ -151,6 +151,14 @@ describe("damaged or unusual central directories", () => {
     );
   });
 
+  it("an archive without members but with a comment has no members (it is a zip all the same)", () => {
+    // Python's zipfile writes such an archive for ZipFile(path, "w") with .comment set and nothing added;
+    // numpy.load lists no arrays in it (checked with Python 3.11 and numpy 2.4 when this test was written).
+    const commented = zipArchive([], { comment: "no arrays" });
+    expect(commented.length).toBe(31);
+    expect(listZipMembers(commented, FILE)).toEqual([]);
+  });
+
   it("a file without an end record is truncated at its length", () => {
     const whole = zipArchive([{ name: "a.npy", stored: a }]);
     const cut = whole.subarray(0, whole.length - 30);

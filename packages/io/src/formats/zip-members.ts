@@ -36,7 +36,8 @@ export function listZipMembers(bytes: Uint8Array, file: string): ZipMemberInfo[]
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   const u32 = (at: number) => (at + 4 <= bytes.length ? view.getUint32(at, true) : -1);
   if (bytes.length === 0) throw new InputFileError(file, "empty-file", "file is empty (0 bytes)");
-  if (u32(0) !== LOCAL_HEADER && !(bytes.length === 22 && u32(0) === END_RECORD)) {
+  // An archive without members is its end record alone, followed by the archive's comment if it has one.
+  if (u32(0) !== LOCAL_HEADER && u32(0) !== END_RECORD) {
     throw new InputFileError(
       file,
       "unknown-format",

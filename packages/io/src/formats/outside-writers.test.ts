@@ -212,6 +212,9 @@ describe.skipIf(missing !== null)(
       expect(() => readGraphFile(join(dir, "named.npz"), { array: "nope" })).toThrow(
         /has no array "nope"; its arrays are: ids, weights, other, vec/,
       );
+      expect(() => readGraphFile(join(dir, "named.npz"), { array: "nope" })).toThrow(
+        expect.objectContaining({ problem: "bad-header" }),
+      );
       expect(() => readGraphFile(join(dir, "named.npz"), { array: "ids" })).toThrow(
         /array "ids": unsupported dtype "<U1"/,
       );

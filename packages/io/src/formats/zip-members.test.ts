@@ -215,6 +215,7 @@ describe("reading a member", () => {
 
   it("a local header that is not there, and data that runs past the end of the file", () => {
     const lost = zipArchive([{ name: "a.npy", stored: a, central: { localHeader: 5 } }]);
+    expect(errorOf(() => read(lost)).problem).toBe("unreadable");
     expect(errorOf(() => read(lost)).message).toBe(
       `${FILE}: byte 5: damaged zip archive: the local header of zip member a.npy is missing`,
     );

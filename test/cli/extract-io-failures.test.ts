@@ -129,6 +129,22 @@ describe("extract into a folder it may not write", () => {
     if (!asRoot) chmodSync(dir, 0o755);
     for (const name of readdirSync(dir)) chmodSync(join(dir, name), 0o644);
     const args = [BIN, "extract", join(dir, "manifest.csv"), "--out", out];
+    if (asRoot) {
+      // User nobody must be able to load the program: a checkout under a private folder (mode 0700, as
+      // mktemp -d makes) would fail here with exit 1 for a reason that has nothing to do with --out.
+      const probe = spawnSync(
+        process.execPath,
+        ["-e", `require("node:fs").accessSync(${JSON.stringify(BIN)})`],
+        {
+          uid: 65534,
+          gid: 65534,
+        },
+      );
+      if (probe.status !== 0) {
+        chmodSync(locked, 0o755);
+        throw new Error(`user nobody cannot read ${BIN}: run the tests from a checkout every user may enter`);
+      }
+    }
     const run = spawnSync(process.execPath, args, {
       encoding: "utf8",
       ...(asRoot ? { uid: 65534, gid: 65534 } : {}),

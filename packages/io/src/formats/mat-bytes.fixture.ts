@@ -3,6 +3,7 @@
 // elements: an 8-byte tag (type, byte count) and data padded to 8 bytes; miMATRIX (14) holds array flags,
 // dimensions, name and real part; miCOMPRESSED (15) holds one zlib-compressed element, unpadded.
 import { zlibSync } from "fflate";
+import { errorOf as sharedErrorOf } from "../../../../test/support/error-of.js";
 import { InputFileError } from "../input-file-error.js";
 
 export function concat(...parts: Uint8Array[]): Uint8Array {
@@ -15,15 +16,8 @@ export function concat(...parts: Uint8Array[]): Uint8Array {
   return out;
 }
 
-export function errorOf(read: () => unknown): InputFileError {
-  try {
-    read();
-  } catch (error) {
-    if (error instanceof InputFileError) return error;
-    throw error;
-  }
-  throw new Error("no error was thrown");
-}
+/** The InputFileError that `read` throws (the shared errorOf, for this one class). */
+export const errorOf = (read: () => unknown): InputFileError => sharedErrorOf(read, InputFileError);
 
 /** The 128-byte header; `indicator` and `version` can be set to wrong values. */
 export function matHeader(littleEndian = true, indicator?: string, version = 0x0100): Uint8Array {

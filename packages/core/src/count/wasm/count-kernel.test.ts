@@ -6,24 +6,12 @@
  */
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { binomial } from "../../../../../test/support/combinatorics.js";
-import { fromEdgeList } from "../../graph/from-edge-list.js";
+import { completeGraph } from "../../../../../test/support/known-graphs.js";
 
 afterEach(() => {
   vi.unstubAllGlobals();
   vi.resetModules();
 });
-
-/** K_n, undirected. */
-function complete(n: number) {
-  const sources: number[] = [];
-  const targets: number[] = [];
-  for (let u = 0; u < n; u++)
-    for (let v = u + 1; v < n; v++) {
-      sources.push(u);
-      targets.push(v);
-    }
-  return fromEdgeList({ n, directed: false, sources, targets, weights: sources.map(() => 1) });
-}
 
 /** Fresh copies of the loader and of countSimplices, which see the globals as stubbed now. */
 async function freshModules() {
@@ -45,7 +33,7 @@ describe("the kernel instance", () => {
     expect(second).not.toBe(first);
     expect(countKernel()).toBe(second);
     const k7 = Array.from({ length: 7 }, (_, k) => binomial(7, k + 1));
-    expect(Array.from(countSimplices(complete(7), { kernel: "webassembly" }).counts)).toEqual(k7);
+    expect(Array.from(countSimplices(completeGraph(7), { kernel: "webassembly" }).counts)).toEqual(k7);
   });
 
   it("is null where WebAssembly refuses to compile the kernel, and counting goes on in TypeScript", async () => {
@@ -65,8 +53,8 @@ describe("the kernel instance", () => {
     expect(countKernel()).toBeNull();
     expect(compiles).toBe(1); // a refusal is remembered, not retried on every count
     const k7 = Array.from({ length: 7 }, (_, k) => binomial(7, k + 1));
-    expect(Array.from(countSimplices(complete(7)).counts)).toEqual(k7);
-    expect(() => countSimplices(complete(7), { kernel: "webassembly" })).toThrow(
+    expect(Array.from(countSimplices(completeGraph(7)).counts)).toEqual(k7);
+    expect(() => countSimplices(completeGraph(7), { kernel: "webassembly" })).toThrow(
       /WebAssembly counting kernel is not available here/,
     );
   });

@@ -19,76 +19,16 @@
  */
 import { describe, expect, it } from "vitest";
 import { factorial } from "../../../../test/support/combinatorics.js";
-import { randomPermutation, seededRandom } from "../../../../test/support/random.js";
+import {
+  elementary,
+  type Mode,
+  type Multipartite,
+  multipartite,
+} from "../../../../test/support/multipartite.js";
 import { explicitGrid } from "../filtration/threshold-grid.js";
-import { fromEdgeList } from "../graph/from-edge-list.js";
-import type { WeightedGraph } from "../graph/weighted-graph.js";
 import { countSimplices } from "./count-simplices.js";
 import { SimplexBudgetError } from "./simplex-budget-error.js";
 import { sweepSimplexCounts } from "./sweep-simplex-counts.js";
-
-type Mode = "undirected" | "ordered" | "both";
-
-interface Multipartite {
-  graph: WeightedGraph;
-  sizes: number[];
-  /** part[v] of each (relabelled) vertex, and its place in the total order of "ordered" */
-  part: Int32Array;
-  rank: Int32Array;
-}
-
-/**
- * Complete multipartite graph, vertices relabelled by a seeded permutation; an edge between parts p < q
- * weighs `weight(p, q)`; "ordered": one arc along a seeded total order (`rank`), "both": both arcs.
- */
-function multipartite(
-  sizes: number[],
-  mode: Mode,
-  seed: number,
-  weight: (p: number, q: number) => number = () => 1,
-): Multipartite {
-  const random = seededRandom(seed);
-  const partOf = sizes.flatMap((size, i) => Array.from({ length: size }, () => i));
-  const n = partOf.length;
-  const name = randomPermutation(n, random);
-  const rank = randomPermutation(n, random);
-  const part = new Int32Array(n);
-  for (let u = 0; u < n; u++) part[name[u]] = partOf[u];
-  const sources: number[] = [];
-  const targets: number[] = [];
-  const weights: number[] = [];
-  for (let a = 0; a < n; a++) {
-    for (let b = a + 1; b < n; b++) {
-      if (part[a] === part[b]) continue;
-      const w = weight(Math.min(part[a], part[b]), Math.max(part[a], part[b]));
-      if (mode === "undirected" || (mode === "ordered" && rank[a] < rank[b])) {
-        sources.push(a);
-        targets.push(b);
-        weights.push(w);
-      } else if (mode === "ordered") {
-        sources.push(b);
-        targets.push(a);
-        weights.push(w);
-      } else {
-        sources.push(a, b);
-        targets.push(b, a);
-        weights.push(w, w);
-      }
-    }
-  }
-  const graph = fromEdgeList({ n, directed: mode !== "undirected", sources, targets, weights });
-  return { graph, sizes, part, rank };
-}
-
-/** e_0 … e_r of the numbers given (elementary symmetric polynomials, by the usual recurrence). */
-function elementary(values: number[]): number[] {
-  const e = [1];
-  for (const a of values) {
-    e.push(0);
-    for (let j = e.length - 1; j >= 1; j--) e[j] += a * e[j - 1];
-  }
-  return e;
-}
 
 const at = (e: number[], j: number) => (j >= 0 && j < e.length ? e[j] : 0);
 
@@ -221,7 +161,7 @@ describe("the sweep's threshold bins against the multipartite closed forms", () 
       for (const joinedToLater of [false, true]) {
         it(`parts ${sizes.join(", ")}, ${mode}, weight ${joinedToLater ? "min" : "max"}(p, q) + 1`, () => {
           const weight = (p: number, q: number) => (joinedToLater ? p : q) + 1;
-          const { graph } = multipartite(sizes, mode, 11, weight);
+          const { graph } = multipartite(sizes, mode, 11, { weight });
           const r = sizes.length;
           const thresholds = Array.from({ length: r }, (_, t) => t + 1);
           const sweep = sweepSimplexCounts(graph, explicitGrid(thresholds, "distance"), {

@@ -17,66 +17,18 @@
  */
 import { describe, expect, it } from "vitest";
 import { binomial, factorial } from "../../../../test/support/combinatorics.js";
-import { randomPermutation, seededRandom } from "../../../../test/support/random.js";
+import { elementary, type Mode, multipartite } from "../../../../test/support/multipartite.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
 import { checkLocalSize } from "./bitset-counter.js";
 import { countSimplices } from "./count-simplices.js";
 import { SimplexBudgetError } from "./simplex-budget-error.js";
 
-type Mode = "undirected" | "ordered" | "both";
-
-/**
- * Complete multipartite graph with parts of the given sizes, vertices relabelled by a permutation drawn
- * from `seed`; "ordered": each edge becomes one arc along a second random total order; "both": both arcs.
- */
-function multipartite(sizes: number[], mode: Mode, seed: number, apex = false): WeightedGraph {
-  const random = seededRandom(seed);
-  const part = sizes.flatMap((size, i) => Array.from({ length: size }, () => i));
-  const n = part.length;
-  const name = randomPermutation(n, random);
-  const rank = randomPermutation(n, random);
-  const sources: number[] = [];
-  const targets: number[] = [];
-  for (let u = 0; u < n; u++) {
-    for (let v = u + 1; v < n; v++) {
-      if (part[u] === part[v]) continue;
-      const [a, b] = [name[u], name[v]];
-      if (mode === "undirected" || (mode === "ordered" && rank[a] < rank[b])) {
-        sources.push(a);
-        targets.push(b);
-      } else if (mode === "ordered") {
-        sources.push(b);
-        targets.push(a);
-      } else {
-        sources.push(a, b);
-        targets.push(b, a);
-      }
-    }
-  }
-  // apex: one more vertex, n, with an arc (edge) to every other vertex
-  for (let v = 0; apex && v < n; v++) {
-    sources.push(n);
-    targets.push(v);
-  }
-  const size = apex ? n + 1 : n;
-  return fromEdgeList({
-    n: size,
-    directed: mode !== "undirected",
-    sources,
-    targets,
-    weights: sources.map(() => 1),
-  });
-}
-
 /** k-simplices for k = 0 … r − 1: e_{k+1}(sizes), times (k+1)! with both arcs (see the header). */
 function expectedCounts(sizes: number[], mode: Mode): number[] {
-  const e = [1];
-  for (const a of sizes) {
-    e.push(0);
-    for (let j = e.length - 1; j >= 1; j--) e[j] += a * e[j - 1];
-  }
-  return e.slice(1).map((c, k) => (mode === "both" ? c * factorial(k + 1) : c));
+  return elementary(sizes)
+    .slice(1)
+    .map((c, k) => (mode === "both" ? c * factorial(k + 1) : c));
 }
 
 const count = (g: WeightedGraph, maxDim?: number, budget?: number) =>
@@ -111,7 +63,7 @@ describe("the TypeScript counter against the multipartite closed form, at every 
   for (const [sizes, modes, maxDim] of cases) {
     for (const mode of modes) {
       it(`parts ${sizes.join(", ")}, ${mode}, maxDim 0 … ${maxDim}`, () => {
-        const g = multipartite(sizes, mode, sizes.length * 7 + modes.indexOf(mode));
+        const g = multipartite(sizes, mode, sizes.length * 7 + modes.indexOf(mode)).graph;
         const want = expectedCounts(sizes, mode);
         for (let m = 0; m <= maxDim; m++) checkTo(g, want, m, `maxDim ${m}`);
         // a cap at or above the top dimension still stops the deeper levels short (their "is there a
@@ -141,7 +93,7 @@ describe("every simplex counted towards the budget, on each path", () => {
   ];
   for (const [sizes, mode] of cases) {
     it(`parts ${sizes.join(", ")}, ${mode}`, () => {
-      const g = multipartite(sizes, mode, 99);
+      const g = multipartite(sizes, mode, 99).graph;
       const want = expectedCounts(sizes, mode);
       const total = want.reduce((a, b) => a + b, 0);
       if (mode === "undirected") expect(total).toBe(sizes.reduce((p, a) => p * (1 + a), 1) - 1);
@@ -284,7 +236,7 @@ describe("a cone over the ordered tripartite graph: sets re-packed twice", () =>
   // A cone's simplices are those of the base and, once more, each of them (and the empty one) with the
   // apex in front (common practice): c_k = e_{k+1} + e_k of the part sizes, 211, 14 910, 357 700, 343 000.
   it("counts", () => {
-    const g = multipartite([70, 70, 70], "ordered", 5, true);
+    const g = multipartite([70, 70, 70], "ordered", 5, { apex: true }).graph;
     const e = [1, ...expectedCounts([70, 70, 70], "ordered")];
     const want = [...e.slice(1), 0].map((c, k) => c + e[k]);
     expect(want).toEqual([211, 14_910, 357_700, 343_000]);

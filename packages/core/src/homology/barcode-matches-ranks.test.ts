@@ -226,6 +226,14 @@ describe("long filtrations found by replaying changes of the reduction on random
     checkLevels(longFiltrationGraph(45, 0.67, 20), "similarity", 2, [338, 382]);
   });
 
+  it("stored columns pushed past their cover band by band (complete graph of 64 vertices, distances 1–1000)", () => {
+    // Past its stored entries a column's chain is pushed one band of values at a time, a marker after each;
+    // the bands run out before the horizon only on long filtrations like this one. With the marker left out
+    // (the bands after the first never pushed), β2 went wrong between 431 and 489.
+    const barcode = checkLevels(randomGraph(64, 1, 1000, 9, false), "distance", 2, [431, 489]);
+    expect(barcode.stats.storedColumns[2]).toBeGreaterThan(64);
+  });
+
   for (const seed of [3, 4]) {
     it(`edges whose columns add more than 64 stored columns (G(200, 0.2), seed ${seed}, distances)`, () => {
       // 200 vertices, dimension 1 only: over 200 edge columns keep their reduced entries, and single columns

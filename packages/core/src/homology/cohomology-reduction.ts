@@ -2,7 +2,7 @@ import type { WorkMonitor } from "../work/work-monitor.js";
 import { ChainBuilder } from "./chain-builder.js";
 import type { CoboundaryModel } from "./coboundary-model.js";
 import { ColumnStore } from "./column-store.js";
-import { grownInt } from "./grown-array.js";
+import { grownFloat, grownInt } from "./grown-array.js";
 import type { ByteLedger } from "./homology-budget.js";
 import { KeyMap } from "./key-map.js";
 import { LazyColumn } from "./lazy-column.js";
@@ -39,7 +39,8 @@ export interface ReductionCounters {
  *
  * Finished columns whose chains are long also keep their reduced entries, sorted, up to a cover value;
  * adding one reads them through a cursor only as far as the pivot search goes, and continues from its
- * chain past the cover (see ReducedEntries and LazyColumn.addStored).
+ * chain past the cover, one band of values at a time behind a marker (see ReducedEntries,
+ * LazyColumn.addStored and LazyColumn.pushMarker).
  *
  * Returns the pivots found (keys of dim+1 simplices that killed a class): the next dimension clears them.
  */
@@ -127,18 +128,40 @@ export function reduceDimension(
   let storedAdded: Int32Array = new Int32Array(64);
   let storedFactor: Int32Array = new Int32Array(64);
   let storedDone: Uint8Array = new Uint8Array(64);
+  // How far (in value) the chain of a stored column whose cursor ran out has been pushed, and how many
+  // column values its next band spans (doubling from band to band).
+  let storedPushedTo: Float64Array = new Float64Array(64);
+  let storedStep: Int32Array = new Int32Array(64);
   let storedCount = 0;
-  // A stored column whose cursor ran out: its entries past the cover, up to the horizon, go to the heap.
-  work.attach(entries, (a) => {
-    storedDone[a] = 1;
-    const owner = storedAdded[a];
-    const cover = entries.cover[owner];
-    if (cover >= work.horizon) return;
+  // Pushes the next band of stored column a's chain: past its cover the chain is pushed band by band, a
+  // marker after each band, because the pivot search usually stops long before the horizon (most of what
+  // a push up to the horizon produced was never popped).
+  const pushNextBand = (a: number): void => {
+    const horizon = work.horizon;
+    const from = storedPushedTo[a];
+    const to = valueAfter(sortedF, from, storedStep[a], horizon);
+    storedStep[a] *= 2;
     const bandLow = work.bandLow;
-    work.bandLow = cover;
-    pushChain(model, dim, store, owner, storedFactor[a], p, work);
+    work.bandLow = from;
+    work.horizon = to;
+    pushChain(model, dim, store, storedAdded[a], storedFactor[a], p, work);
+    work.horizon = horizon;
     work.bandLow = bandLow;
-  });
+    storedPushedTo[a] = to;
+    if (to < horizon) work.pushMarker(to, a);
+  };
+  // A stored column whose cursor ran out: its entries past the cover, up to the horizon, go to the heap.
+  work.attach(
+    entries,
+    (a) => {
+      storedDone[a] = 1;
+      const cover = entries.cover[storedAdded[a]];
+      storedPushedTo[a] = cover;
+      storedStep[a] = FIRST_BAND;
+      if (cover < work.horizon) pushNextBand(a);
+    },
+    pushNextBand,
+  );
   let compactAt = 1024;
   ledger.reserve(todoCount * 8, `sorting the ${dim}-simplex values`);
   const sortedCount = todoCount;
@@ -161,14 +184,12 @@ export function reduceDimension(
     }
     for (let e = 0; e < chain.size; e++)
       model.pushCoboundary(dim, chain.key[e], chain.f[e], chain.coef[e], p, work);
-    // Stored columns read their entries up to their cover; past it (once read), their chains are pushed.
+    // Stored columns read their entries up to their cover; past it (once read), their chains are pushed
+    // band by band, from the old horizon: each has pushed up to it (or its cover lies past it), for no
+    // marker is left when the heap runs dry.
     for (let a = 0; a < storedCount; a++) {
-      if (storedDone[a] === 0) continue;
-      const owner = storedAdded[a];
-      const cover = entries.cover[owner];
-      if (cover >= work.horizon) continue;
-      work.bandLow = Math.max(cover, oldHorizon);
-      pushChain(model, dim, store, owner, storedFactor[a], p, work);
+      if (storedDone[a] === 0 || storedPushedTo[a] >= work.horizon) continue;
+      pushNextBand(a);
     }
     work.bandLow = Number.NEGATIVE_INFINITY;
   };
@@ -236,6 +257,8 @@ export function reduceDimension(
           if (storedCount === storedAdded.length) {
             storedAdded = grownInt(storedAdded, storedCount * 2);
             storedFactor = grownInt(storedFactor, storedCount * 2);
+            storedStep = grownInt(storedStep, storedCount * 2);
+            storedPushedTo = grownFloat(storedPushedTo, storedCount * 2);
             const done = new Uint8Array(storedCount * 2);
             done.set(storedDone);
             storedDone = done;
@@ -317,6 +340,25 @@ export function reduceDimension(
 const STORE_ENTRIES_FROM_CHAIN = 16;
 /** Reduced entries kept per column (more when entries tie at the last value). */
 const STORED_ENTRIES_PER_COLUMN = 2048;
+
+/** Column values spanned by the first band of a stored column's chain pushed past its cover. */
+const FIRST_BAND = 256;
+
+/**
+ * The end of a band that starts at `from` and spans `step` of the sorted column values past it, at most
+ * `horizon`.
+ */
+function valueAfter(sorted: Float64Array, from: number, step: number, horizon: number): number {
+  let lo = 0;
+  let hi = sorted.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (sorted[mid] <= from) lo = mid + 1;
+    else hi = mid;
+  }
+  const at = lo + step - 1;
+  return at < sorted.length && sorted[at] < horizon ? sorted[at] : horizon;
+}
 
 /** Pushes factor × the coboundary of a finished column, regenerated from its chain. */
 function pushChain(

@@ -231,6 +231,77 @@ describe("LazyColumn", () => {
     }
   });
 
+  it("with producers pushing band by band behind markers, is the column of everything pushed at once", () => {
+    // Each source's entries are cut into bands at random values; a band is pushed when the marker after
+    // the previous band comes up. Same pivot, and the same entries when drained, as the whole sum.
+    for (const p of [2, 3, 5]) {
+      for (let seed = 1; seed <= 30; seed++) {
+        const next = lcg(seed * 6007 + p);
+        const store = new ReducedEntries(new ByteLedger(undefined));
+        const withCursors = seed % 2 === 0;
+        const added: Entry[] = [];
+        const ranges: [number, number, number][] = [];
+        if (withCursors) {
+          for (let c = 0; c < 1 + (next() % 6); c++) {
+            const own = tally(randomEntries(next, next() % 8, 40, p), p);
+            const from = store.used;
+            storeColumn(store, c, own, Number.POSITIVE_INFINITY);
+            const factor = 1 + (next() % (p - 1));
+            ranges.push([from, store.used, factor]);
+            for (const e of own) added.push({ ...e, coef: e.coef * factor });
+          }
+        }
+        const sources: Entry[][] = [];
+        for (let k = 0; k < 1 + (next() % 5); k++) sources.push(randomEntries(next, next() % 25, 40, p));
+        // Band ends of each source, increasing; the last band is unbounded.
+        const cuts = sources.map(() => [0.5, 1.5, 2.5, 3.5].filter(() => next() % 2 === 0));
+        const done = sources.map(() => 0);
+        const column = newColumn(p);
+        const pushBand = (k: number): void => {
+          const low = done[k] === 0 ? Number.NEGATIVE_INFINITY : cuts[k][done[k] - 1];
+          const high = done[k] < cuts[k].length ? cuts[k][done[k]] : Number.POSITIVE_INFINITY;
+          for (const e of sources[k]) if (e.f > low && e.f <= high) column.push(e.f, e.key, e.coef);
+          if (high !== Number.POSITIVE_INFINITY) column.pushMarker(high, k);
+          done[k]++;
+        };
+        column.attach(store, () => {}, pushBand);
+        for (let k = 0; k < sources.length; k++) pushBand(k);
+        for (const [from, to, factor] of ranges) column.addStored(from, to, factor);
+        const expected = tally([...sources.flat(), ...added], p);
+        expect(column.settle()).toBe(expected.length > 0);
+        if (expected.length > 0) {
+          expect([column.pivotF, column.pivotKey, column.pivotCoef]).toEqual([
+            expected[0].f,
+            expected[0].key,
+            expected[0].coef,
+          ]);
+        }
+        const from = store.used;
+        expect(column.drainInto(store, 1e9, Number.NEGATIVE_INFINITY)).toBe(Number.POSITIVE_INFINITY);
+        expect(stored(store, from, store.used)).toEqual(expected);
+        // Every band was asked for, each once.
+        expect(done).toEqual(cuts.map((c) => c.length + 1));
+      }
+    }
+  });
+
+  it("asks for a marker's band before any entry past its value is popped", () => {
+    const column = newColumn(2);
+    column.attach(
+      new ReducedEntries(new ByteLedger(undefined)),
+      () => {},
+      (id) => {
+        // The next band holds the column's earliest entry: it must come up before the one at 3.
+        expect(id).toBe(7);
+        column.push(2, 11, 1);
+      },
+    );
+    column.push(3, 5, 1);
+    column.pushMarker(1, 7);
+    expect(column.settle()).toBe(true);
+    expect([column.pivotF, column.pivotKey]).toEqual([2, 11]);
+  });
+
   it("tells at once when a stored column added has no entries, and reads the others in order", () => {
     const store = new ReducedEntries(new ByteLedger(undefined));
     storeColumn(store, 0, [], 1);

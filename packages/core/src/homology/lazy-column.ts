@@ -51,14 +51,42 @@ export class LazyColumn implements CofaceSink {
 
   /** Told when a cursor has given its last stored entry (its id is the order of addStored calls). */
   private onExhausted: ((cursor: number) => void) | null = null;
+  /** Told when a marker reaches the top: the column's entries up to the marker's value are all popped. */
+  private onMarker: ((id: number) => void) | null = null;
 
   /**
-   * Where the stored columns given to addStored keep their entries, and who pushes a stored column's
-   * entries past its cover once its cursor has run out.
+   * Where the stored columns given to addStored keep their entries, who pushes a stored column's
+   * entries past its cover once its cursor has run out, and who pushes the next band of a source whose
+   * marker (pushMarker) came up.
    */
-  attach(entries: ReducedEntries, onExhausted: (cursor: number) => void): void {
+  attach(
+    entries: ReducedEntries,
+    onExhausted: (cursor: number) => void,
+    onMarker: (id: number) => void = () => {},
+  ): void {
     this.entries = entries;
     this.onExhausted = onExhausted;
+    this.onMarker = onMarker;
+  }
+
+  /**
+   * Puts a marker after every entry with value ≤ f: when the pivot search gets past f, onMarker(id) is
+   * called (before any entry with a larger value is popped), so a producer can push its entries band by
+   * band instead of up to the horizon at once. Not subject to the floor or the band; at most one
+   * marker per id at a time.
+   */
+  pushMarker(f: number, id: number): void {
+    this.heap.push(f, MARKER_KEY + 2 * id, 0);
+  }
+
+  /** Pops markers at the top of the heap that come before `beforeF` (the cursors' least value). */
+  private popMarkers(beforeF: number): void {
+    const heap = this.heap;
+    while (heap.size > 0 && heap.key[0] >= MARKER_KEY && heap.f[0] < beforeF) {
+      const id = (heap.key[0] - MARKER_KEY) / 2;
+      heap.pop();
+      (this.onMarker as (id: number) => void)(id);
+    }
   }
 
   reset(p: number): void {
@@ -139,6 +167,10 @@ export class LazyColumn implements CofaceSink {
     while (heap.size > 0) {
       const f = heap.f[0];
       const key = heap.key[0];
+      if (key >= MARKER_KEY) {
+        this.popMarkers(Number.POSITIVE_INFINITY);
+        continue;
+      }
       const sum = heap.popMerged() % p;
       if (sum !== 0) {
         this.pivotF = f;
@@ -161,7 +193,6 @@ export class LazyColumn implements CofaceSink {
     const ek = entries.entryKey;
     const ec = entries.entryCoef;
     const order = this.cursorHeap;
-    const hasHeap = heap.size > 0;
     let hasCursor = false;
     let cf = 0;
     let ck = 0;
@@ -171,6 +202,9 @@ export class LazyColumn implements CofaceSink {
       ck = ek[at];
       hasCursor = cf <= this.horizon;
     }
+    // A marker's producer may push entries before the cursors' head (and may exhaust no cursor).
+    this.popMarkers(hasCursor ? cf : Number.POSITIVE_INFINITY);
+    const hasHeap = heap.size > 0;
     if (!hasHeap && !hasCursor) {
       this.leastKey = Number.NaN;
       return 0;
@@ -270,6 +304,7 @@ export class LazyColumn implements CofaceSink {
 
   private popHeapOnly(): number {
     const heap = this.heap;
+    this.popMarkers(Number.POSITIVE_INFINITY);
     if (heap.size === 0) {
       this.leastKey = Number.NaN;
       return 0;
@@ -337,3 +372,9 @@ export class LazyColumn implements CofaceSink {
     this.heap.dispose();
   }
 }
+
+/**
+ * Keys of markers (pushMarker): past every simplex key (the binomial tables stay below 2^53), so a marker
+ * comes after every entry of its value; steps of 2 keep them exact doubles.
+ */
+const MARKER_KEY = 2 ** 53;

@@ -1,3 +1,4 @@
+import { countAtMost } from "../filtration/count-at-most.js";
 import { gridFiltrationValues, type ThresholdGrid } from "../filtration/threshold-grid.js";
 import { toFiltrationValue } from "../filtration/weight-semantics.js";
 import type { Barcode } from "./barcode.js";
@@ -59,16 +60,4 @@ export function bettiCurves(barcode: Barcode, grid: ThresholdGrid): Float64Array
     curves[t][0] = barcode.stats.simplices[0];
   }
   return curves;
-}
-
-/** Number of entries ≤ x in an ascending list. */
-function countAtMost(sorted: number[], x: number): number {
-  let lo = 0;
-  let hi = sorted.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (sorted[mid] <= x) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
 }

@@ -1,3 +1,4 @@
+import { countAtMost } from "../filtration/count-at-most.js";
 import type { WorkMonitor } from "../work/work-monitor.js";
 import { ChainBuilder } from "./chain-builder.js";
 import type { CoboundaryModel } from "./coboundary-model.js";
@@ -225,15 +226,8 @@ export function reduceDimension(
     // Cofaces are heaped only up to a horizon `window` values past σ's (in the sorted values of the
     // dim-simplices); when the heap runs dry before a pivot shows up, the window doubles and the
     // chain is pushed again for the new band.
-    let lo = 0;
-    let hi = sortedCount;
-    while (lo < hi) {
-      const mid = (lo + hi) >>> 1;
-      if (sortedF[mid] <= f) lo = mid + 1;
-      else hi = mid;
-    }
     window = firstWindow;
-    horizonRank = lo + window;
+    horizonRank = countAtMost(sortedF, f) + window;
     work.horizon = horizonRank < sortedCount ? sortedF[horizonRank] : Number.POSITIVE_INFINITY;
     model.pushCoboundary(dim, key, f, 1, p, work);
     for (;;) {
@@ -349,14 +343,7 @@ const FIRST_BAND = 256;
  * `horizon`.
  */
 function valueAfter(sorted: Float64Array, from: number, step: number, horizon: number): number {
-  let lo = 0;
-  let hi = sorted.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (sorted[mid] <= from) lo = mid + 1;
-    else hi = mid;
-  }
-  const at = lo + step - 1;
+  const at = countAtMost(sorted, from) + step - 1;
   return at < sorted.length && sorted[at] < horizon ? sorted[at] : horizon;
 }
 

@@ -1,4 +1,5 @@
 import { checkFeatureAxis, type FeatureAxis } from "../features/feature-axis.js";
+import { countAtMost } from "../filtration/count-at-most.js";
 import { distinctEdgeFiltration } from "../filtration/threshold-grid.js";
 import { toFiltrationValue, type WeightSemantics } from "../filtration/weight-semantics.js";
 import { possibleEdgeCount, type WeightedGraph } from "../graph/weighted-graph.js";
@@ -39,14 +40,7 @@ export function axisPositions(
   const position = (w: number) => {
     if (possible === 0) return -origin;
     const x = toFiltrationValue(w, semantics);
-    let lo = 0;
-    let hi = once.length;
-    while (lo < hi) {
-      const mid = (lo + hi) >>> 1;
-      if (once[mid] <= x) lo = mid + 1;
-      else hi = mid;
-    }
-    return lo / possible - origin;
+    return countAtMost(once, x) / possible - origin;
   };
   const samples = Float64Array.from(values, (d) => d - origin);
   return { position, samples, span: samples[samples.length - 1] };

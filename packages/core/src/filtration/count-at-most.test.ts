@@ -1,0 +1,26 @@
+import { describe, expect, it } from "vitest";
+import { countAtMost } from "./count-at-most.js";
+
+// Against its definition, the number of entries ≤ x counted one by one (what Python's bisect.bisect_right
+// returns on an ascending list: common practice).
+describe("countAtMost", () => {
+  it("counts the entries ≤ x of ascending lists with repeats, for x below, between, on and above them", () => {
+    let state = 12345;
+    const next = () => {
+      state = (state * 48271) % 2147483647;
+      return state;
+    };
+    for (let trial = 0; trial < 200; trial++) {
+      const sorted = Float64Array.from({ length: next() % 12 }, () => next() % 6).sort();
+      for (let x = -1; x <= 6; x += 0.5) {
+        expect(countAtMost(sorted, x)).toBe(sorted.filter((v) => v <= x).length);
+      }
+    }
+  });
+
+  it("reads plain arrays too, and is 0 on an empty list", () => {
+    expect(countAtMost([1, 2, 2, 3], 2)).toBe(3);
+    expect(countAtMost([], 5)).toBe(0);
+    expect(countAtMost([-Infinity, 0, Infinity], Infinity)).toBe(3);
+  });
+});

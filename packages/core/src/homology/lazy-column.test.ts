@@ -61,6 +61,44 @@ function storeColumn(store: ReducedEntries, id: number, entries: Entry[], cover:
   store.close(id, from, cover);
 }
 
+/**
+ * `count` random stored columns (distinct keys, sorted) with random factors: their ranges for addStored, and
+ * their entries times the factors (what adding them contributes).
+ */
+function randomStoredColumns(
+  next: () => number,
+  store: ReducedEntries,
+  count: number,
+  p: number,
+): { added: Entry[]; ranges: [number, number, number][] } {
+  const added: Entry[] = [];
+  const ranges: [number, number, number][] = [];
+  for (let c = 0; c < count; c++) {
+    const own = tally(randomEntries(next, next() % 8, 40, p), p);
+    const from = store.used;
+    storeColumn(store, c, own, Number.POSITIVE_INFINITY);
+    const factor = 1 + (next() % (p - 1));
+    ranges.push([from, store.used, factor]);
+    for (const e of own) added.push({ ...e, coef: e.coef * factor });
+  }
+  return { added, ranges };
+}
+
+/** The column's pivot is the first entry of `expected`, and draining it all into `store` gives `expected`. */
+function expectSettlesAndDrains(column: LazyColumn, store: ReducedEntries, expected: Entry[]): void {
+  expect(column.settle()).toBe(expected.length > 0);
+  if (expected.length > 0) {
+    expect([column.pivotF, column.pivotKey, column.pivotCoef]).toEqual([
+      expected[0].f,
+      expected[0].key,
+      expected[0].coef,
+    ]);
+  }
+  const from = store.used;
+  expect(column.drainInto(store, 1e9, Number.NEGATIVE_INFINITY)).toBe(Number.POSITIVE_INFINITY);
+  expect(stored(store, from, store.used)).toEqual(expected);
+}
+
 function newColumn(p: number, capacity = 4): LazyColumn {
   const column = new LazyColumn(new ByteLedger(undefined), capacity);
   column.reset(p);
@@ -196,17 +234,8 @@ describe("LazyColumn", () => {
       for (let seed = 1; seed <= 12; seed++) {
         const next = lcg(seed * 104729 + p);
         const store = new ReducedEntries(new ByteLedger(undefined));
-        const columns = 1 + (next() % 90); // past 64 cursors in some cases
-        const added: Entry[] = [];
-        const ranges: [number, number, number][] = [];
-        for (let c = 0; c < columns; c++) {
-          const own = tally(randomEntries(next, next() % 8, 40, p), p);
-          const from = store.used;
-          storeColumn(store, c, own, Number.POSITIVE_INFINITY);
-          const factor = 1 + (next() % (p - 1));
-          ranges.push([from, store.used, factor]);
-          for (const e of own) added.push({ ...e, coef: e.coef * factor });
-        }
+        // Past 64 cursors in some cases.
+        const { added, ranges } = randomStoredColumns(next, store, 1 + (next() % 90), p);
         const pushed = randomEntries(next, next() % 30, 40, p);
         const exhausted: number[] = [];
         const column = newColumn(p);
@@ -214,17 +243,7 @@ describe("LazyColumn", () => {
         for (const e of pushed) column.push(e.f, e.key, e.coef);
         for (const [from, to, factor] of ranges) column.addStored(from, to, factor);
         const expected = tally([...pushed, ...added], p);
-        expect(column.settle()).toBe(expected.length > 0);
-        if (expected.length > 0) {
-          expect([column.pivotF, column.pivotKey, column.pivotCoef]).toEqual([
-            expected[0].f,
-            expected[0].key,
-            expected[0].coef,
-          ]);
-        }
-        const from = store.used;
-        expect(column.drainInto(store, 1e9, Number.NEGATIVE_INFINITY)).toBe(Number.POSITIVE_INFINITY);
-        expect(stored(store, from, store.used)).toEqual(expected);
+        expectSettlesAndDrains(column, store, expected);
         // Every cursor ran out once; an empty column's cursor at once.
         expect([...exhausted].sort((a, b) => a - b)).toEqual(ranges.map((_, i) => i));
       }
@@ -238,19 +257,8 @@ describe("LazyColumn", () => {
       for (let seed = 1; seed <= 30; seed++) {
         const next = lcg(seed * 6007 + p);
         const store = new ReducedEntries(new ByteLedger(undefined));
-        const withCursors = seed % 2 === 0;
-        const added: Entry[] = [];
-        const ranges: [number, number, number][] = [];
-        if (withCursors) {
-          for (let c = 0; c < 1 + (next() % 6); c++) {
-            const own = tally(randomEntries(next, next() % 8, 40, p), p);
-            const from = store.used;
-            storeColumn(store, c, own, Number.POSITIVE_INFINITY);
-            const factor = 1 + (next() % (p - 1));
-            ranges.push([from, store.used, factor]);
-            for (const e of own) added.push({ ...e, coef: e.coef * factor });
-          }
-        }
+        // Without cursors for odd seeds.
+        const { added, ranges } = randomStoredColumns(next, store, seed % 2 === 0 ? 1 + (next() % 6) : 0, p);
         const sources: Entry[][] = [];
         for (let k = 0; k < 1 + (next() % 5); k++) sources.push(randomEntries(next, next() % 25, 40, p));
         // Band ends of each source, increasing; the last band is unbounded.
@@ -268,17 +276,7 @@ describe("LazyColumn", () => {
         for (let k = 0; k < sources.length; k++) pushBand(k);
         for (const [from, to, factor] of ranges) column.addStored(from, to, factor);
         const expected = tally([...sources.flat(), ...added], p);
-        expect(column.settle()).toBe(expected.length > 0);
-        if (expected.length > 0) {
-          expect([column.pivotF, column.pivotKey, column.pivotCoef]).toEqual([
-            expected[0].f,
-            expected[0].key,
-            expected[0].coef,
-          ]);
-        }
-        const from = store.used;
-        expect(column.drainInto(store, 1e9, Number.NEGATIVE_INFINITY)).toBe(Number.POSITIVE_INFINITY);
-        expect(stored(store, from, store.used)).toEqual(expected);
+        expectSettlesAndDrains(column, store, expected);
         // Every band was asked for, each once.
         expect(done).toEqual(cuts.map((c) => c.length + 1));
       }

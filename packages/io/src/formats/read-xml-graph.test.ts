@@ -156,6 +156,24 @@ describe("GraphML and GEXF weights follow the text readers' number rules", () =>
     );
   });
 
+  it("refuses a node without an id, or an id declared twice, at the node's line", () => {
+    // Both formats require an id on every node, unique in the document (GraphML Primer, "Nodes"; GEXF 1.3
+    // schema). Unchecked, a node without one became a node named "" and a second one a parser error
+    // without a line.
+    const noId = put(
+      "no-id.graphml",
+      graphml(`<edge source="a" target="b"/>`).replace(`<node id="c"/>`, `\n<node/>`),
+    );
+    expect(() => readXmlGraphFile(noId, "graphml")).toThrow(`${noId}:6:1: a <node> element without an id`);
+    const twice = put(
+      "node-twice.gexf",
+      gexf(`<edge source="a" target="b"/>`).replace(`<node id="c" label="c"/>`, `\n<node id="a"/>`),
+    );
+    expect(() => readXmlGraphFile(twice, "gexf")).toThrow(
+      `${twice}:5:1: node "a" is declared twice (first on line 4)`,
+    );
+  });
+
   it("refuses a graph without nodes like an empty matrix file", () => {
     const empty = put(
       "empty.graphml",

@@ -30,8 +30,9 @@ export interface XmlEdge {
  * a key id equal to it, else the key's `<default>`; GEXF: an `<attvalue>` of an edge attribute titled
  * `attribute`, else the `weight` XML attribute for "weight", else the attribute's `<default>`). Those
  * parsers cast with `+text`, which reads "0x10" as 16 and "" as 0; the raw text lets the weights follow the
- * number rules of the text readers. Nodes must be declared: an edge to an undeclared node, an edge id used
- * twice and a graph without nodes are errors naming the edge (or the file) at its line and column.
+ * number rules of the text readers. Nodes must be declared, each with an id of its own: an edge to an
+ * undeclared node, an edge id used twice, a node without an id or declared twice and a graph without nodes
+ * are errors naming the edge or node (or the file) at its line and column.
  */
 export function readXmlEdges(
   document: XmlDocument,
@@ -39,9 +40,25 @@ export function readXmlEdges(
   attribute: string,
   file: string,
 ): XmlEdge[] {
-  const nodes = new Set<string>();
+  // Both formats require every node to have an id, unique in the document (GraphML Primer, "Nodes"; the
+  // GEXF 1.3 schema): said here at the node's line instead of as graphology's message without one.
+  const nodes = new Map<string, number | undefined>();
   const nodeElements = document.getElementsByTagName("node");
-  for (let k = 0; k < nodeElements.length; k++) nodes.add(nodeElements[k].getAttribute("id") ?? "");
+  for (let k = 0; k < nodeElements.length; k++) {
+    const node = nodeElements[k];
+    const id = node.getAttribute("id");
+    const at = { line: node.lineNumber, column: node.columnNumber };
+    if (id === null) throw new InputFileError(file, "bad-labels", "a <node> element without an id", at);
+    if (nodes.has(id)) {
+      throw new InputFileError(
+        file,
+        "bad-labels",
+        `node ${JSON.stringify(id)} is declared twice (first on line ${nodes.get(id) ?? "?"})`,
+        at,
+      );
+    }
+    nodes.set(id, node.lineNumber);
+  }
   if (nodes.size === 0) {
     throw new InputFileError(
       file,

@@ -57,4 +57,28 @@ describe("KeyMap", () => {
     }
     expect((error as HomologyBudgetError).stage).toBe("recording pivots");
   });
+
+  it("reserves room for initialCapacity keys up front and takes that many without growing", () => {
+    // The callers size a map for the keys they will set (n vertices, the columns to reduce), so the budget
+    // is asked once, before the work. Room for k keys at most half full: the smallest power of two ≥ 2k,
+    // 16 slots at least (worked by hand: 4 → 16, 1000 → 2048, 1024 → 2048, 1025 → 4096).
+    for (const [initial, slots] of [
+      [4, 16],
+      [1000, 2048],
+      [1024, 2048],
+      [1025, 4096],
+    ]) {
+      const ledger = new ByteLedger(undefined);
+      const map = new KeyMap(ledger, "test", initial);
+      expect(ledger.held).toBe(12 * slots);
+      for (let i = 0; i < Math.max(initial, 8); i++) map.set(3 * i + 2 ** 33, i);
+      // Filled to half (8 of 16, 1024 of 2048): still the same table.
+      expect(ledger.held).toBe(12 * slots);
+      if (initial === 1024) {
+        map.set(1, 1); // the 1025th key passes half: the table doubles
+        expect(ledger.held).toBe(12 * 2 * slots);
+        expect(ledger.peak).toBe(12 * 3 * slots); // old and new table held together while rehashing
+      }
+    }
+  });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { ChainBuilder } from "./chain-builder.js";
-import { ByteLedger } from "./homology-budget.js";
+import { ByteLedger, HomologyBudgetError } from "./homology-budget.js";
 
 describe("ChainBuilder", () => {
   it("sorts by key and sums coefficients mod p, like a Map tally (common practice)", () => {
@@ -54,5 +54,39 @@ describe("ChainBuilder", () => {
     expect(Array.from(chain.key.subarray(0, 4))).toEqual([5, 7, 2 ** 51 - 1, 2 ** 51]);
     expect(Array.from(chain.f.subarray(0, 4))).toEqual([0, 3, 2, 1]);
     expect(Array.from(chain.coef.subarray(0, 4))).toEqual([1, 4, 3, 2]);
+  });
+
+  it("holds its arrays and as much again for sorting in the ledger, and gives every byte back", () => {
+    // The ledger against the arrays' own byteLength (8 per f64 key and f, 4 per i32 coefficient: 20 a slot),
+    // doubled for the packed sort's scratch space, as the class documents.
+    const ledger = new ByteLedger(undefined);
+    const chain = new ChainBuilder(ledger, 8);
+    const held = () => 2 * (chain.key.byteLength + chain.f.byteLength + chain.coef.byteLength);
+    expect(ledger.held).toBe(held());
+    for (let i = 0; i < 70; i++) {
+      chain.push(i, i, 1);
+      expect(ledger.held).toBe(held());
+    }
+    expect(chain.key.length).toBe(128);
+    chain.dispose();
+    expect(ledger.held).toBe(0);
+    let error: unknown;
+    try {
+      new ChainBuilder(new ByteLedger({ maxBytes: 1000 }), 26); // 26 · 40 = 1040 bytes
+    } catch (e) {
+      error = e;
+    }
+    expect(error).toBeInstanceOf(HomologyBudgetError);
+    expect((error as HomologyBudgetError).stage).toBe("tracking reduction chains");
+    // Growing: 8 slots (320 bytes), 16 (640), then 32 would hold 1280 > 1000.
+    const growing = new ChainBuilder(new ByteLedger({ maxBytes: 1000 }), 8);
+    error = undefined;
+    try {
+      for (let i = 0; i < 17; i++) growing.push(i, i, 1);
+    } catch (e) {
+      error = e;
+    }
+    expect(growing.size).toBe(16);
+    expect(error).toMatchObject({ stage: "tracking reduction chains", neededBytes: 1280 });
   });
 });

@@ -35,6 +35,32 @@ describe("bettiAt", () => {
     expect(bettiAt(g, { threshold: 2, semantics: "similarity", maxDim: 2 })).toEqual([6, 0, 0]);
   });
 
+  it("counts each edge's two ends and no other edge, on paths and a star (worked by hand)", () => {
+    // The path 0 – 2 – 1: vertex 1's only neighbour is larger, so a boundary that forgot an edge's larger
+    // end, or read a neighbour from the next vertex's row, would miscount. A tree: β = (1, 0).
+    const path = fromEdgeList({ n: 3, sources: [0, 1], targets: [2, 2], weights: [1, 1], directed: false });
+    expect(bettiAt(path, { threshold: 1, semantics: "distance", maxDim: 1 })).toEqual([1, 0]);
+    // The star with centre 4 and the two paths 0 – 3, 1 – 2 beside it: three trees.
+    const forest = fromEdgeList({
+      n: 8,
+      sources: [4, 4, 4, 0, 1],
+      targets: [5, 6, 7, 3, 2],
+      weights: [1, 1, 1, 1, 1],
+      directed: false,
+    });
+    for (const prime of [2, 3])
+      expect(bettiAt(forest, { threshold: 1, semantics: "distance", maxDim: 2, prime })).toEqual([3, 0, 0]);
+    // The 4-cycle 0 – 2 – 1 – 3 – 0: one loop.
+    const square = fromEdgeList({
+      n: 4,
+      sources: [0, 2, 1, 0],
+      targets: [2, 1, 3, 3],
+      weights: [1, 1, 1, 1],
+      directed: false,
+    });
+    expect(bettiAt(square, { threshold: 1, semantics: "distance", maxDim: 1, prime: 3 })).toEqual([1, 1]);
+  });
+
   it("refuses a maxDim that is not a non-negative integer", () => {
     const g = octahedron(() => 1);
     for (const maxDim of [-1, 1.5, Number.NaN])

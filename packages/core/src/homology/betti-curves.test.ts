@@ -103,6 +103,38 @@ describe("bettiFromBarcode and bettiCurves", () => {
     expect(curves.map((row) => Array.from(row))).toEqual([[3], [2], [1]]);
   });
 
+  it("depends on the bars only, not on their order; every grid value before the start reads n vertices", () => {
+    // Two vertices born at 0, joined at 1; loops [1, 3) and [2, 6), listed with the later-born loop first and
+    // the components after them, so that neither births nor deaths come in ascending order.
+    const shuffled = barcode(
+      [bar(1, 2, 6), bar(0, 0, null), bar(1, 1, 3), bar(0, 0, 1)],
+      "distance",
+      0,
+      2,
+      1,
+    );
+    // Worked by hand: β0 = 2 until 1, then 1; β1 counts the loops alive at t (birth ≤ t < death).
+    const expected: [number, number[]][] = [
+      [-2, [2, 0]],
+      [-1, [2, 0]],
+      [0, [2, 0]],
+      [1, [1, 1]],
+      [2, [1, 2]],
+      [3, [1, 1]],
+      [5, [1, 1]],
+      [6, [1, 0]],
+    ];
+    for (const [t, betti] of expected) expect(bettiFromBarcode(shuffled, t)).toEqual(betti);
+    const curves = bettiCurves(
+      shuffled,
+      explicitGrid(
+        expected.map(([t]) => t),
+        "distance",
+      ),
+    );
+    expect(curves.map((row) => Array.from(row))).toEqual(expected.map(([, betti]) => betti));
+  });
+
   it("refuses a grid in other units than the barcode's", () => {
     expect(() => bettiCurves(distance, explicitGrid([1], "similarity"))).toThrow(
       'grid semantics "similarity" differ from the barcode\'s "distance"',

@@ -19,6 +19,15 @@ describe("KeyMap", () => {
     expect(map.has(0)).toBe(false);
   });
 
+  it("keeps small keys, 0 and 1 among them, through every growth", () => {
+    const map = new KeyMap(new ByteLedger(undefined), "test", 4);
+    for (let key = 0; key < 300; key++) {
+      map.set(key, 1000 - key);
+      for (let k = 0; k <= key; k++) expect(map.get(k)).toBe(1000 - k);
+    }
+    expect(map.size).toBe(300);
+  });
+
   it("stops with a budget error instead of growing past the budget", () => {
     const map = new KeyMap(new ByteLedger({ maxBytes: 100_000 }), "testing growth", 16);
     expect(() => {

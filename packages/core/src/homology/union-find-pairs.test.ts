@@ -1,0 +1,75 @@
+import { describe, expect, it } from "vitest";
+import { edgeFiltration } from "../filtration/edge-filtration.js";
+import { fromEdgeList } from "../graph/from-edge-list.js";
+import { WorkMonitor } from "../work/work-monitor.js";
+import { CliqueCoboundaries } from "./clique-coboundaries.js";
+import { ByteLedger } from "./homology-budget.js";
+import { SimplexQuota } from "./simplex-quota.js";
+import { unionFindPairs } from "./union-find-pairs.js";
+
+/** A ledger that notes each reservation. */
+class NotingLedger extends ByteLedger {
+  noted: [string, number][] = [];
+  override reserve(bytes: number, stage: string): void {
+    this.noted.push([stage, bytes]);
+    super.reserve(bytes, stage);
+  }
+}
+
+describe("unionFindPairs", () => {
+  it("pairs components by Kruskal's order with the elder rule, and holds 8 bytes a vertex while it runs", () => {
+    // Worked by hand: edges 0–1 (1), 2–3 (2), 1–2 (3), 0–3 (4). 0–1 kills vertex 1's component, 2–3 kills
+    // 3's, 1–2 joins {0, 1} and {2, 3} and kills the younger, whose oldest vertex is 2; 0–3 closes a loop.
+    // Edge keys in the combinatorial number system, u + v(v − 1)/2: 0–1 → 0, 2–3 → 5, 1–2 → 2.
+    const n = 4;
+    const graph = fromEdgeList({
+      n,
+      sources: [0, 2, 1, 0],
+      targets: [1, 3, 2, 3],
+      weights: [1, 2, 3, 4],
+      directed: false,
+    });
+    const ledger = new NotingLedger(undefined);
+    const monitor = new WorkMonitor(undefined);
+    const model = new CliqueCoboundaries(
+      graph,
+      edgeFiltration(graph, "distance"),
+      2,
+      "sparse",
+      ledger,
+      monitor,
+      new SimplexQuota(undefined, 2),
+    );
+    model.listSimplices(1);
+    const before = ledger.held;
+    ledger.noted = [];
+    const pairs: number[][] = [];
+    const essential: number[][] = [];
+    const killers = unionFindPairs(
+      model,
+      0,
+      ledger,
+      {
+        pair: (dim, birthKey, birthF, deathKey, deathF) =>
+          pairs.push([dim, birthKey, birthF, deathKey, deathF]),
+        essential: (dim, birthKey, birthF) => essential.push([dim, birthKey, birthF]),
+      },
+      monitor,
+    );
+    expect(pairs).toEqual([
+      [0, 1, 0, 0, 1],
+      [0, 3, 0, 5, 2],
+      [0, 2, 0, 2, 3],
+    ]);
+    expect(essential).toEqual([[0, 0, 0]]);
+    expect([0, 5, 2, 3].map((key) => killers.has(key))).toEqual([true, true, true, false]);
+    // parent and oldest: two Int32Arrays of n (4 bytes an element), reserved under the stage's name and given
+    // back; what stays held is the killers' map, 12 bytes a slot.
+    expect(ledger.noted[0]).toEqual(["union–find over the vertices", 8 * n]);
+    const mapBytes = ledger.noted.filter(([stage]) => stage === "recording the spanning-forest edges");
+    expect(mapBytes.length).toBe(1);
+    expect(ledger.held - before).toBe(mapBytes[0][1]);
+    killers.dispose();
+    expect(ledger.held).toBe(before);
+  });
+});

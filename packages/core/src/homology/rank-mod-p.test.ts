@@ -91,4 +91,23 @@ describe("rankModP", () => {
     expect(rankOf(bigger, 5)).toBe(3);
     expect(rankOf(bigger, 7)).toBe(3);
   });
+
+  it("takes a column's rows in any order and repeated, summing repeats (hand-checked determinants)", () => {
+    const rank = (start: number[], rows: number[], coefs: number[], rowCount: number, p: number) =>
+      rankModP(
+        Int32Array.from(start),
+        Int32Array.from(rows),
+        Int32Array.from(coefs),
+        rowCount,
+        primeField(p),
+      );
+    // Over Z/5, rows listed largest first: c0 = 2·e1 + 2·e1 = 4·e1, c1 = e1 + 2·e0, c2 = 2·e1 + e0 + e0.
+    // det(c0, c1) = 0·1 − 2·4 = −8 ≡ 2 (mod 5): rank 2, and three columns in two rows cannot give more.
+    expect(rank([0, 2, 4, 7], [1, 1, 1, 0, 1, 0, 0], [2, 2, 1, 2, 2, 1, 1], 2, 5)).toBe(2);
+    // Over Z/2: c0 = (1 + 3 + 2)·e0 = 0, c1 = (1 + 3 + 1)·e0 = e0, c2 = 3·e0 + 3·e1 = e0 + e1, c3 = 3·e0 + 2·e1
+    // = e0: rank 2 (c1 and c2 are independent).
+    expect(rank([0, 3, 6, 8, 10], [0, 0, 0, 0, 0, 0, 0, 1, 0, 1], [1, 3, 2, 1, 3, 1, 3, 3, 3, 2], 2, 2)).toBe(
+      2,
+    );
+  });
 });

@@ -56,6 +56,20 @@ describe("ChainBuilder", () => {
     expect(Array.from(chain.coef.subarray(0, 4))).toEqual([1, 4, 3, 2]);
   });
 
+  it("reads nothing past its size when used again after clear() (tallies worked by hand)", () => {
+    const chain = new ChainBuilder(new ByteLedger(undefined), 8);
+    for (const key of [1, 2, 3, 3]) chain.push(key, key, 1);
+    chain.compact(5);
+    expect(Array.from(chain.coef.subarray(0, chain.size))).toEqual([1, 1, 2]);
+    // Key 3 and its old coefficients still sit past the size; the new chain 3 + 2 must not see them.
+    chain.clear();
+    chain.push(3, 3, 1);
+    chain.push(2, 2, 1);
+    chain.compact(5);
+    expect(Array.from(chain.key.subarray(0, chain.size))).toEqual([2, 3]);
+    expect(Array.from(chain.coef.subarray(0, chain.size))).toEqual([1, 1]);
+  });
+
   it("holds its arrays and as much again for sorting in the ledger, and gives every byte back", () => {
     // The ledger against the arrays' own byteLength (8 per f64 key and f, 4 per i32 coefficient: 20 a slot),
     // doubled for the packed sort's scratch space, as the class documents.

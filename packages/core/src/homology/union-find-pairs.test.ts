@@ -72,4 +72,35 @@ describe("unionFindPairs", () => {
     killers.dispose();
     expect(ledger.held).toBe(before);
   });
+
+  it("sizes the killers' map for n − 1 edges up front, so the budget is asked once", () => {
+    // A path on 40 vertices: 39 edges, each joining two components (worked by hand).
+    const n = 40;
+    const sources = Array.from({ length: n - 1 }, (_, i) => i);
+    const graph = fromEdgeList({
+      n,
+      sources,
+      targets: sources.map((i) => i + 1),
+      weights: sources.map((i) => i + 1),
+      directed: false,
+    });
+    const ledger = new NotingLedger(undefined);
+    const monitor = new WorkMonitor(undefined);
+    const model = new CliqueCoboundaries(
+      graph,
+      edgeFiltration(graph, "distance"),
+      2,
+      "sparse",
+      ledger,
+      monitor,
+      new SimplexQuota(undefined, 2),
+    );
+    model.listSimplices(1);
+    ledger.noted = [];
+    let pairs = 0;
+    const killers = unionFindPairs(model, 0, ledger, { pair: () => pairs++, essential() {} }, monitor);
+    expect(pairs).toBe(n - 1);
+    expect(killers.size).toBe(n - 1);
+    expect(ledger.noted.filter(([stage]) => stage === "recording the spanning-forest edges").length).toBe(1);
+  });
 });

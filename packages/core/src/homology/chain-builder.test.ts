@@ -56,6 +56,18 @@ describe("ChainBuilder", () => {
     expect(Array.from(chain.coef.subarray(0, 4))).toEqual([1, 4, 3, 2]);
   });
 
+  it("sorts only its own entries when the keys are too large to pack (zeros lie past the size)", () => {
+    // Three keys near 2^51 with room 4: key · 4 reaches 2^53, so the comparison sort runs; slots 3 … 7 of
+    // the arrays hold zeros, which must stay out of the sort (worked by hand).
+    const chain = new ChainBuilder(new ByteLedger(undefined), 8);
+    const keys = [2 ** 51 + 2, 2 ** 51, 2 ** 51 + 1];
+    for (const [i, key] of keys.entries()) chain.push(key, i, i + 1);
+    chain.compact(7);
+    expect(Array.from(chain.key.subarray(0, chain.size))).toEqual([2 ** 51, 2 ** 51 + 1, 2 ** 51 + 2]);
+    expect(Array.from(chain.coef.subarray(0, chain.size))).toEqual([2, 3, 1]);
+    expect(Array.from(chain.f.subarray(0, chain.size))).toEqual([1, 2, 0]);
+  });
+
   it("reads nothing past its size when used again after clear() (tallies worked by hand)", () => {
     const chain = new ChainBuilder(new ByteLedger(undefined), 8);
     for (const key of [1, 2, 3, 3]) chain.push(key, key, 1);

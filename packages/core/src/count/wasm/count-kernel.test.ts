@@ -7,6 +7,9 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { binomial } from "../../../../../test/support/combinatorics.js";
 import { completeGraph } from "../../../../../test/support/known-graphs.js";
+import { seededRandom } from "../../../../../test/support/random.js";
+import { decodeBase64 } from "./count-kernel.js";
+import { COUNT_KERNEL_BASE64 } from "./count-kernel-bytes.js";
 
 afterEach(() => {
   vi.unstubAllGlobals();
@@ -65,5 +68,46 @@ describe("the kernel instance", () => {
     discardKernel();
     vi.stubGlobal("WebAssembly", undefined);
     expect(countKernel()).toBeNull();
+  });
+});
+
+// The kernel's bytes are embedded as base64 and decoded by the loader's own decoder (the core runs where
+// neither Node's Buffer nor a DOM atob may exist). Checked here against RFC 4648 ("The Base16, Base32, and
+// Base64 Data Encodings", 2006), section 10's test vectors, and against Node's Buffer.from(text, "base64")
+// as a general-purpose reference.
+describe("the base64 decoder of the embedded kernel", () => {
+  const bytesOf = (text: string) => Array.from(decodeBase64(text));
+  const ascii = (s: string) => Array.from(s, (ch) => ch.charCodeAt(0));
+
+  it("decodes the test vectors of RFC 4648, section 10", () => {
+    const vectors: [string, string][] = [
+      ["", ""],
+      ["f", "Zg=="],
+      ["fo", "Zm8="],
+      ["foo", "Zm9v"],
+      ["foob", "Zm9vYg=="],
+      ["fooba", "Zm9vYmE="],
+      ["foobar", "Zm9vYmFy"],
+    ];
+    for (const [plain, encoded] of vectors) expect(bytesOf(encoded), encoded).toEqual(ascii(plain));
+  });
+
+  it("agrees with Node's Buffer on random bytes of every length mod 3, padded and unpadded", () => {
+    const random = seededRandom(4648);
+    const seen = new Set<string>();
+    for (let length = 0; length <= 40; length++) {
+      const bytes = Buffer.from(Array.from({ length }, () => Math.floor(random() * 256)));
+      const padded = bytes.toString("base64");
+      for (const ch of padded.replace(/=+$/, "")) seen.add(ch);
+      expect(bytesOf(padded), padded).toEqual(Array.from(bytes));
+      expect(bytesOf(padded.replace(/=+$/, "")), `${padded} unpadded`).toEqual(Array.from(bytes));
+    }
+    expect(seen.size, "characters of the alphabet met").toBe(64);
+  });
+
+  it("decodes the embedded kernel as Node's Buffer does", () => {
+    expect(Array.from(decodeBase64(COUNT_KERNEL_BASE64))).toEqual(
+      Array.from(Buffer.from(COUNT_KERNEL_BASE64, "base64")),
+    );
   });
 });

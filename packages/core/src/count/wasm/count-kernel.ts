@@ -52,8 +52,8 @@ export function discardKernel(): void {
   kernel = null;
 }
 
-/** Bytes of a base64 string (RFC 4648 alphabet, with padding). */
-function decodeBase64(text: string): Uint8Array {
+/** Bytes of a base64 string (RFC 4648 alphabet, with padding). Exported for its test only. */
+export function decodeBase64(text: string): Uint8Array {
   const value = new Int8Array(128).fill(-1);
   const alphabet = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789+/";
   for (let i = 0; i < 64; i++) value[alphabet.charCodeAt(i)] = i;

@@ -26,6 +26,7 @@ import {
   multipartite,
 } from "../../../../test/support/multipartite.js";
 import { explicitGrid } from "../filtration/threshold-grid.js";
+import { fromEdgeList } from "../graph/from-edge-list.js";
 import { countSimplices } from "./count-simplices.js";
 import { SimplexBudgetError } from "./simplex-budget-error.js";
 import { sweepSimplexCounts } from "./sweep-simplex-counts.js";
@@ -216,4 +217,45 @@ describe("every simplex of the annotated enumeration counts towards the budget",
       }
     });
   }
+});
+
+describe("per-edge annotations are refused above 2^28 entries of the local edge tables", () => {
+  // d local vertices need d² entries per table (bin and slot of each local edge); the bound is
+  // d² ≤ 2^28, d ≤ 16 384 (worked by hand). A directed star's hub has all its out-arcs in one local
+  // universe; no two leaves are joined, so the tables stay untouched and cost no memory. maxDim 1: the
+  // participation rows are made up front for every dimension the hub could reach (16 385 rows of n).
+  const star = (arcs: number) =>
+    fromEdgeList({
+      n: arcs + 1,
+      directed: true,
+      sources: new Array<number>(arcs).fill(0),
+      targets: Array.from({ length: arcs }, (_, i) => i + 1),
+      weights: new Array<number>(arcs).fill(1),
+    });
+  const message = "a local universe of 16385 vertices is too large for per-edge annotations";
+
+  it("16 385 arcs out of one vertex: edge participation and the sweep's bins refuse, node participation does not", () => {
+    const g = star(16_385);
+    expect(() => countSimplices(g, { edgeParticipation: true, maxDim: 1 })).toThrow(new RangeError(message));
+    const grid = explicitGrid([1], "distance");
+    expect(() => sweepSimplexCounts(g, grid, { kernel: "typescript", maxDim: 1 })).toThrow(
+      new RangeError(message),
+    );
+    // no per-edge table: vertices and arcs counted, each leaf in one edge, the hub in all
+    const r = countSimplices(g, { participation: true, maxDim: 1 });
+    expect(Array.from(r.counts)).toEqual([16_386, 16_385]);
+    expect(r.participation!.member[1][0]).toBe(16_385);
+  });
+
+  it("16 384 arcs, the largest allowed: counted, with every arc in one edge", () => {
+    const g = star(16_384);
+    const r = countSimplices(g, { edgeParticipation: true, maxDim: 1 });
+    expect(Array.from(r.counts)).toEqual([16_385, 16_384]);
+    expect(r.edgeParticipation![1].every((x) => x === 1)).toBe(true);
+    const sweep = sweepSimplexCounts(g, explicitGrid([1], "distance"), {
+      kernel: "typescript",
+      maxDim: 1,
+    });
+    expect(Array.from(sweep.counts[0])).toEqual([16_385, 16_384]);
+  });
 });

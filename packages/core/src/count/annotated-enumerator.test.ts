@@ -259,3 +259,50 @@ describe("per-edge annotations are refused above 2^28 entries of the local edge 
     expect(Array.from(sweep.counts[0])).toEqual([16_385, 16_384]);
   });
 });
+
+describe("progress of the annotated enumeration", () => {
+  // A report at every check (interval 0): `done` counts roots finished, so it never decreases and stays
+  // within 0 … n of total n. A path on 600 vertices: every root but the last has one later neighbour
+  // (worked by hand: peeling a path removes an end with one neighbour left, until one vertex is left), so
+  // the roots past 256 that the root loop checks the clock at have work.
+  it("is reported in root vertices, from 0 to n, never decreasing, for participation and the sweep", () => {
+    const n = 600;
+    const graph = fromEdgeList({
+      n,
+      directed: false,
+      sources: Array.from({ length: n - 1 }, (_, i) => i),
+      targets: Array.from({ length: n - 1 }, (_, i) => i + 1),
+      weights: new Array<number>(n - 1).fill(1),
+    });
+    const runs: [string, (onProgress: (p: { done: number; total: number }) => void) => void][] = [
+      [
+        "participation",
+        (onProgress) =>
+          countSimplices(graph, { participation: true, maxDim: 1, progressIntervalMs: 0, onProgress }),
+      ],
+      [
+        "sweep",
+        (onProgress) =>
+          sweepSimplexCounts(graph, explicitGrid([1], "distance"), {
+            kernel: "typescript",
+            maxDim: 1,
+            progressIntervalMs: 0,
+            onProgress,
+          }),
+      ],
+    ];
+    for (const [label, run] of runs) {
+      const done: number[] = [];
+      run((p) => {
+        expect(p.total, label).toBe(n);
+        done.push(p.done);
+      });
+      expect(done[0], label).toBe(0);
+      expect(Math.max(...done), label).toBeGreaterThanOrEqual(256);
+      for (let i = 0; i < done.length; i++) {
+        expect(done[i], label).toBeLessThanOrEqual(n);
+        if (i > 0) expect(done[i], label).toBeGreaterThanOrEqual(done[i - 1]);
+      }
+    }
+  });
+});

@@ -19,6 +19,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { factorial } from "../../../../test/support/combinatorics.js";
+import { completeGraph } from "../../../../test/support/known-graphs.js";
 import {
   elementary,
   type Mode,
@@ -120,6 +121,8 @@ describe("node and edge participation against the multipartite closed forms", ()
       [1, 36, 36],
       ["undirected", "ordered"],
     ], // 72: three words
+    [new Array(13).fill(1), ["undirected", "ordered"]], // K_13: 12; the first root's path of snapshots (12 + 11 + … + 1 = 78 entries) outgrows the
+    // snapshot stack's first size, 4·(12 + 2) = 56 (worked by hand)
   ];
   for (const [sizes, modes] of cases) {
     for (const mode of modes) {
@@ -304,5 +307,42 @@ describe("progress of the annotated enumeration", () => {
         if (i > 0) expect(done[i], label).toBeGreaterThanOrEqual(done[i - 1]);
       }
     }
+  });
+});
+
+describe("the empty graph", () => {
+  // no vertex, no simplex: every table is empty (the empty complex; χ = 0)
+  it("has no simplices, no participation rows and no sweep rows", () => {
+    const empty = fromEdgeList({ n: 0, directed: false, sources: [], targets: [], weights: [] });
+    const r = countSimplices(empty, { participation: true, edgeParticipation: true });
+    expect(Array.from(r.counts)).toEqual([]);
+    expect(r.euler).toBe(0);
+    expect(r.participation!.member).toEqual([]);
+    expect(r.edgeParticipation).toEqual([]);
+    const sweep = sweepSimplexCounts(empty, explicitGrid([1, 2], "distance"), { kernel: "typescript" });
+    expect(sweep.counts.map((row) => Array.from(row))).toEqual([[], []]);
+  });
+});
+
+describe("a budget that runs out inside a packed candidate set of the first root", () => {
+  // K_34 in the sweep (all edges at threshold 1): the first root of the degeneracy order has the other
+  // 33 vertices as its local universe, two words. Worked by hand, candidates taken from the highest local
+  // index down: 31 (one later member, 32: one triangle, counted in the one-word routine), 30 (two: two
+  // triangles and a tetrahedron, settled inline), 29 (three, across both words: the packed routine, three
+  // triangles, three tetrahedra, one 4-simplex). With the 34 vertices, 1 + 3 + 7 = 11 more make 45, past a
+  // budget of 44 at the end of the packed routine, where no root is finished yet (the first root's edges
+  // are added when its top level ends).
+  it("stops with no root done and the simplices so far", () => {
+    const g = completeGraph(34);
+    let error: unknown;
+    try {
+      sweepSimplexCounts(g, explicitGrid([1], "distance"), { kernel: "typescript", budget: 44 });
+    } catch (e) {
+      error = e;
+    }
+    expect(error).toBeInstanceOf(SimplexBudgetError);
+    const err = error as SimplexBudgetError;
+    expect(err.progress).toBe(0);
+    expect(Array.from(err.counted)).toEqual([34, 0, 6, 4, 1]);
   });
 });

@@ -346,3 +346,40 @@ describe("a budget that runs out inside a packed candidate set of the first root
     expect(Array.from(err.counted)).toEqual([34, 0, 6, 4, 1]);
   });
 });
+
+describe("a budget below the number of vertices", () => {
+  // the vertices are counted up front: with fewer simplices allowed than vertices, the count stops before
+  // any root, even when nothing else would be counted (maxDim 0, or no edges) — worked by hand. Progress
+  // is the share of roots with work that were finished: none of K4's three, and 1 (the count is complete)
+  // where no root has work (rootProgress in simplex-budget-error.ts).
+  it("stops before the first root, with the vertices counted", () => {
+    const k4 = completeGraph(4);
+    const isolated = fromEdgeList({ n: 4, directed: false, sources: [], targets: [], weights: [] });
+    const runs: [string, () => unknown, number][] = [
+      ["K4, participation", () => countSimplices(k4, { participation: true, budget: 3 }), 0],
+      [
+        "K4, participation, maxDim 0",
+        () => countSimplices(k4, { participation: true, budget: 3, maxDim: 0 }),
+        0,
+      ],
+      ["no edges, participation", () => countSimplices(isolated, { participation: true, budget: 3 }), 1],
+      [
+        "no edges, sweep",
+        () =>
+          sweepSimplexCounts(isolated, explicitGrid([1], "distance"), { kernel: "typescript", budget: 3 }),
+        1,
+      ],
+    ];
+    for (const [label, run, progress] of runs) {
+      let error: unknown;
+      try {
+        run();
+      } catch (e) {
+        error = e;
+      }
+      expect(error, label).toBeInstanceOf(SimplexBudgetError);
+      expect(Array.from((error as SimplexBudgetError).counted), label).toEqual([4]);
+      expect((error as SimplexBudgetError).progress, label).toBe(progress);
+    }
+  });
+});

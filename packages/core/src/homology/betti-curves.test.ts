@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { handBar as bar, handBarcode } from "../../../../test/support/hand-barcode.js";
 import { explicitGrid } from "../filtration/threshold-grid.js";
 import type { WeightSemantics } from "../filtration/weight-semantics.js";
 import type { Bar, Barcode } from "./barcode.js";
@@ -8,33 +9,14 @@ import { bettiCurves, bettiFromBarcode } from "./betti-curves.js";
 // β_k(t) counts the bars of dimension k with birth ≤ t < death in filtration order; before the filtration
 // starts, the n vertices stand alone.
 
-function bar(dim: number, birth: number, death: number | null): Bar {
-  return { dim, birth, death, birthSimplex: [0], deathSimplex: death === null ? null : [0, 1] };
-}
-
-function barcode(bars: Bar[], semantics: WeightSemantics, start: number, n: number, maxDim: number): Barcode {
-  const zeros = new Array(maxDim + 1).fill(0);
-  return {
-    bars,
-    prime: 2,
-    maxDim,
-    semantics,
-    directed: false,
-    start,
-    keepZeroLength: false,
-    stats: {
-      simplices: [n, ...zeros.slice(1)],
-      clearedColumns: zeros,
-      apparentPairs: zeros,
-      emergentPairs: zeros,
-      columnsReduced: zeros,
-      columnAdditions: zeros,
-      storedColumns: zeros,
-      peakBytes: 0,
-      representation: "clique-sparse",
-    },
-  };
-}
+/** The hand-written barcode of n vertices whose filtration starts at `start`. */
+const barcode = (
+  bars: Bar[],
+  semantics: WeightSemantics,
+  start: number,
+  n: number,
+  maxDim: number,
+): Barcode => handBarcode(bars, semantics, { start, n, maxDim });
 
 describe("bettiFromBarcode and bettiCurves", () => {
   // Four vertices born at 0; components die at 1, 2, 2; one essential. Loops [2, 3), [2, 5), [3, ∞).

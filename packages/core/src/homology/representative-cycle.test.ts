@@ -1,38 +1,8 @@
 import { describe, expect, it } from "vitest";
-import type { WeightSemantics } from "../filtration/weight-semantics.js";
+import { handBar as bar, handBarcode } from "../../../../test/support/hand-barcode.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
-import type { Bar, Barcode } from "./barcode.js";
 import { computeBarcode } from "./compute-barcode.js";
 import { mostPersistentBars, representativeCycle } from "./representative-cycle.js";
-
-function bar(dim: number, birth: number, death: number | null): Bar {
-  return { dim, birth, death, birthSimplex: [0, 1], deathSimplex: death === null ? null : [0, 1, 2] };
-}
-
-/** A barcode written by hand; only its bars matter to mostPersistentBars. */
-function barcode(bars: Bar[], semantics: WeightSemantics): Barcode {
-  const zeros = [0, 0];
-  return {
-    bars,
-    prime: 2,
-    maxDim: 1,
-    semantics,
-    directed: false,
-    start: 0,
-    keepZeroLength: false,
-    stats: {
-      simplices: zeros,
-      clearedColumns: zeros,
-      apparentPairs: zeros,
-      emergentPairs: zeros,
-      columnsReduced: zeros,
-      columnAdditions: zeros,
-      storedColumns: zeros,
-      peakBytes: 0,
-      representation: "clique-sparse",
-    },
-  };
-}
 
 // The square 0–1–2–3–0 with distances 1, 2, 3, 4 on its edges (worked by hand): no triangle, so one loop is
 // born when 0–3 enters at 4 and never dies; the components die at 1, 2, 3.
@@ -88,7 +58,7 @@ describe("mostPersistentBars", () => {
   ];
 
   it("orders essential bars first, then by length descending, ties by position", () => {
-    const code = barcode(bars, "distance");
+    const code = handBarcode(bars, "distance");
     expect(mostPersistentBars(code, 1, 10)).toEqual([2, 5, 1, 4, 3]);
     expect(mostPersistentBars(code, 1, 3)).toEqual([2, 5, 1]);
     expect(mostPersistentBars(code, 0, 10)).toEqual([6, 0]);
@@ -100,7 +70,7 @@ describe("mostPersistentBars", () => {
   it("keeps many tied bars in barcode order", () => {
     // Lengths 3, 1, 3, 1, … with one essential bar at position 8 (worked by hand).
     const lengths = [3, 1, 3, 1, 3, 1, 3, 1, null, 3, 1, 3];
-    const code = barcode(
+    const code = handBarcode(
       lengths.map((l, i) => bar(1, i, l === null ? null : i + l)),
       "distance",
     );
@@ -109,7 +79,7 @@ describe("mostPersistentBars", () => {
 
   it("measures similarity bars, whose deaths are smaller numbers than their births, by |death − birth|", () => {
     // Lengths 2, 1, 4 (worked by hand).
-    const code = barcode([bar(1, 9, 7), bar(1, 9, 8), bar(1, 6, 2)], "similarity");
+    const code = handBarcode([bar(1, 9, 7), bar(1, 9, 8), bar(1, 6, 2)], "similarity");
     expect(mostPersistentBars(code, 1, 3)).toEqual([2, 0, 1]);
   });
 });

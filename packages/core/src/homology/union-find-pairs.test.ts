@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
+import type { WeightedGraph } from "../graph/weighted-graph.js";
 import { WorkMonitor } from "../work/work-monitor.js";
 import { CliqueCoboundaries } from "./clique-coboundaries.js";
 import { ByteLedger } from "./homology-budget.js";
@@ -16,6 +17,23 @@ class NotingLedger extends ByteLedger {
   }
 }
 
+/** The clique model of a graph (distances, sparse rows) with its edges listed, and the ledger noting from then. */
+function edgesListed(graph: WeightedGraph) {
+  const ledger = new NotingLedger(undefined);
+  const monitor = new WorkMonitor(undefined);
+  const model = new CliqueCoboundaries(
+    graph,
+    edgeFiltration(graph, "distance"),
+    2,
+    "sparse",
+    ledger,
+    monitor,
+    new SimplexQuota(undefined, 2),
+  );
+  model.listSimplices(1);
+  return { ledger, monitor, model };
+}
+
 describe("unionFindPairs", () => {
   it("pairs components by Kruskal's order with the elder rule, and holds 8 bytes a vertex while it runs", () => {
     // Worked by hand: edges 0–1 (1), 2–3 (2), 1–2 (3), 0–3 (4). 0–1 kills vertex 1's component, 2–3 kills
@@ -29,18 +47,7 @@ describe("unionFindPairs", () => {
       weights: [1, 2, 3, 4],
       directed: false,
     });
-    const ledger = new NotingLedger(undefined);
-    const monitor = new WorkMonitor(undefined);
-    const model = new CliqueCoboundaries(
-      graph,
-      edgeFiltration(graph, "distance"),
-      2,
-      "sparse",
-      ledger,
-      monitor,
-      new SimplexQuota(undefined, 2),
-    );
-    model.listSimplices(1);
+    const { ledger, monitor, model } = edgesListed(graph);
     const before = ledger.held;
     ledger.noted = [];
     const pairs: number[][] = [];
@@ -84,18 +91,7 @@ describe("unionFindPairs", () => {
       weights: sources.map((i) => i + 1),
       directed: false,
     });
-    const ledger = new NotingLedger(undefined);
-    const monitor = new WorkMonitor(undefined);
-    const model = new CliqueCoboundaries(
-      graph,
-      edgeFiltration(graph, "distance"),
-      2,
-      "sparse",
-      ledger,
-      monitor,
-      new SimplexQuota(undefined, 2),
-    );
-    model.listSimplices(1);
+    const { ledger, monitor, model } = edgesListed(graph);
     ledger.noted = [];
     let pairs = 0;
     const killers = unionFindPairs(model, 0, ledger, { pair: () => pairs++, essential() {} }, monitor);

@@ -1,17 +1,15 @@
 import { describe, expect, it } from "vitest";
+import { seededRandom } from "../../../../test/support/random.js";
 import { countAtMost } from "./count-at-most.js";
 
 // Against its definition, the number of entries ≤ x counted one by one (what Python's bisect.bisect_right
 // returns on an ascending list: common practice).
 describe("countAtMost", () => {
   it("counts the entries ≤ x of ascending lists with repeats, for x below, between, on and above them", () => {
-    let state = 12345;
-    const next = () => {
-      state = (state * 48271) % 2147483647;
-      return state;
-    };
+    const random = seededRandom(12345);
+    const below = (k: number) => Math.floor(random() * k);
     for (let trial = 0; trial < 200; trial++) {
-      const sorted = Float64Array.from({ length: next() % 12 }, () => next() % 6).sort();
+      const sorted = Float64Array.from({ length: below(12) }, () => below(6)).sort();
       for (let x = -1; x <= 6; x += 0.5) {
         expect(countAtMost(sorted, x)).toBe(sorted.filter((v) => v <= x).length);
       }

@@ -151,7 +151,7 @@ export function reduceDimension(
     storedPushedTo[a] = to;
     if (to < horizon) work.pushMarker(to, a);
   };
-  // A stored column whose cursor ran out: its entries past the cover, up to the horizon, go to the heap.
+  // A stored column whose cursor ran out: its entries past the cover go to the heap, band by band.
   work.attach(
     entries,
     (a) => {

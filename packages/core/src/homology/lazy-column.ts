@@ -52,7 +52,7 @@ export class LazyColumn implements CofaceSink {
   /** Told when a cursor has given its last stored entry (its id is the order of addStored calls). */
   private onExhausted: ((cursor: number) => void) | null = null;
   /** Told when a marker reaches the top: the column's entries up to the marker's value are all popped. */
-  private onMarker: ((id: number) => void) | null = null;
+  private onMarker: (id: number) => void = () => {};
 
   /**
    * Where the stored columns given to addStored keep their entries, who pushes a stored column's
@@ -85,7 +85,7 @@ export class LazyColumn implements CofaceSink {
     while (heap.size > 0 && heap.key[0] >= MARKER_KEY && heap.f[0] < beforeF) {
       const id = (heap.key[0] - MARKER_KEY) / 2;
       heap.pop();
-      (this.onMarker as (id: number) => void)(id);
+      this.onMarker(id);
     }
   }
 

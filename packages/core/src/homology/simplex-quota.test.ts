@@ -1,16 +1,7 @@
 import { describe, expect, it } from "vitest";
+import { errorOf } from "../../../../test/support/error-of.js";
 import { SimplexBudgetError } from "../count/simplex-budget-error.js";
 import { SimplexQuota } from "./simplex-quota.js";
-
-/** The error a charge throws, or undefined. */
-function errorOf(charge: () => void): SimplexBudgetError | undefined {
-  try {
-    charge();
-  } catch (e) {
-    return e as SimplexBudgetError;
-  }
-  return undefined;
-}
 
 describe("SimplexQuota", () => {
   it("lets the total reach the budget exactly and stops one simplex past it (totals worked by hand)", () => {
@@ -20,7 +11,7 @@ describe("SimplexQuota", () => {
     // A dimension charged again replaces its count: 10 + 90 = 100, not 10 + 40 + 90.
     quota.charge(1, 90, 1, "edges");
     expect(quota.budget).toBe(100);
-    const error = errorOf(() => quota.charge(2, 1, 0.5, "edges"));
+    const error = errorOf(() => quota.charge(2, 1, 0.5, "edges"), SimplexBudgetError);
     expect(error).toBeInstanceOf(SimplexBudgetError);
     expect(error?.budget).toBe(100);
     // The counts of dimensions 0 … 2 as charged, the dimension that passed the budget last.
@@ -39,7 +30,7 @@ describe("SimplexQuota", () => {
     // A quota for dimensions 0 … 4 stopped at dimension 1: dims 2 … 4, not listed yet, are left out.
     const quota = new SimplexQuota(12, 4);
     quota.charge(0, 6, 1, "vertices");
-    const error = errorOf(() => quota.charge(1, 7, 1, "vertices"));
+    const error = errorOf(() => quota.charge(1, 7, 1, "vertices"), SimplexBudgetError);
     expect(Array.from(error?.counted ?? [])).toEqual([6, 7]);
     expect(error?.message).toContain("exceeded after 13 simplices with all vertices done");
   });

@@ -35,6 +35,22 @@ describe("SimplexQuota", () => {
     expect(error?.message).toContain("exceeded after 13 simplices with all vertices done");
   });
 
+  it("reports the higher dimensions already counted when a lower one passes the budget (worked by hand)", () => {
+    // As directed tables charge every dimension in turn: 64 vertices and 100 edges fit a budget of 200;
+    // 128 vertices with those 100 edges (228) do not. The counts reported add up to those 228.
+    const quota = new SimplexQuota(200, 3);
+    quota.charge(0, 64, 0.5, "root vertices");
+    quota.charge(1, 100, 0.5, "root vertices");
+    const error = errorOf(() => quota.charge(0, 128, 0.75, "root vertices"), SimplexBudgetError);
+    expect(Array.from(error.counted)).toEqual([128, 100]);
+    // 100 simplices outside this charge; the 128 came from 75 % of the roots: 100 + 128 / 0.75 ≈ 270.7.
+    expect(error.message).toBe(
+      "simplex budget of 200 exceeded after 228 simplices with 75.0% of root vertices done " +
+        "(a rough extrapolation: 2.71e+2 in all); counted so far dim 0: 128, dim 1: 100. " +
+        "Raise the budget, lower maxDim, or use a sparser threshold.",
+    );
+  });
+
   it("has no limit without a budget and refuses a negative or NaN one", () => {
     const quota = new SimplexQuota(undefined, 1);
     expect(quota.budget).toBe(Number.POSITIVE_INFINITY);

@@ -25,7 +25,9 @@ export class SimplexQuota {
     let total = 0;
     for (let k = 0; k < this.listed.length; k++) total += this.listed[k];
     if (total <= this.budget) return;
-    let top = dim;
+    // Every dimension counted so far, not only those up to `dim`: the counts reported add up to the total
+    // that passed the budget (directed tables charge dimension 0 again while the higher ones hold counts).
+    let top = this.listed.length - 1;
     while (top > 0 && this.listed[top] === 0) top--;
     const exact = total - count;
     throw new SimplexBudgetError(this.budget, this.listed.slice(0, top + 1), progress, exact, unit);

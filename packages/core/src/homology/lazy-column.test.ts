@@ -300,6 +300,106 @@ describe("LazyColumn", () => {
     expect([column.pivotF, column.pivotKey]).toEqual([2, 11]);
   });
 
+  it("with cursors, asks for a marker's band only once the search has got past its value", () => {
+    // A stored column (1, key 1), (3, key 2) read through a cursor; markers after the values 1 and 3.
+    // Worked by hand: settling stops at (1, 1), before either marker's value is passed; draining asks for
+    // marker 0 after the entry at 1 and before the one at 3, and for marker 1 after the entry at 3.
+    const store = new ReducedEntries(new ByteLedger(undefined));
+    storeColumn(
+      store,
+      0,
+      [
+        { f: 1, key: 1, coef: 1 },
+        { f: 3, key: 2, coef: 1 },
+      ],
+      Number.POSITIVE_INFINITY,
+    );
+    const from = store.used;
+    const asked: [number, number][] = [];
+    const column = newColumn(2);
+    column.attach(
+      store,
+      () => {},
+      (id) => asked.push([id, store.used - from]),
+    );
+    column.pushMarker(1, 0);
+    column.pushMarker(3, 1);
+    column.addStored(0, 2, 1);
+    expect(column.settle()).toBe(true);
+    expect([column.pivotF, column.pivotKey]).toEqual([1, 1]);
+    expect(asked).toEqual([]);
+    expect(column.drainInto(store, 1e9, Number.NEGATIVE_INFINITY)).toBe(Number.POSITIVE_INFINITY);
+    expect(stored(store, from, store.used)).toEqual([
+      { f: 1, key: 1, coef: 1 },
+      { f: 3, key: 2, coef: 1 },
+    ]);
+    // [marker, entries drained when it was asked for]
+    expect(asked).toEqual([
+      [0, 1],
+      [1, 2],
+    ]);
+  });
+
+  it("at the cap, goes on through the cursors' entries at the last value once the heap is empty", () => {
+    // The heap's one entry (0.5, key 9) is drained first and leaves the heap empty; the cursor's three
+    // entries at 1 must all be drained before the cover can be 1. Here they end the column: the cover
+    // is the horizon (worked by hand).
+    const store = new ReducedEntries(new ByteLedger(undefined));
+    storeColumn(
+      store,
+      0,
+      [1, 2, 3].map((key) => ({ f: 1, key, coef: 1 })),
+      Number.POSITIVE_INFINITY,
+    );
+    const column = newColumn(2);
+    column.attach(store, () => {});
+    column.push(0.5, 9, 1);
+    column.addStored(0, 3, 1);
+    expect(column.settle()).toBe(true);
+    const from = store.used;
+    expect(column.drainInto(store, 2, Number.NEGATIVE_INFINITY)).toBe(Number.POSITIVE_INFINITY);
+    expect(stored(store, from, store.used)).toEqual([
+      { f: 0.5, key: 9, coef: 1 },
+      { f: 1, key: 1, coef: 1 },
+      { f: 1, key: 2, coef: 1 },
+      { f: 1, key: 3, coef: 1 },
+    ]);
+  });
+
+  it("at the cap, is complete up to the horizon when the rest lies past it, or when nothing is left", () => {
+    // Worked by hand. A cursor's next entry at 5 lies past the horizon 3: the two entries drained are
+    // every entry up to 3.
+    const store = new ReducedEntries(new ByteLedger(undefined));
+    storeColumn(
+      store,
+      0,
+      [
+        { f: 1, key: 1, coef: 1 },
+        { f: 2, key: 2, coef: 1 },
+        { f: 5, key: 3, coef: 1 },
+      ],
+      Number.POSITIVE_INFINITY,
+    );
+    const column = newColumn(2);
+    column.attach(store, () => {});
+    column.horizon = 3;
+    column.addStored(0, 3, 1);
+    expect(column.settle()).toBe(true);
+    let from = store.used;
+    expect(column.drainInto(store, 2, Number.NEGATIVE_INFINITY)).toBe(3);
+    expect(stored(store, from, store.used)).toEqual([
+      { f: 1, key: 1, coef: 1 },
+      { f: 2, key: 2, coef: 1 },
+    ]);
+    // No horizon: a column whose last entry is the cap-th ran out, so it is complete up to +∞.
+    column.reset(2);
+    for (const f of [1, 2, 3]) column.push(f, f, 1);
+    expect(column.settle()).toBe(true);
+    from = store.used;
+    expect(column.drainInto(store, 3, Number.NEGATIVE_INFINITY)).toBe(Number.POSITIVE_INFINITY);
+    expect(stored(store, from, store.used).map((e) => e.f)).toEqual([1, 2, 3]);
+  });
+
   it("tells at once when a stored column added has no entries, and reads the others in order", () => {
     const store = new ReducedEntries(new ByteLedger(undefined));
     storeColumn(store, 0, [], 1);

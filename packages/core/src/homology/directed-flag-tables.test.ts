@@ -7,7 +7,7 @@ import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
 import { WorkMonitor } from "../work/work-monitor.js";
 import { DirectedFlagTables } from "./directed-flag-tables.js";
-import { ByteLedger } from "./homology-budget.js";
+import { ByteLedger, HomologyBudgetError } from "./homology-budget.js";
 import { SimplexQuota } from "./simplex-quota.js";
 
 /**
@@ -50,7 +50,8 @@ interface Simplex {
 /** Every simplex of dimension 0 … top by brute force, each dimension sorted by (f, tuple lexicographically). */
 function bruteForce(arcs: Arcs, top: number): Simplex[][] {
   const arc = new Map<number, number>();
-  for (let e = 0; e < arcs.sources.length; e++) arc.set(arcs.sources[e] * arcs.n + arcs.targets[e], arcs.weights[e]);
+  for (let e = 0; e < arcs.sources.length; e++)
+    arc.set(arcs.sources[e] * arcs.n + arcs.targets[e], arcs.weights[e]);
   const dims: Simplex[][] = Array.from({ length: top + 1 }, () => []);
   const grow = (tuple: number[], f: number) => {
     dims[tuple.length - 1].push({ tuple: [...tuple], f });
@@ -77,9 +78,24 @@ function bruteForce(arcs: Arcs, top: number): Simplex[][] {
 }
 
 function build(graph: WeightedGraph, top: number, maxSimplices?: number, maxBytes?: number) {
-  const ledger = new ByteLedger(maxBytes === undefined ? undefined : { maxBytes });
+  return buildWith(
+    new ByteLedger(maxBytes === undefined ? undefined : { maxBytes }),
+    graph,
+    top,
+    maxSimplices,
+  );
+}
+
+function buildWith(ledger: ByteLedger, graph: WeightedGraph, top: number, maxSimplices?: number) {
   const quota = new SimplexQuota(maxSimplices, top);
-  return new DirectedFlagTables(graph, edgeFiltration(graph, "distance"), top, ledger, new WorkMonitor({}), quota);
+  return new DirectedFlagTables(
+    graph,
+    edgeFiltration(graph, "distance"),
+    top,
+    ledger,
+    new WorkMonitor({}),
+    quota,
+  );
 }
 
 /** The tuple of every simplex of the tables, in key order. */
@@ -211,5 +227,66 @@ describe("DirectedFlagTables", () => {
     expect(Array.from(complete.counted)).toEqual([130, 100]);
     expect(complete.progress).toBe(1);
     expect(() => build(graphOf(arcs), 1, 230)).not.toThrow();
+    expect(error.message).toContain("with 98.5% of root vertices done");
+    expect(complete.message).toContain("with all root vertices done");
+  });
+
+  it("charges the arcs of the roots after the last round of 64 at the end (worked by hand)", () => {
+    // Arcs 129 → 0 … 99 only: before root 128, 128 vertices and no arc; at the end 130 + 100 = 230, which
+    // only the last charge of dimension 1 sees.
+    const arcs: Arcs = { n: 130, sources: [], targets: [], weights: [] };
+    for (let v = 0; v < 100; v++) {
+      arcs.sources.push(129);
+      arcs.targets.push(v);
+      arcs.weights.push(1);
+    }
+    const error = errorOf(() => build(graphOf(arcs), 1, 229), SimplexBudgetError);
+    expect(Array.from(error.counted)).toEqual([130, 100]);
+    expect(() => build(graphOf(arcs), 1, 230)).not.toThrow();
+  });
+
+  it("lists the vertices alone for top dimension 0, and estimates 1 coface for an empty dimension", () => {
+    // The path 0 → 1 → 2 → 3 (worked by hand): 4 vertices, 3 edges, no 2-simplex (no arc 0 → 2 nor 1 → 3).
+    const path: Arcs = { n: 4, sources: [0, 1, 2], targets: [1, 2, 3], weights: [1, 2, 3] };
+    const vertices = build(graphOf(path), 0);
+    expect(vertices.counts()).toEqual([4]);
+    expect(tuplesOf(vertices, 0, 4)).toEqual([[0], [1], [2], [3]]);
+    const tables = build(graphOf(path), 3);
+    expect(tables.counts()).toEqual([4, 3, 0, 0]);
+    // 3 edges × 2 facets over 4 vertices; no 2-simplex over 3 edges gives 0, at least 1; none of none: 1.
+    expect([0, 1, 2, 3].map((dim) => tables.cofaceEstimate(dim))).toEqual([1.5, 1, 1, 1]);
+  });
+
+  it("charges the ledger for what it keeps, and names the stage a budget error stops at", () => {
+    const arcs = randomArcs(8, 0.6, 4, 201);
+    const graph = graphOf(arcs);
+    const top = 3;
+    const counts = bruteForce(arcs, top).map((list) => list.length);
+    const ledger = new ByteLedger(undefined);
+    buildWith(ledger, graph, top);
+    // The listing's doubling arrays (TupleTableBuilder: 256 entries at first, an 8-byte value and 4 bytes a
+    // vertex each) hold the smallest 256 · 2^k ≥ count entries; their bytes stand for the sorted tables.
+    let listing = 0;
+    for (let d = 0; d <= top; d++) {
+      let capacity = 256;
+      while (capacity < counts[d]) capacity *= 2;
+      listing += capacity * (8 + 4 * (d + 1));
+    }
+    // The rest must hold at least what the links keep: each simplex's facets (4 bytes each), and for each
+    // entry of a coface row a 4-byte position and a 1-byte sign, plus the row starts.
+    let links = 0;
+    for (let d = 1; d <= top; d++) links += counts[d] * (d + 1) * (4 + 4 + 1) + (counts[d - 1] + 1) * 4;
+    expect(counts.slice(1).every((c) => c > 20)).toBe(true);
+    expect(ledger.held - listing).toBeGreaterThanOrEqual(links);
+    // Nothing is given back while the tables are built, so the last reservations are the top dimension's
+    // coface rows ((top + 1) entries for each top simplex, 5 bytes each) and, before them, its facets.
+    const rows = (top + 1) * counts[top] * 5;
+    const stageAt = (maxBytes: number) =>
+      errorOf(() => build(graph, top, undefined, maxBytes), HomologyBudgetError).stage;
+    expect(stageAt(ledger.held - 1)).toBe("linking directed cofaces");
+    expect(stageAt(ledger.held - rows - 1)).toBe("linking directed facets");
+    // The first reservation: 256 vertices of 8 + 4 bytes.
+    expect(stageAt(256 * 12 - 1)).toBe("listing directed 0-simplices");
+    expect(() => build(graph, top, undefined, ledger.held)).not.toThrow();
   });
 });

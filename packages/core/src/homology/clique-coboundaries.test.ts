@@ -14,13 +14,15 @@
  * every entry inside must be sent once.
  */
 import { describe, expect, it } from "vitest";
+import { errorOf } from "../../../../test/support/error-of.js";
+import { SimplexBudgetError } from "../count/simplex-budget-error.js";
 import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
 import { WorkMonitor } from "../work/work-monitor.js";
 import { CliqueCoboundaries, type CliqueLayout } from "./clique-coboundaries.js";
 import type { CofaceSink } from "./coface-sink.js";
-import { ByteLedger } from "./homology-budget.js";
+import { ByteLedger, HomologyBudgetError } from "./homology-budget.js";
 import { SimplexQuota } from "./simplex-quota.js";
 
 /** Small seeded generator (a linear congruential one) so that the cases are reproducible. */
@@ -217,5 +219,57 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
     expect(taken.checked).toBeGreaterThan(2000);
     expect(taken.finiteHorizon).toBeGreaterThan(500);
     expect(taken.bandAbove).toBeGreaterThan(300);
+  });
+});
+
+describe("CliqueCoboundaries construction", () => {
+  // K_6 with distinct edge values: every d-simplex has exactly 6 − d − 1 cofaces, and every vertex degree 5
+  // (worked by hand).
+  const n = 6;
+  const sources: number[] = [];
+  const targets: number[] = [];
+  for (let u = 0; u < n; u++)
+    for (let v = u + 1; v < n; v++) {
+      sources.push(u);
+      targets.push(v);
+    }
+  const k6 = fromEdgeList({ n, sources, targets, weights: sources.map((_, e) => e + 1), directed: false });
+  const make = (layout: CliqueLayout, ledger: ByteLedger, maxSimplices?: number) =>
+    new CliqueCoboundaries(
+      k6,
+      edgeFiltration(k6, "distance"),
+      4,
+      layout,
+      ledger,
+      new WorkMonitor({}),
+      new SimplexQuota(maxSimplices, 3),
+    );
+
+  it("holds the n × n matrices in the budget in the dense layout only, naming each stage", () => {
+    const dense = new ByteLedger(undefined);
+    const sparse = new ByteLedger(undefined);
+    make("dense", dense);
+    make("sparse", sparse);
+    // The dense layout keeps an n × n matrix of values (8 bytes each), and each row's vertices sorted by
+    // value (4-byte vertex, 8-byte value): 20 n² bytes more than the sparse layout at least.
+    expect(dense.held - sparse.held).toBeGreaterThanOrEqual(20 * n * n);
+    const stageAt = (maxBytes: number) =>
+      errorOf(() => make("dense", new ByteLedger({ maxBytes })), HomologyBudgetError).stage;
+    expect(stageAt(8 * n * n - 1)).toBe("building the dense edge-value matrix");
+    expect(stageAt(20 * n * n - 1)).toBe("sorting the dense edge-value rows");
+  });
+
+  it("estimates the cofaces of a simplex: n − d − 1 in the dense layout, the mean degree in the sparse one", () => {
+    const dense = make("dense", new ByteLedger(undefined));
+    const sparse = make("sparse", new ByteLedger(undefined));
+    // A 5-simplex of K_6 has no coface: the estimate is at least 1.
+    expect([0, 1, 2, 3, 4, 5].map((d) => dense.cofaceEstimate(d))).toEqual([5, 4, 3, 2, 1, 1]);
+    expect([0, 1, 2].map((d) => sparse.cofaceEstimate(d))).toEqual([5, 5, 5]);
+  });
+
+  it("charges its vertices to the simplex quota", () => {
+    const error = errorOf(() => make("sparse", new ByteLedger(undefined), 5), SimplexBudgetError);
+    expect(Array.from(error.counted)).toEqual([6]);
+    expect(error.message).toContain("exceeded after 6 simplices with all vertices done");
   });
 });

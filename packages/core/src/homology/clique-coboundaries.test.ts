@@ -267,6 +267,20 @@ describe("CliqueCoboundaries construction", () => {
     expect([0, 1, 2].map((d) => sparse.cofaceEstimate(d))).toEqual([5, 5, 5]);
   });
 
+  it("names the listing of a dimension as the stage when the budget runs out there", () => {
+    // One byte more than construction reserved: the first list of edges asks for more.
+    const measured = new ByteLedger(undefined);
+    make("sparse", measured);
+    const model = make("sparse", new ByteLedger({ maxBytes: measured.held + 1 }));
+    expect(errorOf(() => model.listSimplices(1), HomologyBudgetError).stage).toBe("listing the 1-simplices");
+  });
+
+  it("finds no facet of an edge entering with it: its facets are vertices", () => {
+    const model = make("sparse", new ByteLedger(undefined));
+    // Edge {0, 1} (key C(1, 2) + C(0, 1) = 0) enters at 1, its first value.
+    expect(model.zeroFacet(1, 0, 1)).toBe(-1);
+  });
+
   it("charges its vertices to the simplex quota", () => {
     const error = errorOf(() => make("sparse", new ByteLedger(undefined), 5), SimplexBudgetError);
     expect(Array.from(error.counted)).toEqual([6]);

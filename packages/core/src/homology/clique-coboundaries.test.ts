@@ -281,6 +281,32 @@ describe("CliqueCoboundaries construction", () => {
     expect(model.zeroFacet(1, 0, 1)).toBe(-1);
   });
 
+  it("lists the C(6, d + 1) d-simplices of K_6 in both layouts, and gives their bytes back on release", () => {
+    for (const layout of ["dense", "sparse"] as const) {
+      const ledger = new ByteLedger(undefined);
+      const model = make(layout, ledger);
+      const before = ledger.held;
+      expect([1, 2, 3].map((d) => model.listSimplices(d).count)).toEqual([15, 20, 15]);
+      expect(ledger.held).toBeGreaterThan(before);
+      for (const d of [1, 2, 3]) model.releaseSimplices(d);
+      expect(ledger.held).toBe(before);
+    }
+  });
+
+  it("names what it was listing when the simplex budget runs out (counts worked by hand)", () => {
+    // 6 vertices + 15 edges = 21 > 20; with 21 allowed, the 20 triangles pass it.
+    const edges = errorOf(
+      () => make("sparse", new ByteLedger(undefined), 20).listSimplices(1),
+      SimplexBudgetError,
+    );
+    expect(edges.message).toContain("exceeded after 21 simplices with all edges done");
+    const triangles = errorOf(
+      () => make("sparse", new ByteLedger(undefined), 21).listSimplices(2),
+      SimplexBudgetError,
+    );
+    expect(triangles.message).toContain("exceeded after 41 simplices with all 1-simplices done");
+  });
+
   it("charges its vertices to the simplex quota", () => {
     const error = errorOf(() => make("sparse", new ByteLedger(undefined), 5), SimplexBudgetError);
     expect(Array.from(error.counted)).toEqual([6]);

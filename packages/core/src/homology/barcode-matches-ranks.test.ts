@@ -196,10 +196,12 @@ describe("long filtrations found by replaying changes of the reduction on random
     semantics: "distance" | "similarity",
     maxDim: number,
     range: [number, number],
+    maxBytes?: number,
   ) {
     // A hang fails the test, but the bound is generous: a mutation run instruments the reduction and runs it
     // about ten times slower (G(200, 0.2) took over 20 s there, against 1–3 s here).
-    const barcode = computeBarcode(graph, { semantics, maxDim, prime: 2, timeLimitMs: 90_000 });
+    const budget = maxBytes === undefined ? undefined : { maxBytes };
+    const barcode = computeBarcode(graph, { semantics, maxDim, prime: 2, timeLimitMs: 90_000, budget });
     const inRange = [...new Set(graph.weights)]
       .filter((w) => w >= range[0] && w <= range[1])
       .sort((a, b) => a - b);
@@ -226,12 +228,23 @@ describe("long filtrations found by replaying changes of the reduction on random
     checkLevels(longFiltrationGraph(45, 0.67, 20), "similarity", 2, [338, 382]);
   });
 
-  it("stored columns pushed past their cover band by band (complete graph of 64 vertices, distances 1–1000)", () => {
-    // Past its stored entries a column's chain is pushed one band of values at a time, a marker after each;
-    // the bands run out before the horizon only on long filtrations like this one. With the marker left out
-    // (the bands after the first never pushed), β2 went wrong between 431 and 489.
+  it("stored columns read past their cover (complete graph of 64 vertices, distances 1–1000)", () => {
+    // Past its stored entries a column is extended by the entries of the next values, stored as a segment
+    // that continues it; only long filtrations like this one read that far.
     const barcode = checkLevels(randomGraph(64, 1, 1000, 9, false), "distance", 2, [431, 489]);
     expect(barcode.stats.storedColumns[2]).toBeGreaterThan(64);
+  });
+
+  it("and when the extensions find no room, pushed band by band (the same graph, 8 MiB)", () => {
+    // A quarter of 8 MiB holds about 100,000 stored entries: fewer columns keep theirs, and extensions are
+    // refused, so the chain of a column read past its cover is pushed one band of values at a time, a
+    // marker after each. With the bands left out (or the marker), β2 went wrong between 431 and 489, or the
+    // working column outgrew the budget.
+    const graph = randomGraph(64, 1, 1000, 9, false);
+    const barcode = checkLevels(graph, "distance", 2, [431, 489], 8 * 2 ** 20);
+    const unlimited = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2 });
+    expect(barcode.stats.storedColumns[2]).toBeLessThan(unlimited.stats.storedColumns[2]);
+    expect(barcode.bars).toEqual(unlimited.bars);
   });
 
   for (const seed of [3, 4]) {

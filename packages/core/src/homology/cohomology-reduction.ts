@@ -39,9 +39,10 @@ export interface ReductionCounters {
  *   with it at once and the rest of the coboundary is never produced.
  *
  * Finished columns whose chains are long also keep their reduced entries, sorted, up to a cover value;
- * adding one reads them through a cursor only as far as the pivot search goes, and continues from its
- * chain past the cover, one band of values at a time behind a marker (see ReducedEntries,
- * LazyColumn.addStored and LazyColumn.pushMarker).
+ * adding one reads them through a cursor only as far as the pivot search goes. A cursor that runs out
+ * reads on in the column's extension, computed from its chain once for the next band of values and kept;
+ * without room for it, the chain is pushed past the cover one band of values at a time behind a marker
+ * (see ReducedEntries, LazyColumn.addStored, LazyColumn.continueCursor and LazyColumn.pushMarker).
  *
  * Returns the pivots found (keys of dim+1 simplices that killed a class): the next dimension clears them.
  */
@@ -151,10 +152,46 @@ export function reduceDimension(
     storedPushedTo[a] = to;
     if (to < horizon) work.pushMarker(to, a);
   };
-  // A stored column whose cursor ran out: its entries past the cover go to the heap, band by band.
+  // Stored columns are added to many working columns, and the pivot searches often run past their
+  // cover: then the column's entries are computed once for the next band of values and stored after the
+  // rest (so the cursor reads on), instead of each working column pushing the chain's coboundary again.
+  const extender = new LazyColumn(ledger, 256);
+  const extension = new ReducedEntries(ledger);
+  const drained = new ReducedEntries(ledger);
+  // Appends the owner's entries of the next bands (passing over empty ones) as a segment and returns it,
+  // or -1 when the column has no more entries or there is no room for them.
+  const extendStored = (owner: number): number => {
+    let cover = entries.cover[owner];
+    extension.used = 0;
+    while (cover !== Number.POSITIVE_INFINITY && extension.used === 0) {
+      extender.reset(p);
+      extender.bandLow = cover;
+      extender.horizon = valueAfter(sortedF, cover, EXTENSION_BAND, Number.POSITIVE_INFINITY);
+      pushChain(model, dim, store, owner, 1, p, extender);
+      const reached = extender.drainInto(extension, Number.POSITIVE_INFINITY, cover);
+      if (reached <= cover) break;
+      cover = reached;
+    }
+    if (extension.used === 0) return -1;
+    return entries.extend(owner, extension, cover);
+  };
+  // The segment each stored column's cursor reads (-1: the column's first entries).
+  let storedSegment: Int32Array = new Int32Array(64);
+  // A stored column whose cursor ran out reads on in its extended entries; when there is no room for them,
+  // its entries past the cover go to the heap, band by band.
   work.attach(
     entries,
     (a) => {
+      const owner = storedAdded[a];
+      const read = storedSegment[a];
+      let next = read < 0 ? entries.firstSegment[owner] : entries.segmentNext[read];
+      if (next < 0) next = extendStored(owner);
+      if (next >= 0) {
+        storedSegment[a] = next;
+        const start = entries.segmentStart[next];
+        work.continueCursor(a, start, start + entries.segmentLength[next]);
+        return;
+      }
       storedDone[a] = 1;
       const cover = entries.cover[storedAdded[a]];
       storedPushedTo[a] = cover;
@@ -253,12 +290,14 @@ export function reduceDimension(
             storedFactor = grownInt(storedFactor, storedCount * 2);
             storedStep = grownInt(storedStep, storedCount * 2);
             storedPushedTo = grownFloat(storedPushedTo, storedCount * 2);
+            storedSegment = grownInt(storedSegment, storedCount * 2);
             const done = new Uint8Array(storedCount * 2);
             done.set(storedDone);
             storedDone = done;
           }
           storedAdded[storedCount] = owner;
           storedFactor[storedCount] = factor;
+          storedSegment[storedCount] = -1;
           storedDone[storedCount++] = 0;
           const from = entries.start[owner];
           work.addStored(from, from + entries.length[owner], factor);
@@ -309,12 +348,13 @@ export function reduceDimension(
       chain.compact(p);
       store.setChain(id, chain.key, chain.f, chain.coef, chain.size);
       if (chain.size >= STORE_ENTRIES_FROM_CHAIN) {
-        const from = entries.used;
-        const cover = work.drainInto(entries, STORED_ENTRIES_PER_COLUMN, Number.NEGATIVE_INFINITY);
-        if (cover !== Number.NEGATIVE_INFINITY) {
-          entries.close(id, from, cover);
+        // Drained apart first: cursors running out during the drain append their extensions to the store.
+        drained.used = 0;
+        const cover = work.drainInto(drained, STORED_ENTRIES_PER_COLUMN, Number.NEGATIVE_INFINITY);
+        if (cover !== Number.NEGATIVE_INFINITY && entries.appendAll(drained)) {
+          entries.close(id, entries.used - drained.used, cover);
           counters.stored++;
-        } else entries.used = from;
+        }
       }
       pivots.set(pivotKey, id);
       if (pivotF > f || keepZeroLength) sink.pair(dim, key, f, pivotKey, pivotF);
@@ -322,6 +362,9 @@ export function reduceDimension(
     }
   }
   work.dispose();
+  extender.dispose();
+  extension.dispose();
+  drained.dispose();
   chain.dispose();
   entries.dispose();
   ledger.release(sortedCount * 8);
@@ -337,6 +380,8 @@ const STORED_ENTRIES_PER_COLUMN = 2048;
 
 /** Column values spanned by the first band of a stored column's chain pushed past its cover. */
 const FIRST_BAND = 256;
+/** Column values spanned by each extension of a stored column's entries. */
+const EXTENSION_BAND = 1024;
 
 /**
  * The end of a band that starts at `from` and spans `step` of the sorted column values past it, at most

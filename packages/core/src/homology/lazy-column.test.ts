@@ -557,14 +557,49 @@ describe("LazyColumn", () => {
     expect(stored(out, 0, out.used)).toEqual(expected.slice(0, 498));
   });
 
-  it("refuses to drain cursors into another store", () => {
-    const store = new ReducedEntries(new ByteLedger(undefined));
-    storeColumn(store, 0, [{ f: 1, key: 1, coef: 1 }], Number.POSITIVE_INFINITY);
-    const column = newColumn(2);
-    column.attach(store, () => {});
-    column.addStored(0, 1, 1);
-    expect(() => column.drainInto(new ReducedEntries(new ByteLedger(undefined)), 10, 0)).toThrow(
-      /another store/,
-    );
+  it("reads on where its producer continues an exhausted cursor, while the store moves, drained apart", () => {
+    // Each stored column is cut into parts at random values; the store holds only the first part, and a
+    // cursor that runs out is continued with the next part, appended then after 1,500 unrelated entries
+    // (so the store's arrays are replaced while the column is being popped). Some first parts are empty.
+    for (const p of [2, 3, 5]) {
+      for (let seed = 1; seed <= 20; seed++) {
+        const next = lcg(seed * 7919 + p);
+        const store = new ReducedEntries(new ByteLedger(undefined));
+        const column = newColumn(p);
+        const parts: Entry[][][] = [];
+        const factors: number[] = [];
+        const expected: Entry[] = randomEntries(next, next() % 20, 40, p);
+        for (const e of expected) column.push(e.f, e.key, e.coef);
+        const count = 1 + (next() % 70);
+        for (let c = 0; c < count; c++) {
+          const own = tally(randomEntries(next, next() % 12, 40, p), p);
+          const cuts = [0.5, 1.5, 2.5, 3.5].filter(() => next() % 2 === 0);
+          const bounds = [Number.NEGATIVE_INFINITY, ...cuts, Number.POSITIVE_INFINITY];
+          parts.push(bounds.slice(1).map((high, i) => own.filter((e) => e.f > bounds[i] && e.f <= high)));
+          factors.push(1 + (next() % (p - 1)));
+          for (const e of own) expected.push({ ...e, coef: e.coef * factors[c] });
+        }
+        const read = parts.map(() => 0);
+        column.attach(store, (cursor) => {
+          // Like the reduction's producer, it passes over empty parts.
+          let part = ++read[cursor];
+          while (part < parts[cursor].length && parts[cursor][part].length === 0) part = ++read[cursor];
+          if (part === parts[cursor].length) return;
+          expect(store.reserveEntries(1500)).toBe(true);
+          for (let k = 0; k < 1500; k++) store.append(-1, -1, 1);
+          const from = store.used;
+          storeColumn(store, 1000 + cursor, parts[cursor][part], 0);
+          column.continueCursor(cursor, from, store.used);
+        });
+        for (let c = 0; c < count; c++) {
+          const from = store.used;
+          storeColumn(store, c, parts[c][0], 0);
+          column.addStored(from, store.used, factors[c]);
+        }
+        expectSettlesAndDrains(column, new ReducedEntries(new ByteLedger(undefined)), tally(expected, p));
+        // Every cursor read to its column's end.
+        expect(read).toEqual(parts.map((part) => part.length));
+      }
+    }
   });
 });

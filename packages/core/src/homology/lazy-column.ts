@@ -49,15 +49,18 @@ export class LazyColumn implements CofaceSink {
     this.heap = new CofaceHeap(ledger, capacity);
   }
 
-  /** Told when a cursor has given its last stored entry (its id is the order of addStored calls). */
+  /**
+   * Told when a cursor has given its last stored entry (its id is the order of addStored calls): it may
+   * continue the cursor (continueCursor) or push the column's later entries itself.
+   */
   private onExhausted: ((cursor: number) => void) | null = null;
   /** Told when a marker reaches the top: the column's entries up to the marker's value are all popped. */
   private onMarker: (id: number) => void = () => {};
 
   /**
-   * Where the stored columns given to addStored keep their entries, who pushes a stored column's
-   * entries past its cover once its cursor has run out, and who pushes the next band of a source whose
-   * marker (pushMarker) came up.
+   * Where the stored columns given to addStored keep their entries, who continues a cursor that has run
+   * out or pushes its column's later entries, and who pushes the next band of a source whose marker
+   * (pushMarker) came up.
    */
   attach(
     entries: ReducedEntries,
@@ -107,20 +110,21 @@ export class LazyColumn implements CofaceSink {
   addStored(start: number, end: number, factor: number): void {
     if (this.cursorsOpened === this.cursorPos.length) this.growCursors();
     const id = this.cursorsOpened++;
-    if (start >= end) {
-      (this.onExhausted as (cursor: number) => void)(id);
-      return;
-    }
     this.cursorPos[id] = start;
     this.cursorEnd[id] = end;
     this.cursorFactor[id] = factor;
+    if (start >= end) {
+      (this.onExhausted as (cursor: number) => void)(id);
+      if (this.cursorPos[id] >= this.cursorEnd[id]) return;
+    }
     // Sift up.
     const entries = this.entries as ReducedEntries;
     const ef = entries.entryF;
     const ek = entries.entryKey;
     const order = this.cursorHeap;
-    const f = ef[start];
-    const key = ek[start];
+    const at = this.cursorPos[id];
+    const f = ef[at];
+    const key = ek[at];
     let i = this.cursorCount++;
     while (i > 0) {
       const parent = (i - 1) >> 1;
@@ -131,6 +135,15 @@ export class LazyColumn implements CofaceSink {
       i = parent;
     }
     order[i] = id;
+  }
+
+  /**
+   * Gives an exhausted cursor the stored entries [start, end) to read next (from within onExhausted, which
+   * is told when it ran out). They must come after every entry it gave before.
+   */
+  continueCursor(id: number, start: number, end: number): void {
+    this.cursorPos[id] = start;
+    this.cursorEnd[id] = end;
   }
 
   push(f: number, key: number, coef: number): void {
@@ -189,17 +202,14 @@ export class LazyColumn implements CofaceSink {
   private popLeast(): number {
     const heap = this.heap;
     const entries = this.entries as ReducedEntries;
-    const ef = entries.entryF;
-    const ek = entries.entryKey;
-    const ec = entries.entryCoef;
     const order = this.cursorHeap;
     let hasCursor = false;
     let cf = 0;
     let ck = 0;
     if (this.cursorCount > 0) {
       const at = this.cursorPos[order[0]];
-      cf = ef[at];
-      ck = ek[at];
+      cf = entries.entryF[at];
+      ck = entries.entryKey[at];
       hasCursor = cf <= this.horizon;
     }
     // A marker's producer may push entries before the cursors' head (and may exhaust no cursor).
@@ -223,8 +233,9 @@ export class LazyColumn implements CofaceSink {
     while (this.cursorCount > 0) {
       const id = order[0];
       const at = this.cursorPos[id];
-      if (ek[at] !== key) break;
-      sum += this.cursorFactor[id] * ec[at];
+      if (entries.entryKey[at] !== key) break;
+      sum += this.cursorFactor[id] * entries.entryCoef[at];
+      // May move the store's arrays: an exhausted cursor's producer can append entries to it.
       this.advanceTopCursor();
     }
     this.leastF = f;
@@ -263,7 +274,6 @@ export class LazyColumn implements CofaceSink {
    * the value up to which the entries appended are complete (the horizon when the column ran out).
    */
   drainInto(out: ReducedEntries, cap: number, coveredTo: number): number {
-    if (this.cursorCount > 0 && this.entries !== out) throw new Error("cursors read another store");
     let lastF = coveredTo;
     let beforeLastF = coveredTo;
     let runStart = out.used;
@@ -275,7 +285,7 @@ export class LazyColumn implements CofaceSink {
         let nextF = Number.POSITIVE_INFINITY;
         if (this.heap.size > 0) nextF = this.heap.f[0];
         if (this.cursorCount > 0) {
-          const cf = out.entryF[this.cursorPos[this.cursorHeap[0]]];
+          const cf = (this.entries as ReducedEntries).entryF[this.cursorPos[this.cursorHeap[0]]];
           if (cf < nextF) nextF = cf;
         }
         if (nextF > this.horizon || (this.heap.size === 0 && this.cursorCount === 0)) return this.horizon;
@@ -319,11 +329,14 @@ export class LazyColumn implements CofaceSink {
     const id = order[0];
     const pos = ++this.cursorPos[id];
     if (pos >= this.cursorEnd[id]) {
-      const last = --this.cursorCount;
-      if (last !== 0) order[0] = order[last];
-      // Entries pushed now lie past the cover, after every entry popped so far.
+      // The producer may give the cursor more entries (continueCursor) or push the rest of its column
+      // (entries past the cover, after every entry popped so far).
       (this.onExhausted as (cursor: number) => void)(id);
-      if (last === 0) return;
+      if (this.cursorPos[id] >= this.cursorEnd[id]) {
+        const last = --this.cursorCount;
+        if (last === 0) return;
+        order[0] = order[last];
+      }
     }
     // Sift down the top cursor.
     const entries = this.entries as ReducedEntries;

@@ -89,7 +89,9 @@ describe("ReducedEntries", () => {
     // The first entries stay where they were; each segment holds its entries, in order.
     expect([store.start[0], store.length[0], store.start[1], store.length[1]]).toEqual([0, 1, 1, 2]);
     const read = (s: number): number[] =>
-      Array.from(store.entryF.subarray(store.segmentStart[s], store.segmentStart[s] + store.segmentLength[s]));
+      Array.from(
+        store.entryF.subarray(store.segmentStart[s], store.segmentStart[s] + store.segmentLength[s]),
+      );
     expect([read(a), read(b), read(c)]).toEqual([[4, 5], [7], [9, 10, 11]]);
     expect(Array.from(store.entryKey.subarray(store.segmentStart[c], store.used))).toEqual([90, 100, 110]);
     expect(Array.from(store.entryCoef.subarray(store.segmentStart[c], store.used))).toEqual([0, 1, 2]);
@@ -106,7 +108,9 @@ describe("ReducedEntries", () => {
     more.reserveEntries(101);
     for (let e = 400; e < 501; e++) more.append(e, e, 1);
     expect(store.extend(0, more, 500)).toBe(-1);
-    expect([store.used, store.segmentCount, store.firstSegment[0], store.cover[0]]).toEqual([400, 0, -1, 399]);
+    expect([store.used, store.segmentCount, store.firstSegment[0], store.cover[0]]).toEqual([
+      400, 0, -1, 399,
+    ]);
     more.used = 100;
     expect(store.extend(0, more, 499)).toBe(0);
     expect([store.used, store.segmentCount, store.firstSegment[0], store.cover[0]]).toEqual([500, 1, 0, 499]);
@@ -144,6 +148,8 @@ describe("ReducedEntries", () => {
     }
     expect(error).toBeInstanceOf(HomologyBudgetError);
     expect((error as HomologyBudgetError).stage).toBe("storing reduced entries");
-    expect(() => new ReducedEntries(new ByteLedger({ maxBytes: START - 1 }))).toThrow(/storing reduced entries/);
+    expect(() => new ReducedEntries(new ByteLedger({ maxBytes: START - 1 }))).toThrow(
+      /storing reduced entries/,
+    );
   });
 });

@@ -124,7 +124,9 @@ export class ReducedEntries {
 
   dispose(): void {
     this.ledger.release(
-      this.start.length * COLUMN_BYTES + this.segmentStart.length * SEGMENT_BYTES + this.entryF.length * ENTRY_BYTES,
+      this.start.length * COLUMN_BYTES +
+        this.segmentStart.length * SEGMENT_BYTES +
+        this.entryF.length * ENTRY_BYTES,
     );
   }
 

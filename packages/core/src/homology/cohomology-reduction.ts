@@ -381,7 +381,7 @@ const STORED_ENTRIES_PER_COLUMN = 2048;
 /** Column values spanned by the first band of a stored column's chain pushed past its cover. */
 const FIRST_BAND = 256;
 /** Column values spanned by each extension of a stored column's entries. */
-const EXTENSION_BAND = 1024;
+const EXTENSION_BAND = 256;
 
 /**
  * The end of a band that starts at `from` and spans `step` of the sorted column values past it, at most

@@ -42,6 +42,9 @@ export class LazyColumn implements CofaceSink {
   private cursorEnd = new Int32Array(64);
   private cursorFactor = new Int32Array(64);
   private cursorHeap = new Int32Array(64);
+  /** The head entry (f, key) of the cursor at each heap slot, so that sifts compare without indirection. */
+  private headF = new Float64Array(64);
+  private headKey = new Float64Array(64);
   private cursorCount = 0;
   private cursorsOpened = 0;
 
@@ -119,22 +122,25 @@ export class LazyColumn implements CofaceSink {
     }
     // Sift up.
     const entries = this.entries as ReducedEntries;
-    const ef = entries.entryF;
-    const ek = entries.entryKey;
-    const order = this.cursorHeap;
     const at = this.cursorPos[id];
-    const f = ef[at];
-    const key = ek[at];
+    const f = entries.entryF[at];
+    const key = entries.entryKey[at];
+    const order = this.cursorHeap;
+    const hf = this.headF;
+    const hk = this.headKey;
     let i = this.cursorCount++;
     while (i > 0) {
       const parent = (i - 1) >> 1;
-      const at = this.cursorPos[order[parent]];
-      const pf = ef[at];
-      if (pf < f || (pf === f && ek[at] <= key)) break;
+      const pf = hf[parent];
+      if (pf < f || (pf === f && hk[parent] <= key)) break;
       order[i] = order[parent];
+      hf[i] = pf;
+      hk[i] = hk[parent];
       i = parent;
     }
     order[i] = id;
+    hf[i] = f;
+    hk[i] = key;
   }
 
   /**
@@ -207,9 +213,8 @@ export class LazyColumn implements CofaceSink {
     let cf = 0;
     let ck = 0;
     if (this.cursorCount > 0) {
-      const at = this.cursorPos[order[0]];
-      cf = entries.entryF[at];
-      ck = entries.entryKey[at];
+      cf = this.headF[0];
+      ck = this.headKey[0];
       hasCursor = cf <= this.horizon;
     }
     // A marker's producer may push entries before the cursors' head (and may exhaust no cursor).
@@ -230,11 +235,9 @@ export class LazyColumn implements CofaceSink {
     }
     let sum = 0;
     if (hasHeap && heap.key[0] === key) sum += heap.popMerged();
-    while (this.cursorCount > 0) {
+    while (this.cursorCount > 0 && this.headKey[0] === key) {
       const id = order[0];
-      const at = this.cursorPos[id];
-      if (entries.entryKey[at] !== key) break;
-      sum += this.cursorFactor[id] * entries.entryCoef[at];
+      sum += this.cursorFactor[id] * entries.entryCoef[this.cursorPos[id]];
       // May move the store's arrays: an exhausted cursor's producer can append entries to it.
       this.advanceTopCursor();
     }
@@ -285,7 +288,7 @@ export class LazyColumn implements CofaceSink {
         let nextF = Number.POSITIVE_INFINITY;
         if (this.heap.size > 0) nextF = this.heap.f[0];
         if (this.cursorCount > 0) {
-          const cf = (this.entries as ReducedEntries).entryF[this.cursorPos[this.cursorHeap[0]]];
+          const cf = this.headF[0];
           if (cf < nextF) nextF = cf;
         }
         if (nextF > this.horizon || (this.heap.size === 0 && this.cursorCount === 0)) return this.horizon;
@@ -326,46 +329,46 @@ export class LazyColumn implements CofaceSink {
 
   private advanceTopCursor(): void {
     const order = this.cursorHeap;
-    const id = order[0];
-    const pos = ++this.cursorPos[id];
-    if (pos >= this.cursorEnd[id]) {
-      // The producer may give the cursor more entries (continueCursor) or push the rest of its column
-      // (entries past the cover, after every entry popped so far).
-      (this.onExhausted as (cursor: number) => void)(id);
-      if (this.cursorPos[id] >= this.cursorEnd[id]) {
-        const last = --this.cursorCount;
-        if (last === 0) return;
-        order[0] = order[last];
-      }
+    let top = order[0];
+    let f: number;
+    let key: number;
+    const pos = ++this.cursorPos[top];
+    // The producer may give the cursor more entries (continueCursor) or push the rest of its column
+    // (entries past the cover, after every entry popped so far).
+    if (pos >= this.cursorEnd[top]) (this.onExhausted as (cursor: number) => void)(top);
+    const hf = this.headF;
+    const hk = this.headKey;
+    if (this.cursorPos[top] < this.cursorEnd[top]) {
+      // Read after the producer, which may have moved the store's arrays.
+      const entries = this.entries as ReducedEntries;
+      f = entries.entryF[this.cursorPos[top]];
+      key = entries.entryKey[this.cursorPos[top]];
+    } else {
+      const last = --this.cursorCount;
+      if (last === 0) return;
+      top = order[last];
+      f = hf[last];
+      key = hk[last];
     }
-    // Sift down the top cursor.
-    const entries = this.entries as ReducedEntries;
-    const ef = entries.entryF;
-    const ek = entries.entryKey;
+    // Sift down.
     const count = this.cursorCount;
-    const top = order[0];
-    const at = this.cursorPos[top];
-    const f = ef[at];
-    const key = ek[at];
     let i = 0;
     for (;;) {
       let child = 2 * i + 1;
       if (child >= count) break;
-      let childAt = this.cursorPos[order[child]];
       const right = child + 1;
-      if (right < count) {
-        const rightAt = this.cursorPos[order[right]];
-        if (ef[rightAt] < ef[childAt] || (ef[rightAt] === ef[childAt] && ek[rightAt] < ek[childAt])) {
-          child = right;
-          childAt = rightAt;
-        }
-      }
-      const cf = ef[childAt];
-      if (f < cf || (f === cf && key <= ek[childAt])) break;
+      if (right < count && (hf[right] < hf[child] || (hf[right] === hf[child] && hk[right] < hk[child])))
+        child = right;
+      const cf = hf[child];
+      if (f < cf || (f === cf && key <= hk[child])) break;
       order[i] = order[child];
+      hf[i] = cf;
+      hk[i] = hk[child];
       i = child;
     }
     order[i] = top;
+    hf[i] = f;
+    hk[i] = key;
   }
 
   private growCursors(): void {
@@ -379,6 +382,12 @@ export class LazyColumn implements CofaceSink {
     this.cursorEnd = grow(this.cursorEnd);
     this.cursorFactor = grow(this.cursorFactor);
     this.cursorHeap = grow(this.cursorHeap);
+    const headF = new Float64Array(size);
+    headF.set(this.headF);
+    this.headF = headF;
+    const headKey = new Float64Array(size);
+    headKey.set(this.headKey);
+    this.headKey = headKey;
   }
 
   dispose(): void {

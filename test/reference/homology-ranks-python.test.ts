@@ -16,7 +16,7 @@ import {
 } from "@cliquescape/core";
 import { describe, expect, it } from "vitest";
 import { missingPythonModules, runPythonScript } from "../support/python.js";
-import { seededRandom } from "../support/random.js";
+import { type RandomArcs, randomArcs } from "../support/random-arcs.js";
 
 interface Job {
   rows: number;
@@ -29,27 +29,7 @@ function ranksInPython(jobs: Job[]): number[] {
   return runPythonScript<number[]>("boundary_ranks.py", jobs);
 }
 
-interface Arcs {
-  n: number;
-  directed: boolean;
-  sources: number[];
-  targets: number[];
-  weights: number[];
-}
-
-function randomArcs(n: number, p: number, directed: boolean, seed: number): Arcs {
-  const random = seededRandom(seed);
-  const arcs: Arcs = { n, directed, sources: [], targets: [], weights: [] };
-  for (let u = 0; u < n; u++) {
-    for (let v = directed ? 0 : u + 1; v < n; v++) {
-      if (u === v || random() >= p) continue;
-      arcs.sources.push(u);
-      arcs.targets.push(v);
-      arcs.weights.push(1 + Math.floor(random() * 4)); // four levels: ties on purpose
-    }
-  }
-  return arcs;
-}
+type Arcs = RandomArcs;
 
 /** All simplices at a distance threshold, by brute force: subsets (undirected) or tuples (directed). */
 function bruteSimplices(arcs: Arcs, threshold: number, topDim: number): number[][][] {
@@ -102,7 +82,7 @@ describe.skipIf(missing !== null)(
       const jobs: Job[] = [];
       const checks: { counts: number[]; ranksAt: number; ours: number[]; label: string }[] = [];
       for (const c of cases) {
-        const arcs = randomArcs(c.n, c.p, c.directed, c.seed);
+        const arcs = randomArcs(c.n, c.p, 4, c.seed, c.directed);
         const graph: WeightedGraph = fromEdgeList(arcs);
         for (const [prime, ourPrime] of [
           [2, 2],

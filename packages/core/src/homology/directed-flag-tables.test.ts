@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { errorOf } from "../../../../test/support/error-of.js";
-import { seededRandom } from "../../../../test/support/random.js";
+import { type RandomArcs, randomArcs } from "../../../../test/support/random-arcs.js";
 import { SimplexBudgetError } from "../count/simplex-budget-error.js";
 import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
@@ -19,26 +19,7 @@ import { SimplexQuota } from "./simplex-quota.js";
  * boundary formula of Hatcher, "Algebraic Topology", 2002, §2.1, transposed).
  */
 
-interface Arcs {
-  n: number;
-  sources: number[];
-  targets: number[];
-  weights: number[];
-}
-
-/** Random arcs on n vertices, both directions drawn independently (so some are reciprocal), values 1 … levels. */
-function randomArcs(n: number, p: number, levels: number, seed: number): Arcs {
-  const random = seededRandom(seed);
-  const arcs: Arcs = { n, sources: [], targets: [], weights: [] };
-  for (let u = 0; u < n; u++)
-    for (let v = 0; v < n; v++) {
-      if (u === v || random() >= p) continue;
-      arcs.sources.push(u);
-      arcs.targets.push(v);
-      arcs.weights.push(1 + Math.floor(random() * levels));
-    }
-  return arcs;
-}
+type Arcs = Omit<RandomArcs, "directed">;
 
 const graphOf = (arcs: Arcs): WeightedGraph => fromEdgeList({ ...arcs, directed: true });
 
@@ -126,7 +107,7 @@ const cases = [
 
 describe("DirectedFlagTables", () => {
   for (const c of cases) {
-    const arcs = randomArcs(c.n, c.p, c.levels, c.seed);
+    const arcs = randomArcs(c.n, c.p, c.levels, c.seed, true);
     const graph = graphOf(arcs);
     const label = `n=${c.n} p=${c.p} seed=${c.seed}, dimensions 0 … ${c.top}`;
 
@@ -258,7 +239,7 @@ describe("DirectedFlagTables", () => {
   });
 
   it("charges the ledger for what it keeps, and names the stage a budget error stops at", () => {
-    const arcs = randomArcs(8, 0.6, 4, 201);
+    const arcs = randomArcs(8, 0.6, 4, 201, true);
     const graph = graphOf(arcs);
     const top = 3;
     const counts = bruteForce(arcs, top).map((list) => list.length);

@@ -17,10 +17,19 @@ class NotingLedger extends ByteLedger {
   }
 }
 
+/** A monitor that notes the work done at each check. */
+class NotingMonitor extends WorkMonitor {
+  checks: number[] = [];
+  override check(done: number): void {
+    this.checks.push(done);
+    super.check(done);
+  }
+}
+
 /** The clique model of a graph (distances, sparse rows) with its edges listed, and the ledger noting from then. */
 function edgesListed(graph: WeightedGraph) {
   const ledger = new NotingLedger(undefined);
-  const monitor = new WorkMonitor(undefined);
+  const monitor = new NotingMonitor(undefined);
   const model = new CliqueCoboundaries(
     graph,
     edgeFiltration(graph, "distance"),
@@ -98,5 +107,36 @@ describe("unionFindPairs", () => {
     expect(pairs).toBe(n - 1);
     expect(killers.size).toBe(n - 1);
     expect(ledger.noted.filter(([stage]) => stage === "recording the spanning-forest edges").length).toBe(1);
+  });
+
+  it("checks the clock at least once per 65,536 edges and far less often than once per edge", () => {
+    // K_363 has 65,703 edges: past one round of 65,536. The contract of WorkMonitor (checks every few
+    // thousand units of work, never per simplex) bounds the count from both sides; a stage that never
+    // checked could not be stopped by a time limit.
+    const n = 363;
+    const sources: number[] = [];
+    const targets: number[] = [];
+    for (let u = 0; u < n; u++) {
+      for (let v = u + 1; v < n; v++) {
+        sources.push(u);
+        targets.push(v);
+      }
+    }
+    const graph = fromEdgeList({
+      n,
+      sources,
+      targets,
+      weights: sources.map((_, i) => 1 + (i % 97)),
+      directed: false,
+    });
+    const { monitor, model } = edgesListed(graph);
+    monitor.checks = [];
+    unionFindPairs(model, 0, new ByteLedger(undefined), { pair() {}, essential() {} }, monitor);
+    const edges = sources.length;
+    expect(edges).toBe(65_703);
+    // One check when the stage begins, then at least one per 65,536 edges.
+    expect(monitor.checks.length).toBeGreaterThanOrEqual(1 + Math.ceil(edges / 65_536));
+    expect(monitor.checks.length).toBeLessThan(edges / 1000);
+    expect(Math.max(...monitor.checks)).toBeLessThan(edges);
   });
 });

@@ -196,6 +196,33 @@ describe("the sweep's threshold bins against the multipartite closed forms", () 
   }
 });
 
+describe("the sweep's bins in candidate sets of more than 32 members", () => {
+  // K_40 as 40 parts of one vertex, weight min(p, q) + 1 (the "min" weighting of the header, so the same
+  // closed form). The first roots of the degeneracy order have 39 or so vertices in their local universe
+  // (two words); a first candidate early in that list leaves more than 32 candidates over both words, which
+  // the sweep enumerates in the general routine below the root. There a simplex's bin is the larger of its
+  // path's bin and the candidate's carried bin: a triangle {r, a, j} with j's label below r's and a's
+  // enters at min(r, a) + 1, from the edge r–a that j's carried bin does not see.
+  const sizes = new Array<number>(40).fill(1);
+  for (const mode of ["undirected", "ordered"] as Mode[]) {
+    for (const cap of [2, 3]) {
+      it(`K_40, ${mode}, maxDim ${cap}`, () => {
+        const weight = (p: number) => p + 1;
+        const { graph } = multipartite(sizes, mode, 17, { weight });
+        const thresholds = Array.from({ length: sizes.length }, (_, t) => t + 1);
+        const sweep = sweepSimplexCounts(graph, explicitGrid(thresholds, "distance"), {
+          kernel: "typescript",
+          maxDim: cap,
+        });
+        expect(sweep.counts.map((row) => Array.from(row))).toEqual(
+          thresholds.map((t) => sweepExpected(sizes, t, true, mode).slice(0, cap + 1)),
+        );
+        expect(sweep.truncated).toBe(true);
+      });
+    }
+  }
+});
+
 describe("every simplex of the annotated enumeration counts towards the budget", () => {
   for (const [sizes, mode] of [
     [[1, 2, 3, 4, 5], "undirected"],

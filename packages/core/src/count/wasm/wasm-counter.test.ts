@@ -1,4 +1,6 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
+import { factorial } from "../../../../../test/support/combinatorics.js";
+import { elementary, type Mode, multipartite } from "../../../../../test/support/multipartite.js";
 import { fromEdgeList } from "../../graph/from-edge-list.js";
 import { countSimplices } from "../count-simplices.js";
 import { SimplexBudgetError } from "../simplex-budget-error.js";
@@ -86,6 +88,38 @@ describe("the WebAssembly counting kernel", () => {
     }
   });
 
+  it("stops an undirected count where the TypeScript kernel stops, roots taken in the same order", () => {
+    // Two K5s on the even and on the odd vertices. The TypeScript counter takes roots in the degeneracy
+    // numbering; the WebAssembly kernel must too for undirected graphs (only directed lists are renumbered
+    // breadth-first): the simplices counted and the share of roots finished at a budget stop then agree
+    // (countWithWasm's contract: the same budget errors as the TypeScript counter). Budgets from the 30
+    // simplices counted up front (10 vertices, 20 edges) to one below the total, 2·31 − 1 = 61 (K5 has
+    // 2^5 − 1 = 31 nonempty cliques, common practice).
+    const sources: number[] = [];
+    const targets: number[] = [];
+    for (let u = 0; u < 10; u++)
+      for (let v = u + 2; v < 10; v += 2) {
+        sources.push(u);
+        targets.push(v);
+      }
+    const g = fromEdgeList({ n: 10, directed: false, sources, targets, weights: sources.map(() => 1) });
+    expect(Array.from(countSimplices(g, { kernel: "webassembly" }).counts)).toEqual([10, 20, 20, 10, 2]);
+    const stop = (budget: number, kernel: "webassembly" | "typescript") => {
+      try {
+        countSimplices(g, { budget, kernel });
+      } catch (e) {
+        const error = e as SimplexBudgetError;
+        return { counted: Array.from(error.counted), progress: error.progress };
+      }
+      return null;
+    };
+    for (let budget = 30; budget < 62; budget++) {
+      const wasm = stop(budget, "webassembly");
+      expect(wasm, `budget ${budget}`).not.toBeNull();
+      expect(wasm, `budget ${budget}`).toEqual(stop(budget, "typescript"));
+    }
+  });
+
   it("falls back to the TypeScript kernel where WebAssembly is missing, and says so when it was asked for", async () => {
     vi.stubGlobal("WebAssembly", undefined);
     vi.resetModules();
@@ -156,6 +190,43 @@ describe("the WebAssembly counting kernel", () => {
     }
   });
 
+  it("a single vertex is past a budget of 0, in a fresh instance and in the kept one", () => {
+    // worked by hand: one vertex is one simplex, so a budget of 0 stops before any root, with [1] counted
+    // (the TypeScript kernel gives the same); a fresh instance fills its tables in this count
+    const one = fromEdgeList({ n: 1, directed: false, sources: [], targets: [], weights: [] });
+    for (const fresh of [true, false]) {
+      if (fresh) discardKernel();
+      for (const kernel of ["webassembly", "typescript"] as const) {
+        let error: unknown;
+        try {
+          countSimplices(one, { budget: 0, kernel });
+        } catch (e) {
+          error = e;
+        }
+        expect(error, `${kernel}, fresh ${fresh}`).toBeInstanceOf(SimplexBudgetError);
+        expect(Array.from((error as SimplexBudgetError).counted), `${kernel}, fresh ${fresh}`).toEqual([1]);
+      }
+    }
+  });
+
+  it("counts a path on 100 000 vertices in a fresh instance, whose memory then ends with the marks", () => {
+    // worked by hand: a path on n vertices has n vertices and n − 1 edges, no triangle. A fresh instance
+    // grows its memory to the page after the last region, the marks (4 bytes per vertex): all 400 000
+    // bytes of them must fit
+    const n = 100_000;
+    const path = fromEdgeList({
+      n,
+      directed: false,
+      sources: Array.from({ length: n - 1 }, (_, i) => i),
+      targets: Array.from({ length: n - 1 }, (_, i) => i + 1),
+      weights: new Array<number>(n - 1).fill(1),
+    });
+    discardKernel();
+    const r = countSimplices(path, { kernel: "webassembly" });
+    expect(Array.from(r.counts)).toEqual([n, n - 1]);
+    expect(r.truncated).toBe(false);
+  });
+
   it("when the kernel's memory cannot grow, auto counts in TypeScript and webassembly says why it cannot", () => {
     // a fresh instance has less memory than K_130's tables need; make growing fail as it does when the
     // runtime refuses another few hundred MiB (a failed count drops the instance, so stub each fresh one)
@@ -209,4 +280,41 @@ describe("the WebAssembly counting kernel", () => {
     // @ts-expect-error: a caller from JavaScript can pass anything
     expect(() => countSimplices(complete(4), { kernel: "wasm" })).toThrow(/kernel must be "auto"/);
   });
+});
+
+describe("the WebAssembly kernel against the multipartite closed form, at every cap", () => {
+  // A clique of a complete multipartite graph takes at most one vertex from each part (common practice):
+  // e_{k+1}(part sizes) k-simplices, once per clique oriented along a total order, (k+1)! times with both
+  // arcs (as bitset-counter.test.ts). The cases span one to five 64-bit words per row and reach every
+  // dimension, so each region of the kernel's memory (counts, per-level children, packed indices, stack,
+  // rows, re-packed rows, marks) holds live data while its neighbours do; each runs first in a fresh
+  // instance (memory grown to this graph) and again in the kept one.
+  const cases: [number[], Mode][] = [
+    [[2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2], "undirected"],
+    [[11, 1, 2, 10, 10], "both"],
+    [[66, 66, 1, 1, 1], "ordered"],
+    [[33, 33, 33], "both"],
+    [[70, 70, 70], "undirected"],
+    [[100, 100, 100], "undirected"],
+    [[100, 100, 100], "ordered"],
+    [[1, 2, 3, 4, 5, 6, 7, 8], "ordered"],
+  ];
+  for (const [sizes, mode] of cases) {
+    it(`parts ${sizes.join(", ")}, ${mode}`, () => {
+      const g = multipartite(sizes, mode, 23).graph;
+      const want = elementary(sizes)
+        .slice(1)
+        .map((c, k) => (mode === "both" ? c * factorial(k + 1) : c));
+      for (const fresh of [true, false]) {
+        if (fresh) discardKernel();
+        for (let m = 1; m <= want.length; m++) {
+          const r = countSimplices(g, { kernel: "webassembly", maxDim: m });
+          expect(Array.from(r.counts), `maxDim ${m}, fresh ${fresh}`).toEqual(want.slice(0, m + 1));
+          expect(r.truncated, `maxDim ${m}, fresh ${fresh}`).toBe(want.length > m + 1);
+        }
+        const all = countSimplices(g, { kernel: "webassembly" });
+        expect(Array.from(all.counts), `no cap, fresh ${fresh}`).toEqual(want);
+      }
+    });
+  }
 });

@@ -263,6 +263,20 @@ describe("a budget passed only by a wide universe's last tally", () => {
   });
 });
 
+describe("the empty graph", () => {
+  // no vertex, no simplex: no count at all, not a count of 0 vertices (the empty complex, χ = 0; worked by
+  // hand), at every cap
+  it("has no simplices in the TypeScript counter", () => {
+    const empty = fromEdgeList({ n: 0, directed: false, sources: [], targets: [], weights: [] });
+    for (const maxDim of [0, 1, 2, undefined]) {
+      const r = count(empty, maxDim);
+      expect(Array.from(r.counts), `maxDim ${maxDim}`).toEqual([]);
+      expect(r.euler, `maxDim ${maxDim}`).toBe(0);
+      expect(r.truncated, `maxDim ${maxDim}`).toBe(false);
+    }
+  });
+});
+
 describe("the closed form itself", () => {
   it("equal parts give C(r, k+1)·a^(k+1), as count-simplices.test.ts states it", () => {
     expect(expectedCounts([4, 4, 4], "undirected")).toEqual([1, 2, 3].map((j) => binomial(3, j) * 4 ** j));

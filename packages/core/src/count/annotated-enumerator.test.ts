@@ -19,6 +19,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { factorial } from "../../../../test/support/combinatorics.js";
+import { significant } from "../../../../test/support/graph-ops.js";
 import { completeGraph } from "../../../../test/support/known-graphs.js";
 import {
   elementary,
@@ -26,6 +27,8 @@ import {
   type Multipartite,
   multipartite,
 } from "../../../../test/support/multipartite.js";
+import { missingPythonModules, runPythonScript } from "../../../../test/support/python.js";
+import { seededRandom } from "../../../../test/support/random.js";
 import { explicitGrid } from "../filtration/threshold-grid.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import { countSimplices } from "./count-simplices.js";
@@ -222,6 +225,52 @@ describe("the sweep's bins in candidate sets of more than 32 members", () => {
     }
   }
 });
+
+const missingNetworkx = missingPythonModules(["networkx"]);
+
+describe.skipIf(missingNetworkx !== null)(
+  `the sweep on directed hubs against networkx${missingNetworkx ? ` (skipped: ${missingNetworkx})` : ""}`,
+  () => {
+    // A hub with arcs to 40 vertices, its local universe of two words: 32 vertices with no other arc, and
+    // 8 with seeded random arcs among them (p = 0.5 each way). Those 8 have more neighbours, so they come
+    // after the 32 in the degeneracy numbering and fill the second word: their candidate sets lie in one
+    // word that is not the first, some with two candidates, with and without arcs between them. Weights in
+    // tenths. Counts per threshold from networkx (networkx.enumerate_all_cliques and the admissible vertex
+    // orders of each clique, test/support/python/clique_counts.py).
+    for (const seed of [1, 2, 3]) {
+      it(`seed ${seed}`, () => {
+        const random = seededRandom(900 + seed);
+        const edges: [number, number, number][] = [];
+        const tenth = () => Math.ceil(random() * 10) / 10;
+        for (let v = 1; v <= 40; v++) edges.push([0, v, tenth()]);
+        for (let u = 33; u <= 40; u++)
+          for (let v = 33; v <= 40; v++) if (u !== v && random() < 0.5) edges.push([u, v, tenth()]);
+        const thresholds = [0.2, 0.4, 0.6, 0.8, 1];
+        const reference = runPythonScript<{ perThreshold: number[][] }>("clique_counts.py", {
+          graph: "edges",
+          n: 41,
+          directed: true,
+          edges,
+          thresholds,
+          semantics: "distance",
+        });
+        const graph = fromEdgeList({
+          n: 41,
+          directed: true,
+          sources: edges.map((e) => e[0]),
+          targets: edges.map((e) => e[1]),
+          weights: edges.map((e) => e[2]),
+        });
+        const sweep = sweepSimplexCounts(graph, explicitGrid(thresholds, "distance"), {
+          kernel: "typescript",
+        });
+        thresholds.forEach((t, i) => {
+          expect(significant(sweep.counts[i]), `threshold ${t}`).toEqual(reference.perThreshold[i]);
+        });
+      });
+    }
+  },
+);
 
 describe("every simplex of the annotated enumeration counts towards the budget", () => {
   for (const [sizes, mode] of [

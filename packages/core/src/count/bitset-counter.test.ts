@@ -263,6 +263,39 @@ describe("a budget passed only by a wide universe's last tally", () => {
   });
 });
 
+describe("a cut found early is kept when later sets have no edge inside", () => {
+  // Worked by hand. The transitive tournament on 4 vertices (arcs i → j for i < j) has 4, 6, 4, 1
+  // simplices; the digraph r → b, x, y and b → x, y (no arc between x and y) has 4, 5, 2: (r, b, x) and
+  // (r, b, y), and from r the candidates after b are {x, y}, two with no arc inside. At maxDim 2 the
+  // tournament's 3-simplex is cut off. With a copy of the second digraph before and after the tournament
+  // in the input, whichever order the roots come in, such a set is met after the cut has been found.
+  it("at maxDim 2", () => {
+    const sources: number[] = [];
+    const targets: number[] = [];
+    const add = (base: number, arcs: [number, number][]) => {
+      for (const [a, b] of arcs) {
+        sources.push(base + a);
+        targets.push(base + b);
+      }
+    };
+    const fork: [number, number][] = [
+      [0, 1],
+      [0, 2],
+      [0, 3],
+      [1, 2],
+      [1, 3],
+    ];
+    add(0, fork);
+    add(4, [...fork, [2, 3]]); // the tournament: the fork and 2 → 3
+    add(8, fork);
+    const g = fromEdgeList({ n: 12, directed: true, sources, targets, weights: sources.map(() => 1) });
+    const r = count(g, 2);
+    expect(Array.from(r.counts)).toEqual([12, 16, 8]);
+    expect(r.truncated).toBe(true);
+    expect(Array.from(count(g).counts)).toEqual([12, 16, 8, 1]);
+  });
+});
+
 describe("the empty graph", () => {
   // no vertex, no simplex: no count at all, not a count of 0 vertices (the empty complex, χ = 0; worked by
   // hand), at every cap

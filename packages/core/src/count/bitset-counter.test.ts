@@ -230,6 +230,45 @@ describe("three candidates across two words, settled inline, in every orientatio
   });
 });
 
+describe("three candidates in one word, settled inline, in every orientation", () => {
+  // As above in a one-word universe: vertex 0 → 1 … 5, vertex 1 → 3, 4, 5, and arcs among 3, 4, 5.
+  // Transitive: 0, 1 and the three form a transitive tournament on 5 vertices, C(5, k+1) simplices
+  // (common practice), and vertex 2 with its arc from 0: 6, 11, 10, 5, 1. Both arcs on each pair (worked
+  // by hand, as above with one extra vertex instead of 29): 6, 5 + 3 + 6 = 14, 21, 18, 6.
+  const orders = [
+    [3, 4, 5],
+    [3, 5, 4],
+    [4, 3, 5],
+    [4, 5, 3],
+    [5, 3, 4],
+    [5, 4, 3],
+  ];
+  const withArcs = (inner: number[][]) => {
+    const arcs = [[0, 1], [0, 2], [0, 3], [0, 4], [0, 5], [1, 3], [1, 4], [1, 5], ...inner];
+    return fromEdgeList({
+      n: 6,
+      directed: true,
+      sources: arcs.map((a) => a[0]),
+      targets: arcs.map((a) => a[1]),
+      weights: arcs.map(() => 1),
+    });
+  };
+  for (const [s, m, t] of orders) {
+    it(`arcs ${s} → ${m}, ${s} → ${t}, ${m} → ${t}`, () => {
+      const g = withArcs([
+        [s, m],
+        [s, t],
+        [m, t],
+      ]);
+      expect(Array.from(count(g).counts)).toEqual([6, 11, 10, 5, 1]);
+    });
+  }
+  it("both arcs on each pair", () => {
+    const g = withArcs(orders.map(([a, b]) => [a, b]));
+    expect(Array.from(count(g).counts)).toEqual([6, 14, 21, 18, 6]);
+  });
+});
+
 describe("a cone over the ordered tripartite graph: sets re-packed twice", () => {
   // The apex has arcs to all 210 vertices (a universe of seven words); its sets of 129–140 members are
   // re-packed into five words, and their sets of 65–70 members must not be re-packed again from there.

@@ -278,6 +278,10 @@ describe("every simplex of the annotated enumeration counts towards the budget",
     [[20, 20, 20], "ordered"],
     [[2, 3, 33, 34], "undirected"],
     [[3, 4, 5], "both"],
+    // K4 and the transitive tournament on 4 vertices: the first root's first candidate leaves two
+    // candidates joined by an edge, settled inline in the one-word routine (15 simplices)
+    [[1, 1, 1, 1], "undirected"],
+    [[1, 1, 1, 1], "ordered"],
   ] as [number[], Mode][]) {
     it(`parts ${sizes.join(", ")}, ${mode}: a budget of the total passes, one less stops`, () => {
       const { graph } = multipartite(sizes, mode, 3);

@@ -48,6 +48,10 @@ describe("the TypeScript counter against the multipartite closed form, at every 
     // 18 pairs (lists of 34, two words): children of two and three members settled inline, children in
     // the low word only, across both words, whole cliques in closed form; a cap in every level
     [[2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2], ["undirected", "ordered"], 4],
+    // 24 pairs (lists of up to 46, two words, the second holding up to 14 members): sets lying in the
+    // second word only, whose children of three or more members hold both vertices of a pair (not a
+    // clique: the whole-clique shortcut must not be taken)
+    [new Array(24).fill(2), ["undirected"], 4],
     // every dimension: two-word rows with both arcs (no "later members only" shortcut in the rows)
     [[11, 1, 2, 10, 10], ["both"], 5],
     // lists of 121 (four words): candidate sets of 33–64 members packed into two words, of ≤ 32 and of

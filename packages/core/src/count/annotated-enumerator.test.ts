@@ -463,4 +463,16 @@ describe("a budget below the number of vertices", () => {
       expect((error as SimplexBudgetError).progress, label).toBe(progress);
     }
   });
+
+  it("passes with a budget of exactly the number of vertices when there is nothing else", () => {
+    // four isolated vertices are four simplices, checked against the budget before any root: 4 is enough
+    // (worked by hand)
+    const isolated = fromEdgeList({ n: 4, directed: false, sources: [], targets: [], weights: [] });
+    expect(Array.from(countSimplices(isolated, { participation: true, budget: 4 }).counts)).toEqual([4]);
+    const sweep = sweepSimplexCounts(isolated, explicitGrid([1], "distance"), {
+      kernel: "typescript",
+      budget: 4,
+    });
+    expect(Array.from(sweep.counts[0])).toEqual([4]);
+  });
 });

@@ -2,7 +2,7 @@ import { grownFloat, grownInt } from "./grown-array.js";
 import type { ByteLedger } from "./homology-budget.js";
 
 const ENTRY_BYTES = 20; // f (f64), key (f64), coefficient (i32)
-const COLUMN_BYTES = 20; // start, length, first segment (i32), cover (f64)
+const COLUMN_BYTES = 24; // start, length, first and last segment (i32), cover (f64)
 const SEGMENT_BYTES = 12; // start, length, next (i32)
 
 /**

@@ -476,3 +476,25 @@ describe("a budget below the number of vertices", () => {
     expect(Array.from(sweep.counts[0])).toEqual([4]);
   });
 });
+
+describe("participation rows of a hub", () => {
+  it("a directed star of 8,193 leaves keeps rows for the edges only", () => {
+    // Worked by hand: the hub is in every edge and is its source; each leaf is in one edge, as its sink.
+    // Rows used to be made for every dimension the hub's 8,193 out-neighbours could reach: 3 × 8,194 rows
+    // of 8,194 doubles (1.6 GB), held by the module after the count.
+    const d = 8193;
+    const sources = new Array<number>(d).fill(0);
+    const targets = Array.from({ length: d }, (_, i) => i + 1);
+    const graph = fromEdgeList({ n: d + 1, sources, targets, weights: sources.map(() => 1), directed: true });
+    const before = process.memoryUsage().arrayBuffers;
+    const r = countSimplices(graph, { participation: true });
+    const grown = process.memoryUsage().arrayBuffers - before;
+    expect(Array.from(r.counts)).toEqual([d + 1, d]);
+    const p = r.participation!;
+    expect(p.member.length).toBe(2);
+    expect([p.member[1][0], p.source![1][0], p.sink![1][0]]).toEqual([d, d, 0]);
+    expect(new Set(p.member[1].subarray(1))).toEqual(new Set([1]));
+    expect(new Set(p.sink![1].subarray(1))).toEqual(new Set([1]));
+    expect(grown).toBeLessThan(256 * 2 ** 20);
+  });
+});

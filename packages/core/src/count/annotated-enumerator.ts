@@ -170,16 +170,21 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
       rootSlot[i] = slots[a + i];
     }
     loc.fill(0, 0, d * W);
+    // The widest row bounds the dimension of the root's simplices: (v, u, w, …) needs w, … in u's row.
+    let widest = 0;
     for (let i = 0; i < d; i++) {
       const u = targets[a + i];
       const row = i * W;
+      let width = 0;
       for (let s = offsets[u]; s < offsets[u + 1]; s++) {
         const j = mark[targets[s]];
         if (j < 0) continue;
+        width++;
         loc[row + (j >>> 5)] |= 1 << (j & 31);
         if (withBins) lbin[i * d + j] = bins![slots[s]];
         if (creditEdges) lslot[i * d + j] = slots[s];
       }
+      if (width > widest) widest = width;
     }
     for (let i = 0; i < d; i++) mark[targets[a + i]] = -1;
     rootIndex = v;
@@ -191,7 +196,9 @@ export function enumerateAnnotated(g: EnumerationGraph, o: AnnotateOptions): Ann
     }
     const root = vertexOf[v];
     if (credit) {
-      const hi = Math.min(capDim, d);
+      // Rows for the dimensions this root can reach, not for d of them (a hub of 16,385 leaves asked for
+      // 6 GB of participation rows).
+      const hi = Math.min(capDim, d, widest + 1);
       ensureRows(hi);
       const base = push(1, hi);
       grow(0, 0, 0);

@@ -313,3 +313,61 @@ describe("CliqueCoboundaries construction", () => {
     expect(error.message).toContain("exceeded after 6 simplices with all vertices done");
   });
 });
+
+describe("listing triangles of K_100 (4,950 edges: past one round of 4,096)", () => {
+  const n = 100;
+  const sources: number[] = [];
+  const targets: number[] = [];
+  for (let u = 0; u < n; u++) {
+    for (let v = u + 1; v < n; v++) {
+      sources.push(u);
+      targets.push(v);
+    }
+  }
+  const k100 = fromEdgeList({
+    n,
+    sources,
+    targets,
+    weights: sources.map((_, e) => 1 + (e % 89)),
+    directed: false,
+  });
+
+  /** A monitor that notes the work done at each check while listing. */
+  class NotingMonitor extends WorkMonitor {
+    checks: number[] = [];
+    override check(done: number): void {
+      this.checks.push(done);
+      super.check(done);
+    }
+  }
+  const make = (monitor: WorkMonitor, maxSimplices?: number) =>
+    new CliqueCoboundaries(
+      k100,
+      edgeFiltration(k100, "distance"),
+      2,
+      "sparse",
+      new ByteLedger(undefined),
+      monitor,
+      new SimplexQuota(maxSimplices, 2),
+    );
+
+  it("checks the clock at least once per 4,096 edges and far less often than once per edge", () => {
+    // WorkMonitor's contract: checks every few thousand units of work, never per simplex.
+    const monitor = new NotingMonitor({});
+    const model = make(monitor);
+    model.listSimplices(1);
+    monitor.checks = [];
+    // C(100, 3) triangles, a closed form.
+    expect(model.listSimplices(2).count).toBe(161_700);
+    expect(monitor.checks.length).toBeGreaterThanOrEqual(1 + Math.ceil(4950 / 4096));
+    expect(monitor.checks.length).toBeLessThan(4950 / 100);
+  });
+
+  it("stops at the first round past the budget, before every edge is extended", () => {
+    // 10,000 triangles are passed long before the 4,096th edge: the charge there stops the listing, with
+    // the share of edges done as its progress.
+    const error = errorOf(() => make(new WorkMonitor({}), 10_000).listSimplices(2), SimplexBudgetError);
+    expect(error.progress).toBeCloseTo(4096 / 4950, 10);
+    expect(error.counted[2]).toBeLessThan(161_700);
+  });
+});

@@ -271,3 +271,57 @@ describe("DirectedFlagTables", () => {
     expect(() => build(graph, top, undefined, ledger.held)).not.toThrow();
   });
 });
+
+describe("the clock while the tables are built", () => {
+  /** Notes how many checks follow each stage's begin (the begin's own check not counted). */
+  class NotingMonitor extends WorkMonitor {
+    afterBegin: number[] = [];
+    private beginning = false;
+    override begin(stage: Parameters<WorkMonitor["begin"]>[0], dim: number, total: number): void {
+      this.beginning = true;
+      super.begin(stage, dim, total);
+      this.beginning = false;
+      this.afterBegin.push(0);
+    }
+    override check(done: number): void {
+      if (!this.beginning) this.afterBegin[this.afterBegin.length - 1]++;
+      super.check(done);
+    }
+  }
+
+  it("is checked at each root and each of its arcs, every 65,536 simplices sorted and every 4,096 linked", () => {
+    // The schedule the code documents, so that a time limit stops every stage: the enumeration checks at
+    // each root vertex and at each arc leaving it (never per simplex); the counting sort of each dimension's
+    // values, and the linking of each dimension to its facets, check every 65,536 and 4,096 simplices.
+    // 4,500 vertices, the i → i+1 path and a few random arcs: 4,500 + arcs vertices and edges, past 4,096.
+    const n = 4500;
+    const arcs = randomArcs(60, 0.2, 4, 77, true);
+    for (let v = 60; v < n - 1; v++) {
+      arcs.sources.push(v);
+      arcs.targets.push(v + 1);
+      arcs.weights.push(1);
+    }
+    arcs.n = n;
+    const graph = graphOf(arcs);
+    const monitor = new NotingMonitor({});
+    const tables = new DirectedFlagTables(
+      graph,
+      edgeFiltration(graph, "distance"),
+      2,
+      new ByteLedger(undefined),
+      monitor,
+      new SimplexQuota(undefined, 2),
+    );
+    const counts = tables.counts();
+    expect(counts[1]).toBe(arcs.sources.length);
+    expect(counts[1]).toBeGreaterThan(4096);
+    expect(counts[2]).toBeGreaterThan(1);
+    const rounds = (count: number, every: number) => Math.ceil(count / every);
+    expect(monitor.afterBegin).toEqual([
+      n + counts[1],
+      ...counts.map((c) => rounds(c, 65_536)),
+      rounds(counts[1], 4096),
+      rounds(counts[2], 4096),
+    ]);
+  });
+});

@@ -10,29 +10,9 @@
 import { computeBarcode, fromEdgeList, representativeCycle, type WeightedGraph } from "@cliquescape/core";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { seededRandom } from "../support/random.js";
+import { type RandomArcs, randomArcs } from "../support/random-arcs.js";
 
-interface Arcs {
-  n: number;
-  directed: boolean;
-  sources: number[];
-  targets: number[];
-  weights: number[];
-}
-
-function randomArcs(n: number, p: number, levels: number, directed: boolean, seed: number): Arcs {
-  const random = seededRandom(seed);
-  const arcs: Arcs = { n, directed, sources: [], targets: [], weights: [] };
-  for (let u = 0; u < n; u++) {
-    for (let v = directed ? 0 : u + 1; v < n; v++) {
-      if (u === v || random() >= p) continue;
-      arcs.sources.push(u);
-      arcs.targets.push(v);
-      arcs.weights.push(1 + Math.floor(random() * levels));
-    }
-  }
-  return arcs;
-}
+type Arcs = RandomArcs;
 
 /** Edge index of (u, v): an arc as given (directed) or the unordered pair (undirected); -1 if absent. */
 function edgeIndex(arcs: Arcs, u: number, v: number): number {
@@ -128,7 +108,7 @@ const arcsArbitrary = (directed: boolean) =>
       levels: fc.integer({ min: 1, max: 6 }),
       seed: fc.integer({ min: 1, max: 1 << 30 }),
     })
-    .map(({ n, p, levels, seed }) => randomArcs(n, p, levels, directed, seed));
+    .map(({ n, p, levels, seed }) => randomArcs(n, p, levels, seed, directed));
 
 describe("representative loops of H1 bars", () => {
   for (const directed of [false, true]) {
@@ -147,7 +127,7 @@ describe("representative loops of H1 bars", () => {
   }
 
   it("undirected loops are closed walks that start with the creating edge", () => {
-    const arcs = randomArcs(12, 0.35, 50, false, 99);
+    const arcs = randomArcs(12, 0.35, 50, 99, false);
     const graph = fromEdgeList(arcs);
     const barcode = computeBarcode(graph, { semantics: "distance", maxDim: 1 });
     const h1 = barcode.bars.map((b, i) => [b, i] as const).filter(([b]) => b.dim === 1);

@@ -15,6 +15,8 @@
  */
 import { describe, expect, it } from "vitest";
 import { errorOf } from "../../../../test/support/error-of.js";
+import { completeGraph } from "../../../../test/support/known-graphs.js";
+import { NotingMonitor } from "../../../../test/support/noting-monitor.js";
 import { SimplexBudgetError } from "../count/simplex-budget-error.js";
 import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
@@ -315,31 +317,8 @@ describe("CliqueCoboundaries construction", () => {
 });
 
 describe("listing triangles of K_100 (4,950 edges: past one round of 4,096)", () => {
-  const n = 100;
-  const sources: number[] = [];
-  const targets: number[] = [];
-  for (let u = 0; u < n; u++) {
-    for (let v = u + 1; v < n; v++) {
-      sources.push(u);
-      targets.push(v);
-    }
-  }
-  const k100 = fromEdgeList({
-    n,
-    sources,
-    targets,
-    weights: sources.map((_, e) => 1 + (e % 89)),
-    directed: false,
-  });
+  const k100 = completeGraph(100);
 
-  /** A monitor that notes the work done at each check while listing. */
-  class NotingMonitor extends WorkMonitor {
-    checks: number[] = [];
-    override check(done: number): void {
-      this.checks.push(done);
-      super.check(done);
-    }
-  }
   const make = (monitor: WorkMonitor, maxSimplices?: number) =>
     new CliqueCoboundaries(
       k100,

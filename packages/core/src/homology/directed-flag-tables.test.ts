@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { errorOf } from "../../../../test/support/error-of.js";
+import { NotingMonitor } from "../../../../test/support/noting-monitor.js";
 import { type RandomArcs, randomArcs } from "../../../../test/support/random-arcs.js";
 import { SimplexBudgetError } from "../count/simplex-budget-error.js";
 import { edgeFiltration } from "../filtration/edge-filtration.js";
@@ -273,22 +274,6 @@ describe("DirectedFlagTables", () => {
 });
 
 describe("the clock while the tables are built", () => {
-  /** Notes how many checks follow each stage's begin (the begin's own check not counted). */
-  class NotingMonitor extends WorkMonitor {
-    afterBegin: number[] = [];
-    private beginning = false;
-    override begin(stage: Parameters<WorkMonitor["begin"]>[0], dim: number, total: number): void {
-      this.beginning = true;
-      super.begin(stage, dim, total);
-      this.beginning = false;
-      this.afterBegin.push(0);
-    }
-    override check(done: number): void {
-      if (!this.beginning) this.afterBegin[this.afterBegin.length - 1]++;
-      super.check(done);
-    }
-  }
-
   it("is checked at each root and each of its arcs, every 65,536 simplices sorted and every 4,096 linked", () => {
     // The schedule the code documents, so that a time limit stops every stage: the enumeration checks at
     // each root vertex and at each arc leaving it (never per simplex); the counting sort of each dimension's

@@ -1,8 +1,9 @@
 import { describe, expect, it } from "vitest";
+import { completeGraph } from "../../../../test/support/known-graphs.js";
+import { NotingMonitor } from "../../../../test/support/noting-monitor.js";
 import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
-import { WorkMonitor } from "../work/work-monitor.js";
 import { CliqueCoboundaries } from "./clique-coboundaries.js";
 import { ByteLedger } from "./homology-budget.js";
 import { SimplexQuota } from "./simplex-quota.js";
@@ -14,15 +15,6 @@ class NotingLedger extends ByteLedger {
   override reserve(bytes: number, stage: string): void {
     this.noted.push([stage, bytes]);
     super.reserve(bytes, stage);
-  }
-}
-
-/** A monitor that notes the work done at each check. */
-class NotingMonitor extends WorkMonitor {
-  checks: number[] = [];
-  override check(done: number): void {
-    this.checks.push(done);
-    super.check(done);
   }
 }
 
@@ -113,27 +105,12 @@ describe("unionFindPairs", () => {
     // K_363 has 65,703 edges: past one round of 65,536. The contract of WorkMonitor (checks every few
     // thousand units of work, never per simplex) bounds the count from both sides; a stage that never
     // checked could not be stopped by a time limit.
-    const n = 363;
-    const sources: number[] = [];
-    const targets: number[] = [];
-    for (let u = 0; u < n; u++) {
-      for (let v = u + 1; v < n; v++) {
-        sources.push(u);
-        targets.push(v);
-      }
-    }
-    const graph = fromEdgeList({
-      n,
-      sources,
-      targets,
-      weights: sources.map((_, i) => 1 + (i % 97)),
-      directed: false,
-    });
+    const graph = completeGraph(363);
     const { monitor, model } = edgesListed(graph);
     monitor.checks = [];
     unionFindPairs(model, 0, new ByteLedger(undefined), { pair() {}, essential() {} }, monitor);
-    const edges = sources.length;
-    expect(edges).toBe(65_703);
+    const edges = model.listSimplices(1).count;
+    expect(edges).toBe(65_703); // C(363, 2)
     // One check when the stage begins, then at least one per 65,536 edges.
     expect(monitor.checks.length).toBeGreaterThanOrEqual(1 + Math.ceil(edges / 65_536));
     expect(monitor.checks.length).toBeLessThan(edges / 1000);

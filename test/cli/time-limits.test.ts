@@ -14,8 +14,9 @@ import { matrixCsv, runCli, scratchFiles } from "./run-cli.js";
 const BIN = fileURLToPath(new URL("../../packages/cli/bin/cliquescape.js", import.meta.url));
 
 /**
- * A complete graph with uniform random weights: its H2 takes minutes at n = 180 (docs/benchmarks.md), far
- * past every limit below on any machine.
+ * A complete graph with uniform random weights, n = 180, to H3: H2 alone takes 12 s at n = 160 and 57 s at
+ * n = 200 on an idle machine (docs/benchmarks.md, seventh round), H3 far more: past every limit below on
+ * any machine.
  */
 function heavyMatrix(n: number): (number | null)[][] {
   const random = seededRandom(180);

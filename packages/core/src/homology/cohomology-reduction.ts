@@ -193,7 +193,7 @@ export function reduceDimension(
         return;
       }
       storedDone[a] = 1;
-      const cover = entries.cover[storedAdded[a]];
+      const cover = entries.cover[owner];
       storedPushedTo[a] = cover;
       storedStep[a] = FIRST_BAND;
       if (cover < work.horizon) pushNextBand(a);

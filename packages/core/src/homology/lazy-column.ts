@@ -1,5 +1,6 @@
 import { CofaceHeap } from "./coface-heap.js";
 import type { CofaceSink } from "./coface-sink.js";
+import { grownFloat, grownInt } from "./grown-array.js";
 import type { ByteLedger } from "./homology-budget.js";
 import type { ReducedEntries } from "./reduced-entries.js";
 
@@ -38,13 +39,13 @@ export class LazyColumn implements CofaceSink {
    * (scaled by its factor) only as far as the pivot search goes. A min-heap of cursor ids by head entry.
    */
   private entries: ReducedEntries | null = null;
-  private cursorPos = new Int32Array(64);
-  private cursorEnd = new Int32Array(64);
-  private cursorFactor = new Int32Array(64);
-  private cursorHeap = new Int32Array(64);
+  private cursorPos: Int32Array = new Int32Array(64);
+  private cursorEnd: Int32Array = new Int32Array(64);
+  private cursorFactor: Int32Array = new Int32Array(64);
+  private cursorHeap: Int32Array = new Int32Array(64);
   /** The head entry (f, key) of the cursor at each heap slot, so that sifts compare without indirection. */
-  private headF = new Float64Array(64);
-  private headKey = new Float64Array(64);
+  private headF: Float64Array = new Float64Array(64);
+  private headKey: Float64Array = new Float64Array(64);
   private cursorCount = 0;
   private cursorsOpened = 0;
 
@@ -373,21 +374,12 @@ export class LazyColumn implements CofaceSink {
 
   private growCursors(): void {
     const size = this.cursorPos.length * 2;
-    const grow = (a: Int32Array) => {
-      const b = new Int32Array(size);
-      b.set(a);
-      return b;
-    };
-    this.cursorPos = grow(this.cursorPos);
-    this.cursorEnd = grow(this.cursorEnd);
-    this.cursorFactor = grow(this.cursorFactor);
-    this.cursorHeap = grow(this.cursorHeap);
-    const headF = new Float64Array(size);
-    headF.set(this.headF);
-    this.headF = headF;
-    const headKey = new Float64Array(size);
-    headKey.set(this.headKey);
-    this.headKey = headKey;
+    this.cursorPos = grownInt(this.cursorPos, size);
+    this.cursorEnd = grownInt(this.cursorEnd, size);
+    this.cursorFactor = grownInt(this.cursorFactor, size);
+    this.cursorHeap = grownInt(this.cursorHeap, size);
+    this.headF = grownFloat(this.headF, size);
+    this.headKey = grownFloat(this.headKey, size);
   }
 
   dispose(): void {

@@ -82,30 +82,73 @@ describe("ChainBuilder", () => {
     expect(Array.from(chain.coef.subarray(0, chain.size))).toEqual([1, 1]);
   });
 
-  it("holds its arrays and as much again for sorting in the ledger, and gives every byte back", () => {
-    // The ledger against the arrays' own byteLength (8 per f64 key and f, 4 per i32 coefficient: 20 a slot),
-    // doubled for the packed sort's scratch space, as the class documents.
+  it("tallies long chains exactly: sums past 2^32 mod 65521, keys up to 2^53, every sum zero (Map tally, common practice)", () => {
+    // 70,000 copies of one key with coefficient 65520 sum to about 4.6 · 10^9, past a 32-bit integer; the
+    // other keys spread over 2^53 so that both halves of the key feed the hash.
+    const p = 65521;
+    const chain = new ChainBuilder(new ByteLedger(undefined), 4);
+    const tally = new Map<number, number>();
+    const add = (key: number, coef: number): void => {
+      chain.push(key, key / 4, coef);
+      tally.set(key, ((tally.get(key) ?? 0) + coef) % p);
+    };
+    let x = 7;
+    for (let i = 0; i < 70000; i++) {
+      add(12345, p - 1);
+      x = (x * 69069 + 1) % 4294967296;
+      add((x % 5000) * 2 ** 40 + (x % 3), 1 + (x % 1000));
+    }
+    chain.compact(p);
+    const expected = [...tally].filter(([, c]) => c !== 0).sort((a, b) => a[0] - b[0]);
+    expect(chain.size).toBe(expected.length);
+    expect(Array.from(chain.key.subarray(0, chain.size))).toEqual(expected.map(([k]) => k));
+    expect(Array.from(chain.coef.subarray(0, chain.size))).toEqual(expected.map(([, c]) => c));
+    expect(Array.from(chain.f.subarray(0, chain.size))).toEqual(expected.map(([k]) => k / 4));
+    // A chain that cancels completely (each key twice over Z/2) leaves nothing.
+    chain.clear();
+    for (let i = 0; i < 600; i++) chain.push(i * 977, i, 1);
+    for (let i = 599; i >= 0; i--) chain.push(i * 977, i, 1);
+    chain.compact(2);
+    expect(chain.size).toBe(0);
+    // The table is reused, not cleared: the tally above must not leak into the next (worked by hand).
+    chain.clear();
+    for (let i = 0; i < 600; i++) chain.push(i * 977, i, 2);
+    chain.compact(5);
+    expect(chain.size).toBe(600);
+    expect(Array.from(chain.coef.subarray(0, 600)).every((c) => c === 2)).toBe(true);
+  });
+
+  it("holds its arrays, the sort's scratch space and the tally's table in the ledger, and gives every byte back", () => {
+    // The class documents 100 bytes a slot of capacity: 20 for key, f and coefficient, 20 for the packed
+    // sort's scratch space, 60 for the tally's table of at most twice as many slots and its list.
     const ledger = new ByteLedger(undefined);
     const chain = new ChainBuilder(ledger, 8);
-    const held = () => 2 * (chain.key.byteLength + chain.f.byteLength + chain.coef.byteLength);
-    expect(ledger.held).toBe(held());
-    for (let i = 0; i < 70; i++) {
-      chain.push(i, i, 1);
-      expect(ledger.held).toBe(held());
+    expect(ledger.held).toBe(100 * chain.key.length);
+    for (let i = 0; i < 700; i++) {
+      chain.push(i % 500, i, 1);
+      expect(ledger.held).toBe(100 * chain.key.length);
     }
-    expect(chain.key.length).toBe(128);
+    expect(chain.key.length).toBe(1024);
+    chain.compact(3);
+    expect(chain.size).toBe(500);
+    // Every array the chain allocated, scratch and table included, within what the ledger holds.
+    const bytes = Object.values(chain as unknown as Record<string, unknown>)
+      .filter((v): v is Float64Array | Int32Array => ArrayBuffer.isView(v))
+      .reduce((sum, a) => sum + a.byteLength, 0);
+    expect(bytes).toBeGreaterThan(60 * chain.key.length); // the table and scratch space are there
+    expect(bytes).toBeLessThanOrEqual(ledger.held);
     chain.dispose();
     expect(ledger.held).toBe(0);
     let error: unknown;
     try {
-      new ChainBuilder(new ByteLedger({ maxBytes: 1000 }), 26); // 26 · 40 = 1040 bytes
+      new ChainBuilder(new ByteLedger({ maxBytes: 1000 }), 9); // rounded up to 16 slots: 1600 bytes
     } catch (e) {
       error = e;
     }
     expect(error).toBeInstanceOf(HomologyBudgetError);
     expect((error as HomologyBudgetError).stage).toBe("tracking reduction chains");
-    // Growing: 8 slots (320 bytes), 16 (640), then 32 would hold 1280 > 1000.
-    const growing = new ChainBuilder(new ByteLedger({ maxBytes: 1000 }), 8);
+    // Growing under 2000 bytes: 8 slots (800), 16 (1600), then 32 would hold 3200.
+    const growing = new ChainBuilder(new ByteLedger({ maxBytes: 2000 }), 8);
     error = undefined;
     try {
       for (let i = 0; i < 17; i++) growing.push(i, i, 1);
@@ -113,6 +156,6 @@ describe("ChainBuilder", () => {
       error = e;
     }
     expect(growing.size).toBe(16);
-    expect(error).toMatchObject({ stage: "tracking reduction chains", neededBytes: 1280 });
+    expect(error).toMatchObject({ stage: "tracking reduction chains", neededBytes: 3200 });
   });
 });

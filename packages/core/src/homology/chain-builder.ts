@@ -108,7 +108,7 @@ export class ChainBuilder {
   /**
    * Sums equal keys mod p in a hash table and keeps the nonzero sums, unsorted: a long chain is mostly
    * the chains of the stored columns added to the column, which cancel (at the new pivots of uniform
-   * n = 160, 3,600 entries fold to about 600), so only the survivors need sorting.
+   * n = 160, 3,600 entries fold to about 130 on average), so only the survivors need sorting.
    */
   private tally(p: number): void {
     const size = this.size;

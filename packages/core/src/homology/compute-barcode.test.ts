@@ -159,7 +159,10 @@ describe("stored reduced entries under a tight memory budget", () => {
     const reference = computeBarcode(g, { semantics: "distance", maxDim: 2 });
     expect(reference.stats.storedColumns[2]).toBeGreaterThan(0);
     let fewer = false;
-    for (const share of [1, 0.95, 0.9, 0.85, 0.8, 0.7]) {
+    // Stored entries may take a quarter of the budget: from about 1.5 times the default run's peak down,
+    // fewer columns find room (with chains of 4 or more simplices storing entries, the default run's
+    // own peak is already too tight for the working column once entries are cut).
+    for (const share of [1.5, 1.3, 1.1, 1, 0.95, 0.9, 0.85, 0.8, 0.7]) {
       const maxBytes = Math.round(reference.stats.peakBytes * share);
       try {
         const tight = computeBarcode(g, { semantics: "distance", maxDim: 2, budget: { maxBytes } });

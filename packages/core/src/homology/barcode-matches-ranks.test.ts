@@ -235,18 +235,6 @@ describe("long filtrations found by replaying changes of the reduction on random
     expect(barcode.stats.storedColumns[2]).toBeGreaterThan(64);
   });
 
-  it("and when the extensions find no room, pushed band by band (the same graph, 8 MiB)", () => {
-    // A quarter of 8 MiB holds about 100,000 stored entries: fewer columns keep theirs, and extensions are
-    // refused, so the chain of a column read past its cover is pushed one band of values at a time, a
-    // marker after each. With the bands left out (or the marker), β2 went wrong between 431 and 489, or the
-    // working column outgrew the budget.
-    const graph = randomGraph(64, 1, 1000, 9, false);
-    const barcode = checkLevels(graph, "distance", 2, [431, 489], 8 * 2 ** 20);
-    const unlimited = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2 });
-    expect(barcode.stats.storedColumns[2]).toBeLessThan(unlimited.stats.storedColumns[2]);
-    expect(barcode.bars).toEqual(unlimited.bars);
-  });
-
   for (const seed of [3, 4]) {
     it(`edges whose columns add more than 64 stored columns (G(200, 0.2), seed ${seed}, distances)`, () => {
       // 200 vertices, dimension 1 only: over 200 edge columns keep their reduced entries, and single columns

@@ -378,8 +378,13 @@ export function reduceDimension(
  * whenever it is added (uniform weights, n = 160: 16 → 4 took 12 % of the CPU time, 8 nothing).
  */
 const STORE_ENTRIES_FROM_CHAIN = 4;
-/** Reduced entries kept per column (more when entries tie at the last value). */
-const STORED_ENTRIES_PER_COLUMN = 2048;
+/**
+ * Reduced entries a new column keeps at first (more when entries tie at the last value); later ones are
+ * added by extensions when a column that adds it reads that far. Draining 2,048 at each new pivot computed
+ * entries nobody read, and ran out the cursors of the columns added, extending those too (uniform weights,
+ * n = 200: 2,048 → 16 took the CPU time from 50 to 27 s and the peak memory from 1.3 to 0.5 GiB).
+ */
+const STORED_ENTRIES_PER_COLUMN = 16;
 
 /** Column values spanned by the first band of a stored column's chain pushed past its cover. */
 const FIRST_BAND = 256;

@@ -155,26 +155,28 @@ describe("stored reduced entries under a tight memory budget", () => {
   }
   const g = fromEdgeList({ n, sources, targets, weights, directed: false });
 
-  it("keeps fewer entries when room runs short, never other bars", () => {
+  it("gives the same bars under any budget it finishes in, and its own error below that", () => {
+    // Stored entries take little room at this size (16 per column at first, the rest as read), so the
+    // budget stops the run before their quarter share binds; columns without room for entries are
+    // checked in stored-entries-without-room.test.ts.
     const reference = computeBarcode(g, { semantics: "distance", maxDim: 2 });
     expect(reference.stats.storedColumns[2]).toBeGreaterThan(0);
-    let fewer = false;
-    // Stored entries may take a quarter of the budget: from about 1.5 times the default run's peak down,
-    // fewer columns find room (with chains of 4 or more simplices storing entries, the default run's
-    // own peak is already too tight for the working column once entries are cut).
+    let finished = 0;
+    let stopped = 0;
     for (const share of [1.5, 1.3, 1.1, 1, 0.95, 0.9, 0.85, 0.8, 0.7]) {
       const maxBytes = Math.round(reference.stats.peakBytes * share);
       try {
         const tight = computeBarcode(g, { semantics: "distance", maxDim: 2, budget: { maxBytes } });
         expect(tight.bars).toEqual(reference.bars);
         expect(tight.stats.peakBytes).toBeLessThanOrEqual(maxBytes);
-        if (tight.stats.storedColumns[2] < reference.stats.storedColumns[2]) fewer = true;
+        finished++;
       } catch (error) {
-        // Below what the rest of the computation needs, the budget stops it with its own error.
         expect(error).toBeInstanceOf(HomologyBudgetError);
+        stopped++;
       }
     }
-    expect(fewer).toBe(true);
+    expect(finished).toBeGreaterThan(0);
+    expect(stopped).toBeGreaterThan(0);
   });
 });
 

@@ -20,8 +20,10 @@ import { binomial, factorial } from "../../../../test/support/combinatorics.js";
 import { elementary, type Mode, multipartite } from "../../../../test/support/multipartite.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
-import { checkLocalSize } from "./bitset-counter.js";
+import { WorkMonitor } from "../work/work-monitor.js";
+import { checkLocalSize, countWithBitsets } from "./bitset-counter.js";
 import { countSimplices } from "./count-simplices.js";
+import type { EnumerationGraph } from "./enumeration-graph.js";
 import { SimplexBudgetError } from "./simplex-budget-error.js";
 
 /** k-simplices for k = 0 … r − 1: e_{k+1}(sizes), times (k+1)! with both arcs (see the header). */
@@ -385,5 +387,69 @@ describe("a local universe too large for its bit matrix is refused before anythi
       /a local universe of 92682 vertices/,
     );
     expect(() => countSimplices(star, { participation: true })).toThrow(/a local universe of 92682 vertices/);
+  });
+});
+
+describe("the whole-clique test reads each member's own row in a set lying in one word of a wider universe", () => {
+  // Worked by hand. countWithBitsets is called on lists made here (vertex i lists its neighbours above i,
+  // ascending: the enumeration graph's contract for an undirected graph, with the identity numbering in
+  // place of the degeneracy order, so that the local numbering is known). Vertex 0 is joined to 1 … 33: a
+  // universe of 33 members, two words; member i is vertex i + 1. Inside it, members 0, 1, 4, 8, 12 form
+  // K5 less the edge 8–12, and member 2 is joined to member 12; the others meet only vertex 0. The
+  // candidates after members 0 and 1 are {4, 8, 12}, which is not a clique; rows are word pairs, member
+  // b's first word at b × 2, and the words at 4 / 2 and 8 / 2 (the first words of members 1 and 2) do list
+  // what lies above 4 and 8 in the set, so reading those would call the set a clique.
+  // Counts: the 33 members alone have 33 vertices, 10 edges, 7 triangles (K5's 10 less the 3 through
+  // 8–12), 2 tetrahedra ({0, 1, 4, 8}, {0, 1, 4, 12}); vertex 0 cones over them (common practice), so
+  // c_k = f_k + f_(k−1): 34, 43, 17, 9, 2.
+  const inner: [number, number][] = [
+    [0, 1],
+    [0, 4],
+    [0, 8],
+    [0, 12],
+    [1, 4],
+    [1, 8],
+    [1, 12],
+    [4, 8],
+    [4, 12],
+    [2, 12],
+  ];
+  const edges: [number, number][] = [
+    ...Array.from({ length: 33 }, (_, i): [number, number] => [0, i + 1]),
+    ...inner.map(([a, b]): [number, number] => [a + 1, b + 1]),
+  ];
+  const n = 34;
+  const later: number[][] = Array.from({ length: n }, () => []);
+  for (const [a, b] of edges) later[Math.min(a, b)].push(Math.max(a, b));
+  const offsets = new Int32Array(n + 1);
+  const targets: number[] = [];
+  for (let v = 0; v < n; v++) {
+    targets.push(...later[v].sort((a, b) => a - b));
+    offsets[v + 1] = targets.length;
+  }
+  const g: EnumerationGraph = {
+    n,
+    directed: false,
+    offsets,
+    targets: Int32Array.from(targets),
+    slots: Int32Array.from(targets, (_, i) => i),
+    vertexOf: Int32Array.from({ length: n }, (_, v) => v),
+    maxList: Math.max(...later.map((l) => l.length)),
+  };
+  it("at maxDim 4 and with no cap", () => {
+    for (const maxDim of [4, 8]) {
+      const r = countWithBitsets(g, maxDim, Number.POSITIVE_INFINITY, new WorkMonitor(undefined));
+      expect(Array.from(r.counts), `maxDim ${maxDim}`).toEqual([34, 43, 17, 9, 2]);
+      expect(r.truncated, `maxDim ${maxDim}`).toBe(false);
+    }
+    // the same graph through countSimplices (degeneracy numbering): the same counts
+    const viaGraph = fromEdgeList({
+      n,
+      directed: false,
+      sources: edges.map((e) => e[0]),
+      targets: edges.map((e) => e[1]),
+      weights: edges.map(() => 1),
+    });
+    expect(Array.from(count(viaGraph).counts)).toEqual([34, 43, 17, 9, 2]);
   });
 });

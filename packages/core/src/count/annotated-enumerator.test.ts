@@ -428,6 +428,42 @@ describe("a budget that runs out inside a packed candidate set of the first root
   });
 });
 
+describe("a cut seen only at a joined pair of a packed candidate set", () => {
+  // Worked by hand. Arcs 0 → 1 … 40 (vertex 0's local universe: 40 members, two words; member m is vertex
+  // m + 1, directed lists keep the input numbering) and the transitive tournament on 1, 2, 3, 34 (i → j for
+  // i < j). After the first member (vertex 1) the candidates are vertices 2, 3, 34, three over both words:
+  // the packed routine; in it, after vertex 2 the two candidates 3 and 34 have the arc 3 → 34, which makes
+  // (0, 1, 2, 3, 34), the only 4-simplex (the tournament on 0, 1, 2, 3, 34: C(5, k+1) simplices, common
+  // practice, with 36 more vertices and their arcs from 0): 41, 46, 10, 5, 1. At maxDim 3 only that pair
+  // shows the cut.
+  const arcs: [number, number][] = [
+    ...Array.from({ length: 40 }, (_, i): [number, number] => [0, i + 1]),
+    [1, 2],
+    [1, 3],
+    [1, 34],
+    [2, 3],
+    [2, 34],
+    [3, 34],
+  ];
+  const g = fromEdgeList({
+    n: 41,
+    directed: true,
+    sources: arcs.map((a) => a[0]),
+    targets: arcs.map((a) => a[1]),
+    weights: arcs.map(() => 1),
+  });
+  const sweep = (maxDim: number) =>
+    sweepSimplexCounts(g, explicitGrid([1], "distance"), { kernel: "typescript", maxDim });
+  it("in the sweep at maxDim 3 and 4", () => {
+    const cut = sweep(3);
+    expect(Array.from(cut.counts[0])).toEqual([41, 46, 10, 5]);
+    expect(cut.truncated).toBe(true);
+    const all = sweep(4);
+    expect(Array.from(all.counts[0])).toEqual([41, 46, 10, 5, 1]);
+    expect(all.truncated).toBe(false);
+  });
+});
+
 describe("a budget below the number of vertices", () => {
   // the vertices are counted up front: with fewer simplices allowed than vertices, the count stops before
   // any root, even when nothing else would be counted (maxDim 0, or no edges) — worked by hand. Progress

@@ -227,6 +227,87 @@ describe("the WebAssembly counting kernel", () => {
     expect(r.truncated).toBe(false);
   });
 
+  it("keeps its instance after a count that fits in 64 MiB and makes a new one after a larger count", () => {
+    // countWithWasm keeps the kernel's memory for the next count up to 64 MiB. Worked by hand: the path on
+    // 100 000 vertices needs about 1.3 MB of tables (offsets, later neighbours and marks, 4 bytes each, and
+    // the fixed tables); a directed star with d arcs out of its hub makes a local universe of d members,
+    // rows of ⌈d / 64⌉ 64-bit words, and the rows and the re-packed rows take 2 · d · ⌈d / 64⌉ · 8 bytes:
+    // 42.4 MB for d = 13 000 (204 words), whose per-level tables at maxDim 1 are 5 levels of 1,024 bytes
+    // and of 204 words (as many as 13 004 levels would take another 34.5 MB), and 100.2 MB for d = 20 000
+    // (313 words). Counts: n and n − 1 (no triangle), d + 1 and d.
+    const n = 100_000;
+    const path = fromEdgeList({
+      n,
+      directed: false,
+      sources: Array.from({ length: n - 1 }, (_, i) => i),
+      targets: Array.from({ length: n - 1 }, (_, i) => i + 1),
+      weights: new Array<number>(n - 1).fill(1),
+    });
+    const star = (leaves: number) =>
+      fromEdgeList({
+        n: leaves + 1,
+        directed: true,
+        sources: new Array<number>(leaves).fill(0),
+        targets: Array.from({ length: leaves }, (_, i) => i + 1),
+        weights: new Array<number>(leaves).fill(1),
+      });
+    try {
+      discardKernel();
+      const instance = countKernel();
+      expect(Array.from(countSimplices(path, { kernel: "webassembly" }).counts)).toEqual([n, n - 1]);
+      expect(countKernel()).toBe(instance);
+      const small = countSimplices(star(13_000), { kernel: "webassembly", maxDim: 1 });
+      expect(Array.from(small.counts)).toEqual([13_001, 13_000]);
+      expect(small.truncated).toBe(false);
+      expect(countKernel()).toBe(instance);
+      expect(Array.from(countSimplices(star(20_000), { kernel: "webassembly" }).counts)).toEqual([
+        20_001, 20_000,
+      ]);
+      expect(countKernel()).not.toBe(instance);
+    } finally {
+      discardKernel();
+    }
+  });
+
+  it("takes a directed graph's roots in breadth-first order", () => {
+    // Worked by hand. Arcs 0 → 2, 2 → 3, 2 → 4, 3 → 4 (the triangle (2, 3, 4), from root 2) and the
+    // transitive tournament on 1, 5, 6, 7 (three triangles and a tetrahedron from root 1, a triangle from
+    // root 5): 8 vertices, 10 arcs, 5 triangles, 1 tetrahedron; 18 counted up front, 24 in all. A search
+    // along out-arcs from vertex 0 reaches 2, 3, 4 before 1, so root 2 comes before root 1: at a budget of
+    // 20, root 2 passes (19), root 1 stops the count (23), with 4 triangles counted, and 2 of the 3 roots
+    // with two or more out-neighbours (2, 1, 5) finished. Roots in input order would have stopped at root 1
+    // with 3 triangles, 1 of 3 finished.
+    const arcs: [number, number][] = [
+      [0, 2],
+      [2, 3],
+      [2, 4],
+      [3, 4],
+      [1, 5],
+      [1, 6],
+      [1, 7],
+      [5, 6],
+      [5, 7],
+      [6, 7],
+    ];
+    const g = fromEdgeList({
+      n: 8,
+      directed: true,
+      sources: arcs.map((a) => a[0]),
+      targets: arcs.map((a) => a[1]),
+      weights: arcs.map(() => 1),
+    });
+    expect(Array.from(countSimplices(g, { kernel: "webassembly" }).counts)).toEqual([8, 10, 5, 1]);
+    let error: unknown;
+    try {
+      countSimplices(g, { kernel: "webassembly", budget: 20 });
+    } catch (e) {
+      error = e;
+    }
+    expect(error).toBeInstanceOf(SimplexBudgetError);
+    expect(Array.from((error as SimplexBudgetError).counted)).toEqual([8, 10, 4, 1]);
+    expect((error as SimplexBudgetError).progress).toBeCloseTo(2 / 3, 12);
+  });
+
   it("when the kernel's memory cannot grow, auto counts in TypeScript and webassembly says why it cannot", () => {
     // a fresh instance has less memory than K_130's tables need; make growing fail as it does when the
     // runtime refuses another few hundred MiB (a failed count drops the instance, so stub each fresh one)

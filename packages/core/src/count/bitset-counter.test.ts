@@ -473,3 +473,21 @@ describe("list entries outside a universe of 65 536 members set no bit", () => {
     expect(r.truncated).toBe(false);
   });
 });
+
+describe("the clock is read once every 256 roots", () => {
+  // Worked by hand. The circulant digraph v → v + 1, v + 2 (mod 1,024): every root has two out-neighbours
+  // and one triangle (v, v + 1, v + 2), 4,096 simplices in all, far below the 2^20 between two checkpoint
+  // checks. With a report at every reading of the clock (interval 0), the count reports done = 0 when it
+  // begins and at its first checkpoint (vertices and arcs, counted up front), then once every 256 roots
+  // (0, 256, 512, 768), as the WebAssembly kernel does between its calls of 256 roots.
+  const n = 1024;
+  const sources = Array.from({ length: 2 * n }, (_, i) => i >> 1);
+  const targets = sources.map((v, i) => (v + 1 + (i & 1)) % n);
+  const g = fromEdgeList({ n, directed: true, sources, targets, weights: sources.map(() => 1) });
+  it.each(["typescript", "webassembly"] as const)("%s kernel", (kernel) => {
+    const done: number[] = [];
+    const r = countSimplices(g, { kernel, progressIntervalMs: 0, onProgress: (p) => done.push(p.done) });
+    expect(Array.from(r.counts)).toEqual([n, 2 * n, n]);
+    expect(done).toEqual([0, 0, 0, 256, 512, 768]);
+  });
+});

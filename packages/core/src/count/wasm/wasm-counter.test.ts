@@ -232,7 +232,7 @@ describe("the WebAssembly counting kernel", () => {
     // 100 000 vertices needs about 1.3 MB of tables (offsets, later neighbours and marks, 4 bytes each, and
     // the fixed tables); a directed star with d arcs out of its hub makes a local universe of d members,
     // rows of ⌈d / 64⌉ 64-bit words, and the rows and the re-packed rows take 2 · d · ⌈d / 64⌉ · 8 bytes:
-    // 42.4 MB for d = 13 000 (204 words), whose per-level tables at maxDim 1 are 5 levels of 1,024 bytes
+    // 36.1 MB for d = 12 000 (188 words), 42.4 MB for d = 13 000 (204 words), whose per-level tables at maxDim 1 are 5 levels of 1,024 bytes
     // and of 204 words (as many as 13 004 levels would take another 34.5 MB), and 100.2 MB for d = 20 000
     // (313 words). Counts: n and n − 1 (no triangle), d + 1 and d.
     const n = 100_000;
@@ -255,6 +255,11 @@ describe("the WebAssembly counting kernel", () => {
       discardKernel();
       const instance = countKernel();
       expect(Array.from(countSimplices(path, { kernel: "webassembly" }).counts)).toEqual([n, n - 1]);
+      expect(countKernel()).toBe(instance);
+      // first 12 000 leaves (36.1 MB), so that the next count grows the memory by its difference only
+      expect(Array.from(countSimplices(star(12_000), { kernel: "webassembly", maxDim: 1 }).counts)).toEqual([
+        12_001, 12_000,
+      ]);
       expect(countKernel()).toBe(instance);
       const small = countSimplices(star(13_000), { kernel: "webassembly", maxDim: 1 });
       expect(Array.from(small.counts)).toEqual([13_001, 13_000]);

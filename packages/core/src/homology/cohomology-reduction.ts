@@ -388,8 +388,11 @@ const STORED_ENTRIES_PER_COLUMN = 16;
 
 /** Column values spanned by the first band of a stored column's chain pushed past its cover. */
 const FIRST_BAND = 256;
-/** Column values spanned by each extension of a stored column's entries. */
-const EXTENSION_BAND = 256;
+/**
+ * Column values spanned by each extension of a stored column's entries (uniform weights, n = 200, with 16
+ * entries kept at first: 256 → 24.5, 25.1 CPU s; 1,024 → 22.1, 23.9, 23.1; 2,048 → 24.7).
+ */
+const EXTENSION_BAND = 1024;
 
 /**
  * The end of a band that starts at `from` and spans `step` of the sorted column values past it, at most

@@ -214,13 +214,7 @@ describe("the WebAssembly counting kernel", () => {
     // grows its memory to the page after the last region, the marks (4 bytes per vertex): all 400 000
     // bytes of them must fit
     const n = 100_000;
-    const path = fromEdgeList({
-      n,
-      directed: false,
-      sources: Array.from({ length: n - 1 }, (_, i) => i),
-      targets: Array.from({ length: n - 1 }, (_, i) => i + 1),
-      weights: new Array<number>(n - 1).fill(1),
-    });
+    const path = pathGraph(n);
     discardKernel();
     const r = countSimplices(path, { kernel: "webassembly" });
     expect(Array.from(r.counts)).toEqual([n, n - 1]);
@@ -236,13 +230,7 @@ describe("the WebAssembly counting kernel", () => {
     // and of 204 words (as many as 13 004 levels would take another 34.5 MB), and 100.2 MB for d = 20 000
     // (313 words). Counts: n and n − 1 (no triangle), d + 1 and d.
     const n = 100_000;
-    const path = fromEdgeList({
-      n,
-      directed: false,
-      sources: Array.from({ length: n - 1 }, (_, i) => i),
-      targets: Array.from({ length: n - 1 }, (_, i) => i + 1),
-      weights: new Array<number>(n - 1).fill(1),
-    });
+    const path = pathGraph(n);
     const star = (leaves: number) =>
       fromEdgeList({
         n: leaves + 1,
@@ -404,3 +392,14 @@ describe("the WebAssembly kernel against the multipartite closed form, at every 
     });
   }
 });
+
+/** The path 0 – 1 – … – (n − 1), every edge of weight 1. */
+function pathGraph(n: number) {
+  return fromEdgeList({
+    n,
+    directed: false,
+    sources: Array.from({ length: n - 1 }, (_, i) => i),
+    targets: Array.from({ length: n - 1 }, (_, i) => i + 1),
+    weights: new Array<number>(n - 1).fill(1),
+  });
+}

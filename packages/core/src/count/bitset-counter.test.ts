@@ -157,17 +157,9 @@ describe("a cut seen only in a two- or three-word universe, after a set with no 
   // Only vertex 0 has a candidate set with an edge inside, so only its universe can see that maxDim 2
   // cuts something off; its sets are settled from the highest member of the first word down, and the
   // last one checked, {4, 5}, has no edge inside, which must not clear what {2, 3} showed.
-  const graphOf = (arcs: [number, number][], n: number) =>
-    fromEdgeList({
-      n,
-      directed: true,
-      sources: arcs.map((a) => a[0]),
-      targets: arcs.map((a) => a[1]),
-      weights: arcs.map(() => 1),
-    });
   const star = (k: number): [number, number][] => Array.from({ length: k }, (_, i) => [0, i + 1]);
-  const a = graphOf([...star(33), [1, 2], [1, 3], [2, 3], [33, 4], [33, 5], [6, 7], [6, 33], [7, 33]], 34);
-  const b = graphOf([...star(65), [1, 2], [1, 3], [2, 3], [65, 4], [65, 5]], 66);
+  const a = digraphOf([...star(33), [1, 2], [1, 3], [2, 3], [33, 4], [33, 5], [6, 7], [6, 33], [7, 33]], 34);
+  const b = digraphOf([...star(65), [1, 2], [1, 3], [2, 3], [65, 4], [65, 5]], 66);
   it("A, two words", () => {
     expect(Array.from(count(a).counts)).toEqual([34, 41, 10, 2]);
     expect(count(a).euler).toBe(1);
@@ -179,7 +171,7 @@ describe("a cut seen only in a two- or three-word universe, after a set with no 
     // vertex 0 → 1 … 33; 2 → 1, 2 → 33, 1 → 33: the candidates after (0, 2) are members 0 and 32 (worked
     // by hand: 34 vertices, 36 arcs; triangles (0, 2, 1), (0, 2, 33), (0, 1, 33), (2, 1, 33); one
     // 3-simplex (0, 2, 1, 33))
-    const c = graphOf([...star(33), [2, 1], [2, 33], [1, 33]], 34);
+    const c = digraphOf([...star(33), [2, 1], [2, 33], [1, 33]], 34);
     expect(Array.from(count(c).counts)).toEqual([34, 36, 4, 1]);
   });
   it("B, three words", () => {
@@ -212,13 +204,7 @@ describe("three candidates across two words, settled inline, in every orientatio
       [1, 33],
       ...inner,
     ];
-    return fromEdgeList({
-      n: 34,
-      directed: true,
-      sources: arcs.map((a) => a[0]),
-      targets: arcs.map((a) => a[1]),
-      weights: arcs.map(() => 1),
-    });
+    return digraphOf(arcs, 34);
   };
   for (const [s, m, t] of orders) {
     it(`arcs ${s} → ${m}, ${s} → ${t}, ${m} → ${t}`, () => {
@@ -251,13 +237,7 @@ describe("three candidates in one word, settled inline, in every orientation", (
   ];
   const withArcs = (inner: number[][]) => {
     const arcs = [[0, 1], [0, 2], [0, 3], [0, 4], [0, 5], [1, 3], [1, 4], [1, 5], ...inner];
-    return fromEdgeList({
-      n: 6,
-      directed: true,
-      sources: arcs.map((a) => a[0]),
-      targets: arcs.map((a) => a[1]),
-      weights: arcs.map(() => 1),
-    });
+    return digraphOf(arcs, 6);
   };
   for (const [s, m, t] of orders) {
     it(`arcs ${s} → ${m}, ${s} → ${t}, ${m} → ${t}`, () => {
@@ -471,3 +451,14 @@ describe("the clock is read once every 256 roots", () => {
     expect(done).toEqual([0, 0, 0, 256, 512, 768]);
   });
 });
+
+/** The digraph on n vertices with these arcs, every arc of weight 1. */
+function digraphOf(arcs: number[][], n: number) {
+  return fromEdgeList({
+    n,
+    directed: true,
+    sources: arcs.map((a) => a[0]),
+    targets: arcs.map((a) => a[1]),
+    weights: arcs.map(() => 1),
+  });
+}

@@ -129,7 +129,7 @@ export function reduceDimension(
   const entries = new ReducedEntries(ledger);
   let storedAdded: Int32Array = new Int32Array(64);
   let storedFactor: Int32Array = new Int32Array(64);
-  let storedDone: Uint8Array = new Uint8Array(64);
+  let storedDone: Int32Array = new Int32Array(64);
   // How far (in value) the chain of a stored column whose cursor ran out has been pushed, and how many
   // column values its next band spans (doubling from band to band).
   let storedPushedTo: Float64Array = new Float64Array(64);
@@ -291,9 +291,7 @@ export function reduceDimension(
             storedStep = grownInt(storedStep, storedCount * 2);
             storedPushedTo = grownFloat(storedPushedTo, storedCount * 2);
             storedSegment = grownInt(storedSegment, storedCount * 2);
-            const done = new Uint8Array(storedCount * 2);
-            done.set(storedDone);
-            storedDone = done;
+            storedDone = grownInt(storedDone, storedCount * 2);
           }
           storedAdded[storedCount] = owner;
           storedFactor[storedCount] = factor;

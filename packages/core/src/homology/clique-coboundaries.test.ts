@@ -1,9 +1,10 @@
 /**
  * pushCoboundary against the definition of the coboundary, for both clique layouts and every kind of band
  * a working column asks for. The dense layout has several sweeps (all vertices; the sorted prefix of one
- * row below a horizon; the sorted runs of σ's rows inside a band above σ's value; triangles apart, with
- * cached run positions), chosen by the band and the row lengths, so a wrong value or a missed coface in one
- * of them shows only on graphs large enough to reach it — larger than the differential tests' graphs.
+ * row below a horizon; the sorted runs of σ's rows inside a band above σ's value; triangles below a finite
+ * horizon apart, by intersecting their vertices' threshold sets), chosen by the band and the row lengths, so
+ * a wrong value or a missed coface in one of them shows only on graphs large enough to reach it — larger
+ * than the differential tests' graphs.
  *
  * Definition (common practice; e.g. H. Edelsbrunner and J. Harer, Computational Topology, 2010, §IV.1 and
  * §VII.1): the coboundary of σ = {s_0 < … < s_d} in the clique complex has an entry for every vertex v ∉ σ

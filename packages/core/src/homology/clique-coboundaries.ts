@@ -6,6 +6,7 @@ import type { CofaceSink } from "./coface-sink.js";
 import type { ByteLedger } from "./homology-budget.js";
 import { SimplexListBuilder } from "./simplex-list-builder.js";
 import type { SimplexQuota } from "./simplex-quota.js";
+import { ThresholdBits } from "./threshold-bits.js";
 import { VertexMemo } from "./vertex-memo.js";
 
 /** How edge values are looked up: an n×n matrix (fast for dense graphs) or the sparse rows. */
@@ -103,6 +104,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
       this.rowSorted = sorted;
       this.runs = new VertexMemo(n);
       this.prefixes = new VertexMemo(n);
+      this.thresholdBits = new ThresholdBits(n, order, sorted, ledger);
     } else {
       this.dense = null;
       this.rowOrder = null;
@@ -225,87 +227,39 @@ export class CliqueCoboundaries implements CoboundaryModel {
       const horizon = sink.horizon ?? Number.POSITIVE_INFINITY;
       const bandLow = sink.bandLow ?? Number.NEGATIVE_INFINITY;
       const floor = sink.floor ?? Number.NEGATIVE_INFINITY;
+      if (count === 3 && horizon !== Number.POSITIVE_INFINITY) {
+        this.pushTriangleBits(f, factor, negative, bandLow, horizon, sink);
+        return;
+      }
+      // Three sweeps find the same cofaces; the one with the fewest candidates is taken. Below a finite
+      // horizon only the neighbours v of σ's vertex with the fewest edges ≤ horizon can give cofaces ≤
+      // horizon (the prefix); a band above σ's value can also be swept run by run (pushBand); else every v.
+      const prefixLength = horizon === Number.POSITIVE_INFINITY ? n : this.shortestPrefix(count, horizon);
       if (
         (floor > f || bandLow > f) &&
-        this.pushBand(count, f, factor, negative, floor, bandLow, horizon, sink)
+        this.pushBand(count, f, factor, negative, floor, bandLow, horizon, prefixLength, sink)
       )
         return;
-      if (horizon !== Number.POSITIVE_INFINITY) {
-        // Only neighbours v of σ's vertex with the fewest edges ≤ horizon can give cofaces ≤ horizon.
-        const sorted = this.rowSorted as Float64Array;
-        const prefixes = this.prefixes;
-        prefixes.use(horizon, 0, 0);
-        let best = -1;
-        let bestLength = n + 1;
-        for (let i = 0; i < count; i++) {
-          const u = s[i];
-          let lo = prefixes.first[u];
-          if (!prefixes.has(u)) {
-            const base = u * n;
-            lo = 0;
-            let hi = n;
-            while (lo < hi) {
-              const mid = (lo + hi) >>> 1;
-              if (sorted[base + mid] <= horizon) lo = mid + 1;
-              else hi = mid;
-            }
-            prefixes.set(u, lo, 0);
+      if (prefixLength < n) {
+        const best = this.prefixSlot;
+        const bestLength = prefixLength;
+        const order = this.rowOrder as Int32Array;
+        const start = s[best] * n;
+        const rows = this.rows;
+        for (let i = 0; i < count; i++) rows[i] = s[i] * n;
+        for (let r = 0; r < bestLength; r++) {
+          const v = order[start + r];
+          let fv = f;
+          for (let i = 0; i < count; i++) {
+            const x = m[rows[i] + v];
+            if (x > fv) fv = x;
           }
-          if (lo < bestLength) {
-            bestLength = lo;
-            best = i;
-          }
+          if (fv > horizon || fv <= bandLow) continue;
+          let jv = 0;
+          while (jv < count && s[jv] < v) jv++;
+          sink.push(fv, low[jv] + values[(jv + 1) * row + v] + high[jv], (jv & 1) === 0 ? factor : negative);
         }
-        if (bestLength * 4 < n) {
-          const order = this.rowOrder as Int32Array;
-          const start = s[best] * n;
-          const rows = this.rows;
-          for (let i = 0; i < count; i++) rows[i] = s[i] * n;
-          if (count === 3) {
-            // A triangle: the best row's edge value comes from its sorted row, the other two are read.
-            const ra = rows[best === 0 ? 1 : 0];
-            const rb = rows[best === 2 ? 1 : 2];
-            const s0 = s[0];
-            const s1 = s[1];
-            const s2 = s[2];
-            for (let r = 0; r < bestLength; r++) {
-              const v = order[start + r];
-              const xa = m[ra + v];
-              if (xa > horizon) continue;
-              const xb = m[rb + v];
-              if (xb > horizon) continue;
-              let fv = sorted[start + r];
-              if (f > fv) fv = f;
-              if (xa > fv) fv = xa;
-              if (xb > fv) fv = xb;
-              if (fv <= bandLow) continue;
-              const jv = (v > s0 ? 1 : 0) + (v > s1 ? 1 : 0) + (v > s2 ? 1 : 0);
-              sink.push(
-                fv,
-                low[jv] + values[(jv + 1) * row + v] + high[jv],
-                (jv & 1) === 0 ? factor : negative,
-              );
-            }
-            return;
-          }
-          for (let r = 0; r < bestLength; r++) {
-            const v = order[start + r];
-            let fv = f;
-            for (let i = 0; i < count; i++) {
-              const x = m[rows[i] + v];
-              if (x > fv) fv = x;
-            }
-            if (fv > horizon || fv <= bandLow) continue;
-            let jv = 0;
-            while (jv < count && s[jv] < v) jv++;
-            sink.push(
-              fv,
-              low[jv] + values[(jv + 1) * row + v] + high[jv],
-              (jv & 1) === 0 ? factor : negative,
-            );
-          }
-          return;
-        }
+        return;
       }
       if (count === 3) {
         const r0 = s[0] * n;
@@ -360,6 +314,109 @@ export class CliqueCoboundaries implements CoboundaryModel {
   }
 
   /**
+   * The cofaces of a triangle σ = {s0, s1, s2} with a value ≤ horizon (finite) and > bandLow: σ ∪ {v} for
+   * the v whose edges to all three vertices are ≤ horizon and not all ≤ bandLow, read off the three
+   * vertices' threshold sets word by word (the H2 columns, where most of the time goes). Expects
+   * prepareCofaceKeys to have run.
+   */
+  private pushTriangleBits(
+    f: number,
+    factor: number,
+    negative: number,
+    bandLow: number,
+    horizon: number,
+    sink: CofaceSink,
+  ): void {
+    const bits = this.thresholdBits as ThresholdBits;
+    const data = bits.data;
+    const words = bits.words;
+    const s = this.s;
+    const s0 = s[0];
+    const s1 = s[1];
+    const s2 = s[2];
+    const high = bits.use(horizon);
+    const a = bits.row(high, s0);
+    const b = bits.row(high, s1);
+    const c = bits.row(high, s2);
+    // Below bandLow σ's own value: every coface lies above it.
+    const band = bandLow > f;
+    let la = a;
+    let lb = b;
+    let lc = c;
+    if (band) {
+      const below = bits.use(bandLow);
+      la = bits.row(below, s0);
+      lb = bits.row(below, s1);
+      lc = bits.row(below, s2);
+    }
+    const m = this.dense as Float64Array;
+    const n = this.n;
+    const r0 = s0 * n;
+    const r1 = s1 * n;
+    const r2 = s2 * n;
+    const low = this.low;
+    const highKey = this.high;
+    const values = this.binom.values;
+    const row = this.row;
+    for (let w = 0; w < words; w++) {
+      let x = data[a + w] & data[b + w] & data[c + w];
+      if (band) x &= ~(data[la + w] & data[lb + w] & data[lc + w]);
+      while (x !== 0) {
+        const lowest = x & -x;
+        x ^= lowest;
+        const v = (w << 5) | (31 - Math.clz32(lowest));
+        let fv = f;
+        const x0 = m[r0 + v];
+        const x1 = m[r1 + v];
+        const x2 = m[r2 + v];
+        if (x0 > fv) fv = x0;
+        if (x1 > fv) fv = x1;
+        if (x2 > fv) fv = x2;
+        const j = (v > s0 ? 1 : 0) + (v > s1 ? 1 : 0) + (v > s2 ? 1 : 0);
+        sink.push(fv, low[j] + values[(j + 1) * row + v] + highKey[j], (j & 1) === 0 ? factor : negative);
+      }
+    }
+  }
+
+  /** Where shortestPrefix found its row among σ's vertices. */
+  private prefixSlot = 0;
+
+  /**
+   * The number of edges ≤ horizon in the sorted row of σ's vertex that has the fewest (every coface ≤
+   * horizon is σ ∪ {v} for v among them); sets prefixSlot. Expects prepareCofaceKeys to have run.
+   */
+  private shortestPrefix(count: number, horizon: number): number {
+    const n = this.n;
+    const s = this.s;
+    const sorted = this.rowSorted as Float64Array;
+    const prefixes = this.prefixes;
+    prefixes.use(horizon, 0, 0);
+    let best = -1;
+    let bestLength = n + 1;
+    for (let i = 0; i < count; i++) {
+      const u = s[i];
+      let lo = prefixes.first[u];
+      if (!prefixes.has(u)) {
+        const base = u * n;
+        lo = 0;
+        let hi = n;
+        while (lo < hi) {
+          const mid = (lo + hi) >>> 1;
+          if (sorted[base + mid] <= horizon) lo = mid + 1;
+          else hi = mid;
+        }
+        prefixes.set(u, lo, 0);
+      }
+      if (lo < bestLength) {
+        bestLength = lo;
+        best = i;
+      }
+    }
+    this.prefixSlot = best;
+    return bestLength;
+  }
+
+  /**
    * Dense sweep of the cofaces with a value in the band [floor, horizon] (and > bandLow) when that band
    * starts above σ's value f: such a coface σ ∪ {v} has an edge {s_i, v} in the band, and the edges of
    * each row in the band are a contiguous run of its sorted order. v is emitted from the first row whose
@@ -374,6 +431,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
     floor: number,
     bandLow: number,
     horizon: number,
+    prefixLength: number,
     sink: CofaceSink,
   ): boolean {
     const n = this.n;
@@ -419,7 +477,9 @@ export class CliqueCoboundaries implements CoboundaryModel {
       total += lo - ptr[i];
       runs.set(u, ptr[i], lo);
     }
-    if (total * 2 > n) return false;
+    // Runs are read through the sorted order, the full sweep straight along the rows: against it the runs
+    // must be shorter by half; against the prefix, which is read the same way, just shorter.
+    if (total > (prefixLength < n ? prefixLength : n / 2)) return false;
     if (count === 3) {
       this.pushTriangleBand(floor, bandLow, horizon, factor, negative, sink);
       return true;
@@ -553,6 +613,8 @@ export class CliqueCoboundaries implements CoboundaryModel {
    */
   private readonly runs: VertexMemo;
   private readonly prefixes: VertexMemo;
+  /** The dense layout's threshold sets of each vertex (null in the sparse layout). */
+  private readonly thresholdBits: ThresholdBits | null = null;
 
   /** Where earliestDenseCoface found its vertex among σ's vertices. */
   private cofaceSlot = 0;

@@ -118,15 +118,72 @@ describe("ChainBuilder", () => {
     expect(Array.from(chain.coef.subarray(0, 600)).every((c) => c === 2)).toBe(true);
   });
 
+  it("folds scaled chains of other arrays into its own, tallied or appended, like a Map tally (common practice)", () => {
+    // A new pivot's chain: its own entries, then factor × the chains of the stored columns added to it,
+    // read from the store's arrays. Below 256 entries in all they are appended, from 256 on they go
+    // straight into the tally; both must give the Map's sums mod p, with each key's f.
+    const p = 7;
+    let x = 5;
+    const next = () => {
+      x = (x * 69069 + 1) % 4294967296;
+      return x;
+    };
+    const chain = new ChainBuilder(new ByteLedger(undefined), 4);
+    for (const [own, stored, length] of [
+      [3, 4, 20], // 83 entries: appended
+      [3, 40, 200], // 8,003 entries over about 6,600 keys: tallied, the table doubling from 8,192 slots
+      [300, 2, 10], // tallied because of its own entries
+      [3, 40, 200], // doubling again inside the table the second case left: old slots must not count
+    ]) {
+      chain.clear();
+      const tally = new Map<number, number>();
+      for (let i = 0; i < own; i++) {
+        const key = next() % 1000;
+        chain.push(key, key + 0.5, 1 + (key % 6));
+        tally.set(key, ((tally.get(key) ?? 0) + 1 + (key % 6)) % p);
+      }
+      const key = new Float64Array(stored * length);
+      const f = new Float64Array(stored * length);
+      const coef = new Int32Array(stored * length);
+      for (let e = 0; e < key.length; e++) {
+        key[e] = next() % 20000;
+        f[e] = key[e] + 0.5;
+        coef[e] = 1 + (next() % (p - 1));
+      }
+      chain.openTally(stored * length);
+      for (let a = 0; a < stored; a++) {
+        const factor = 1 + (a % (p - 1)); // 1 (no product) and 2 … 6
+        chain.addScaled(key, f, coef, a * length, (a + 1) * length, factor, p);
+        for (let e = a * length; e < (a + 1) * length; e++)
+          tally.set(key[e], ((tally.get(key[e]) ?? 0) + factor * coef[e]) % p);
+      }
+      chain.push(999, 999.5, 1); // an entry pushed while a tally is open goes into it
+      tally.set(999, ((tally.get(999) ?? 0) + 1) % p);
+      chain.compact(p);
+      const expected = [...tally].filter(([, c]) => c !== 0).sort((a, b) => a[0] - b[0]);
+      const label = `own ${own}, ${stored} × ${length}`;
+      expect(Array.from(chain.key.subarray(0, chain.size)), label).toEqual(expected.map(([k]) => k));
+      expect(Array.from(chain.coef.subarray(0, chain.size)), label).toEqual(expected.map(([, c]) => c));
+      expect(Array.from(chain.f.subarray(0, chain.size)), label).toEqual(expected.map(([k]) => k + 0.5));
+      // The next chain starts empty, even after clear() with a tally open.
+      for (let i = 0; i < 300; i++) chain.push(i, i, 1);
+      chain.openTally(0);
+      chain.clear();
+      chain.push(3, 3, 1);
+      chain.compact(p);
+      expect([chain.size, chain.key[0], chain.coef[0]]).toEqual([1, 3, 1]);
+    }
+  });
+
   it("holds its arrays, the sort's scratch space and the tally's table in the ledger, and gives every byte back", () => {
-    // The class documents 100 bytes a slot of capacity: 20 for key, f and coefficient, 20 for the packed
-    // sort's scratch space, 60 for the tally's table of at most twice as many slots and its list.
+    // The class documents 108 bytes a slot of capacity: 20 for key, f and coefficient, 20 for the packed
+    // sort's scratch space, 68 for the tally's table of at most twice as many slots and its list.
     const ledger = new ByteLedger(undefined);
     const chain = new ChainBuilder(ledger, 8);
-    expect(ledger.held).toBe(100 * chain.key.length);
+    expect(ledger.held).toBe(108 * chain.key.length);
     for (let i = 0; i < 700; i++) {
       chain.push(i % 500, i, 1);
-      expect(ledger.held).toBe(100 * chain.key.length);
+      expect(ledger.held).toBe(108 * chain.key.length);
     }
     expect(chain.key.length).toBe(1024);
     chain.compact(3);
@@ -141,13 +198,13 @@ describe("ChainBuilder", () => {
     expect(ledger.held).toBe(0);
     let error: unknown;
     try {
-      new ChainBuilder(new ByteLedger({ maxBytes: 1000 }), 9); // rounded up to 16 slots: 1600 bytes
+      new ChainBuilder(new ByteLedger({ maxBytes: 1000 }), 9); // rounded up to 16 slots: 1728 bytes
     } catch (e) {
       error = e;
     }
     expect(error).toBeInstanceOf(HomologyBudgetError);
     expect((error as HomologyBudgetError).stage).toBe("tracking reduction chains");
-    // Growing under 2000 bytes: 8 slots (800), 16 (1600), then 32 would hold 3200.
+    // Growing under 2000 bytes: 8 slots (864), 16 (1728), then 32 would hold 3456.
     const growing = new ChainBuilder(new ByteLedger({ maxBytes: 2000 }), 8);
     error = undefined;
     try {
@@ -156,6 +213,6 @@ describe("ChainBuilder", () => {
       error = e;
     }
     expect(growing.size).toBe(16);
-    expect(error).toMatchObject({ stage: "tracking reduction chains", neededBytes: 3200 });
+    expect(error).toMatchObject({ stage: "tracking reduction chains", neededBytes: 3456 });
   });
 });

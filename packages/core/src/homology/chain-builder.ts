@@ -2,12 +2,16 @@ import type { ByteLedger } from "./homology-budget.js";
 
 /**
  * Bytes per entry: key, f and coefficient (20), as much again for sortPacked's scratch space, and the
- * tally's table (key, sum, first position, stamp) of at most twice as many slots as the capacity, a power of
- * two (56), with its list of slots (4).
+ * tally's table (stamp, key, sum, f as doubles) of at most twice as many slots as the capacity, a power of
+ * two (64), with its list of slots (4).
  */
-const ENTRY_BYTES = 100;
+const ENTRY_BYTES = 108;
 /** Chains at least this long are tallied in a hash table before the survivors are sorted. */
 const TALLY_FROM = 256;
+/** Slots the tally's table starts with (at most): it doubles when half full. */
+const FIRST_SLOTS = 4096;
+/** Doubles per slot of the tally's table: stamp, key, sum, f side by side, so a probe reads one cache line. */
+const SLOT = 4;
 
 /**
  * A chain of simplices (key, f, coefficient) collected in any order, then sorted by key with equal keys
@@ -32,9 +36,14 @@ export class ChainBuilder {
 
   clear(): void {
     this.size = 0;
+    this.tallying = false;
   }
 
   push(key: number, f: number, coef: number): void {
+    if (this.tallying) {
+      this.tallyOne(key, f, coef);
+      return;
+    }
     if (this.size === this.key.length) this.grow();
     this.key[this.size] = key;
     this.f[this.size] = f;
@@ -42,13 +51,57 @@ export class ChainBuilder {
     this.size++;
   }
 
+  /**
+   * Adds factor × the entries [from, to) of other arrays (a finished column's chain), straight into the
+   * tally when one is open (openTally), else appended.
+   */
+  addScaled(
+    key: Float64Array,
+    f: Float64Array,
+    coef: Int32Array,
+    from: number,
+    to: number,
+    factor: number,
+    p: number,
+  ): void {
+    if (!this.tallying) {
+      for (let e = from; e < to; e++) this.push(key[e], f[e], (factor * coef[e]) % p);
+      return;
+    }
+    if (factor === 1) for (let e = from; e < to; e++) this.tallyOne(key[e], f[e], coef[e]);
+    else for (let e = from; e < to; e++) this.tallyOne(key[e], f[e], (factor * coef[e]) % p);
+  }
+
+  /**
+   * Before `incoming` entries are added by addScaled: when the chain will reach TALLY_FROM entries, its
+   * entries so far go into a hash table, and the incoming ones follow them there instead of being
+   * appended (a new pivot's chain is mostly the chains of the stored columns added, which cancel).
+   */
+  openTally(incoming: number): void {
+    const total = this.size + incoming;
+    if (total < TALLY_FROM) return;
+    // The capacity bounds the table and holds the survivors, whose count is at most the total.
+    while (this.key.length < total) this.grow();
+    // The table starts small and doubles at half full: sized for all the entries it would be mostly empty
+    // (3,600 entries fold to about 130), and slow, for it would not stay in the cache.
+    let bits = 1;
+    while (1 << bits < 2 * Math.min(total, FIRST_SLOTS)) bits++;
+    this.setTable(bits);
+    if (this.filled.length < total) this.filled = new Int32Array(this.key.length);
+    this.stamp++;
+    this.filledCount = 0;
+    this.tallying = true;
+    const key = this.key;
+    const f = this.f;
+    const coef = this.coef;
+    for (let i = 0; i < this.size; i++) this.tallyOne(key[i], f[i], coef[i]);
+  }
+
   /** Sorts by key, sums equal keys mod p, drops zeros. */
   compact(p: number): void {
+    if (!this.tallying && this.size >= TALLY_FROM) this.openTally(0);
+    if (this.tallying) this.closeTally(p);
     if (this.size < 2) return;
-    if (this.size >= TALLY_FROM) {
-      this.tally(p);
-      if (this.size < 2) return;
-    }
     if (!this.sortPacked()) this.sortRange(0, this.size - 1);
     let m = 0;
     for (let i = 0; i < this.size; ) {
@@ -105,72 +158,98 @@ export class ChainBuilder {
     return true;
   }
 
-  /**
-   * Sums equal keys mod p in a hash table and keeps the nonzero sums, unsorted: a long chain is mostly
-   * the chains of the stored columns added to the column, which cancel (at the new pivots of uniform
-   * n = 160, 3,600 entries fold to about 130 on average), so only the survivors need sorting.
-   */
-  private tally(p: number): void {
-    const size = this.size;
-    let bits = 1;
-    while (1 << bits < 2 * size) bits++;
+  /** Adds one entry to the open tally (keys are integers below 2^53: Fibonacci hashing of both halves). */
+  private tallyOne(k: number, f: number, coef: number): void {
+    const table = this.table;
+    const stamp = this.stamp;
+    const mask = this.mask;
+    let h = Math.imul((k >>> 0) ^ ((k / 4294967296) | 0), 0x9e3779b1) >>> this.shift;
+    let at = h * SLOT;
+    while (table[at] === stamp && table[at + 1] !== k) {
+      h = (h + 1) & mask;
+      at = h * SLOT;
+    }
+    if (table[at] === stamp) {
+      table[at + 2] += coef;
+    } else {
+      table[at] = stamp;
+      table[at + 1] = k;
+      table[at + 2] = coef;
+      table[at + 3] = f;
+      this.filled[this.filledCount++] = at;
+      if (2 * this.filledCount > mask + 1) this.growTable();
+    }
+  }
+
+  /** Uses a table of 2^bits slots (a larger array when needed; stamps keep the old slots out). */
+  private setTable(bits: number): void {
     const slots = 1 << bits;
-    if (this.slotKey.length < slots) {
-      this.slotKey = new Float64Array(slots);
-      this.slotSum = new Float64Array(slots);
-      this.slotFirst = new Int32Array(slots);
-      this.slotStamp = new Int32Array(slots);
+    if (this.table.length < slots * SLOT) {
+      this.table = new Float64Array(slots * SLOT);
       this.stamp = 0;
     }
-    if (this.filled.length < size) this.filled = new Int32Array(this.key.length);
-    const stamp = ++this.stamp;
-    const key = this.key;
-    const coef = this.coef;
-    const slotKey = this.slotKey;
-    const slotSum = this.slotSum;
-    const slotFirst = this.slotFirst;
-    const slotStamp = this.slotStamp;
+    this.mask = slots - 1;
+    this.shift = 32 - bits;
+  }
+
+  /** Moves the tally to a table twice as large. At most twice the distinct keys, so within the capacity. */
+  private growTable(): void {
+    const old = this.table;
+    const count = this.filledCount;
     const filled = this.filled;
-    const mask = slots - 1;
-    const shift = 32 - bits;
-    let count = 0;
-    for (let i = 0; i < size; i++) {
-      const k = key[i];
-      // Keys are integers below 2^53: mix both 32-bit halves (Fibonacci hashing on their xor).
-      let h = Math.imul((k >>> 0) ^ ((k / 4294967296) | 0), 0x9e3779b1) >>> shift;
-      while (slotStamp[h] === stamp && slotKey[h] !== k) h = (h + 1) & mask;
-      if (slotStamp[h] === stamp) {
-        slotSum[h] += coef[i];
-      } else {
-        slotStamp[h] = stamp;
-        slotKey[h] = k;
-        slotSum[h] = coef[i];
-        slotFirst[h] = i;
-        filled[count++] = h;
-      }
-    }
-    // Survivors are written in first-seen order, never past their first position: safe in place.
-    const f = this.f;
-    let m = 0;
+    const keep = new Float64Array(count * SLOT);
     for (let c = 0; c < count; c++) {
-      const h = filled[c];
-      const sum = slotSum[h] % p;
+      const from = filled[c];
+      const to = c * SLOT;
+      keep[to + 1] = old[from + 1];
+      keep[to + 2] = old[from + 2];
+      keep[to + 3] = old[from + 3];
+    }
+    this.setTable(32 - this.shift + 1);
+    if (this.table === old) this.stamp++;
+    else this.stamp = 1;
+    this.filledCount = 0;
+    for (let c = 0; c < count; c++) {
+      const at = c * SLOT;
+      this.tallyOne(keep[at + 1], keep[at + 3], keep[at + 2]);
+    }
+  }
+
+  /**
+   * Keeps the nonzero sums of the open tally as the chain, unsorted (uniform weights, n = 160: at the new
+   * pivots 3,600 entries fold to about 130 on average, so only the survivors need sorting).
+   */
+  private closeTally(p: number): void {
+    this.tallying = false;
+    const table = this.table;
+    const filled = this.filled;
+    const key = this.key;
+    const f = this.f;
+    const coef = this.coef;
+    let m = 0;
+    for (let c = 0; c < this.filledCount; c++) {
+      const at = filled[c];
+      const sum = table[at + 2] % p;
       if (sum === 0) continue;
-      key[m] = slotKey[h];
-      f[m] = f[slotFirst[h]];
+      key[m] = table[at + 1];
+      f[m] = table[at + 3];
       coef[m] = sum;
       m++;
     }
     this.size = m;
   }
 
-  /** The tally's table (stamped, so it is never cleared) and the slots it filled, in first-seen order. */
-  private slotKey = new Float64Array(0);
-  private slotSum = new Float64Array(0);
-  private slotFirst = new Int32Array(0);
-  private slotStamp = new Int32Array(0);
+  /**
+   * The tally's table (stamped, so it is never cleared), the slots it filled in first-seen order, and
+   * whether a tally is open (entries go to the table, not the arrays).
+   */
+  private table = new Float64Array(0);
   private filled = new Int32Array(0);
+  private filledCount = 0;
   private stamp = 0;
+  private mask = 0;
+  private shift = 0;
+  private tallying = false;
 
   /** Scratch space of sortPacked, made as long as the chain's arrays when needed (counted in ENTRY_BYTES). */
   private packed = new Float64Array(0);

@@ -335,12 +335,14 @@ export function reduceDimension(
       }
       // A new pivot: keep the chain (with the chains of the stored columns added), and the reduced
       // entries up to the horizon when the chain is long.
+      let incoming = 0;
+      for (let a = 0; a < storedCount; a++) incoming += store.chainLength[storedAdded[a]];
+      chain.openTally(incoming);
       for (let a = 0; a < storedCount; a++) {
         const owner = storedAdded[a];
-        const factor = storedFactor[a];
-        const chainTo = store.chainStart[owner] + store.chainLength[owner];
-        for (let e = store.chainStart[owner]; e < chainTo; e++)
-          chain.push(store.chainKey[e], store.chainF[e], (factor * store.chainCoef[e]) % p);
+        const from = store.chainStart[owner];
+        const to = from + store.chainLength[owner];
+        chain.addScaled(store.chainKey, store.chainF, store.chainCoef, from, to, storedFactor[a], p);
       }
       const id = store.open(pivotCoef);
       chain.compact(p);

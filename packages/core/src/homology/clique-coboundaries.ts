@@ -270,13 +270,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
             j++;
             continue;
           }
-          let fv = f;
-          const x0 = m[r0 + v];
-          const x1 = m[r1 + v];
-          const x2 = m[r2 + v];
-          if (x0 > fv) fv = x0;
-          if (x1 > fv) fv = x1;
-          if (x2 > fv) fv = x2;
+          const fv = triangleCofaceValue(m, f, r0, r1, r2, v);
           if (fv === Infinity || fv > horizon || fv <= bandLow) continue;
           sink.push(fv, low[j] + values[(j + 1) * row + v] + high[j], (j & 1) === 0 ? factor : negative);
         }
@@ -365,13 +359,7 @@ export class CliqueCoboundaries implements CoboundaryModel {
         const lowest = x & -x;
         x ^= lowest;
         const v = (w << 5) | (31 - Math.clz32(lowest));
-        let fv = f;
-        const x0 = m[r0 + v];
-        const x1 = m[r1 + v];
-        const x2 = m[r2 + v];
-        if (x0 > fv) fv = x0;
-        if (x1 > fv) fv = x1;
-        if (x2 > fv) fv = x2;
+        const fv = triangleCofaceValue(m, f, r0, r1, r2, v);
         const j = (v > s0 ? 1 : 0) + (v > s1 ? 1 : 0) + (v > s2 ? 1 : 0);
         sink.push(fv, low[j] + values[(j + 1) * row + v] + highKey[j], (j & 1) === 0 ? factor : negative);
       }
@@ -826,4 +814,23 @@ export class CliqueCoboundaries implements CoboundaryModel {
     }
     return fv;
   }
+}
+
+/** The value of the coface σ ∪ {v} of a triangle σ of value f whose vertices' matrix rows start at r0, r1, r2. */
+function triangleCofaceValue(
+  m: Float64Array,
+  f: number,
+  r0: number,
+  r1: number,
+  r2: number,
+  v: number,
+): number {
+  let fv = f;
+  const x0 = m[r0 + v];
+  const x1 = m[r1 + v];
+  const x2 = m[r2 + v];
+  if (x0 > fv) fv = x0;
+  if (x1 > fv) fv = x1;
+  if (x2 > fv) fv = x2;
+  return fv;
 }

@@ -49,4 +49,23 @@ describe("stored entries without room", () => {
       }
     },
   );
+
+  it("an extension without room for the entries of its first value pushes the chain band by band instead (ties, Z/3)", () => {
+    // Complete graph of 40 vertices with distances 1–4 only (test/support/random-arcs.ts, seed 2), room for
+    // 40 entries: the entries of one value past a stored column's cover do not fit in an extension (a
+    // counter put there by hand counted such refusals in this run), so the cursor must give up and the
+    // column's chain be pushed band by band. Found by replaying changes of the reduction: handing the cursor
+    // an empty segment instead left β2 at 3 as 1 (it is 0), and repeating the band never ended.
+    const graph = fromEdgeList(randomArcs(40, 1, 4, 2, false));
+    room.maxEntries = 40;
+    const tight = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 3 });
+    room.maxEntries = Number.POSITIVE_INFINITY;
+    expect(tight.stats.storedColumns[2]).toBeGreaterThan(0);
+    // Direct ranks of the boundary matrices over Z/3 (bettiAt) at each of the four values.
+    for (const threshold of [1, 2, 3, 4]) {
+      expect(bettiFromBarcode(tight, threshold), `Betti numbers at ${threshold}`).toEqual(
+        bettiAt(graph, { threshold, semantics: "distance", maxDim: 2, prime: 3 }),
+      );
+    }
+  });
 });

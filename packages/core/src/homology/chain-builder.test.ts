@@ -138,7 +138,7 @@ describe("ChainBuilder", () => {
       chain.clear();
       const tally = new Map<number, number>();
       for (let i = 0; i < own; i++) {
-        const key = next() % 1000;
+        const key = 1 + (next() % 999); // key 0 comes once, below
         chain.push(key, key + 0.5, 1 + (key % 6));
         tally.set(key, ((tally.get(key) ?? 0) + 1 + (key % 6)) % p);
       }
@@ -146,7 +146,7 @@ describe("ChainBuilder", () => {
       const f = new Float64Array(stored * length);
       const coef = new Int32Array(stored * length);
       for (let e = 0; e < key.length; e++) {
-        key[e] = next() % 20000;
+        key[e] = 1 + (next() % 19999);
         f[e] = key[e] + 0.5;
         coef[e] = 1 + (next() % (p - 1));
       }
@@ -159,6 +159,10 @@ describe("ChainBuilder", () => {
       }
       chain.push(999, 999.5, 1); // an entry pushed while a tally is open goes into it
       tally.set(999, ((tally.get(999) ?? 0) + 1) % p);
+      // Key 0 hashes to slot 0 at every table size: in every case, so that a doubling that let the last
+      // tally's slots count as filled would meet the previous case's key 0 there.
+      chain.push(0, 0.5, 1);
+      tally.set(0, ((tally.get(0) ?? 0) + 1) % p);
       chain.compact(p);
       const expected = [...tally].filter(([, c]) => c !== 0).sort((a, b) => a[0] - b[0]);
       const label = `own ${own}, ${stored} × ${length}`;
@@ -173,6 +177,50 @@ describe("ChainBuilder", () => {
       chain.compact(p);
       expect([chain.size, chain.key[0], chain.coef[0]]).toEqual([1, 3, 1]);
     }
+  });
+
+  it("holds every survivor when a tally opens on a long chain with more keys to come (Map tally, common practice)", () => {
+    // 1,000 entries of its own (capacity 1,024), then 200 more keys from another chain: 1,200 survivors, so
+    // the arrays must grow for all of them before the tally writes them back.
+    const chain = new ChainBuilder(new ByteLedger(undefined), 4);
+    for (let i = 0; i < 1000; i++) chain.push(2 * i, i, 1);
+    const more = new Float64Array(200).map((_, e) => 2 * e + 1);
+    chain.openTally(200);
+    chain.addScaled(more, more, new Int32Array(200).fill(1), 0, 200, 1, 3);
+    chain.compact(3);
+    expect(chain.size).toBe(1200);
+    const keys = Array.from(chain.key.subarray(0, 1200));
+    expect(keys).toEqual([...keys].sort((a, b) => a - b));
+    expect(new Set(keys).size).toBe(1200);
+    // Pushed after a tally closed: appended to the arrays, where the reduction reads the chain.
+    chain.push(5000, 1, 2);
+    chain.push(5001, 1, 2);
+    expect(chain.size).toBe(1202);
+    expect(Array.from(chain.key.subarray(1200, 1202))).toEqual([5000, 5001]);
+  });
+
+  it("renews its stamp when the table doubles inside an array left larger by an earlier tally", () => {
+    // Key 10,946 hashes to slot 0 of tables of 8,192 and 16,384 slots (its Fibonacci hash is below 2^18),
+    // so when the table doubles it goes back to the slot it held: that slot must then read as empty.
+    const chain = new ChainBuilder(new ByteLedger(undefined), 4);
+    for (let i = 0; i < 20000; i++) chain.push(i + 20000, 0, 1); // a table of 65,536 slots
+    chain.compact(2);
+    chain.clear();
+    chain.push(10946, 1, 1);
+    for (let i = 1; i <= 5000; i++) chain.push(3 * i, 0, 1); // 5,001 keys: 8,192 slots, then 16,384
+    chain.compact(2);
+    expect(chain.size).toBe(5001);
+    expect(chain.key.subarray(0, chain.size)).toContain(10946);
+  });
+
+  it("drops keys that cancel in a short chain, which is sorted without a tally (worked by hand)", () => {
+    const chain = new ChainBuilder(new ByteLedger(undefined), 4);
+    chain.push(5, 5, 2);
+    chain.push(9, 9, 1);
+    chain.push(5, 5, 3); // 2 + 3 = 0 mod 5
+    chain.compact(5);
+    expect(Array.from(chain.key.subarray(0, chain.size))).toEqual([9]);
+    expect(Array.from(chain.coef.subarray(0, chain.size))).toEqual([1]);
   });
 
   it("holds its arrays, the sort's scratch space and the tally's table in the ledger, and gives every byte back", () => {

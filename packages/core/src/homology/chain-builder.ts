@@ -181,7 +181,10 @@ export class ChainBuilder {
     }
   }
 
-  /** Uses a table of 2^bits slots (a larger array when needed; stamps keep the old slots out). */
+  /**
+   * Uses a table of 2^bits slots: a larger array when needed, with the stamp back to 0, so that after the
+   * caller's next stamp++ the old slots, in the same array or not, read as empty.
+   */
   private setTable(bits: number): void {
     const slots = 1 << bits;
     if (this.table.length < slots * SLOT) {
@@ -206,8 +209,7 @@ export class ChainBuilder {
       keep[to + 3] = old[from + 3];
     }
     this.setTable(32 - this.shift + 1);
-    if (this.table === old) this.stamp++;
-    else this.stamp = 1;
+    this.stamp++;
     this.filledCount = 0;
     for (let c = 0; c < count; c++) {
       const at = c * SLOT;

@@ -241,13 +241,11 @@ export class CliqueCoboundaries implements CoboundaryModel {
       )
         return;
       if (prefixLength < n) {
-        const best = this.prefixSlot;
-        const bestLength = prefixLength;
         const order = this.rowOrder as Int32Array;
-        const start = s[best] * n;
+        const start = s[this.prefixSlot] * n;
         const rows = this.rows;
         for (let i = 0; i < count; i++) rows[i] = s[i] * n;
-        for (let r = 0; r < bestLength; r++) {
+        for (let r = 0; r < prefixLength; r++) {
           const v = order[start + r];
           let fv = f;
           for (let i = 0; i < count; i++) {

@@ -42,6 +42,13 @@ export function transitiveTournament(n: number): WeightedGraph {
   return graphOf(edges);
 }
 
+/** The digraph on n vertices with these arcs [u, v] (u→v), every arc of weight 1. */
+export function digraphOf(arcs: readonly (readonly number[])[], n: number): WeightedGraph {
+  const edges = emptyEdgeList(n, true);
+  for (const [u, v] of arcs) push(edges, u, v);
+  return graphOf(edges);
+}
+
 /** The directed cycle 0→1→…→(n−1)→0. */
 export function directedCycle(n: number): WeightedGraph {
   const edges = emptyEdgeList(n, true);

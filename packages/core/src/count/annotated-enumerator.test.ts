@@ -20,7 +20,7 @@
 import { describe, expect, it } from "vitest";
 import { factorial } from "../../../../test/support/combinatorics.js";
 import { significant } from "../../../../test/support/graph-ops.js";
-import { completeGraph } from "../../../../test/support/known-graphs.js";
+import { completeGraph, digraphOf } from "../../../../test/support/known-graphs.js";
 import {
   elementary,
   type Mode,
@@ -445,13 +445,7 @@ describe("a cut seen only at a joined pair of a packed candidate set", () => {
     [2, 34],
     [3, 34],
   ];
-  const g = fromEdgeList({
-    n: 41,
-    directed: true,
-    sources: arcs.map((a) => a[0]),
-    targets: arcs.map((a) => a[1]),
-    weights: arcs.map(() => 1),
-  });
+  const g = digraphOf(arcs, 41);
   const sweep = (maxDim: number) =>
     sweepSimplexCounts(g, explicitGrid([1], "distance"), { kernel: "typescript", maxDim });
   it("in the sweep at maxDim 3 and 4", () => {

@@ -17,6 +17,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { binomial, factorial } from "../../../../test/support/combinatorics.js";
+import { digraphOf } from "../../../../test/support/known-graphs.js";
 import { elementary, type Mode, multipartite } from "../../../../test/support/multipartite.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
@@ -451,14 +452,3 @@ describe("the clock is read once every 256 roots", () => {
     expect(done).toEqual([0, 0, 0, 256, 512, 768]);
   });
 });
-
-/** The digraph on n vertices with these arcs, every arc of weight 1. */
-function digraphOf(arcs: number[][], n: number) {
-  return fromEdgeList({
-    n,
-    directed: true,
-    sources: arcs.map((a) => a[0]),
-    targets: arcs.map((a) => a[1]),
-    weights: arcs.map(() => 1),
-  });
-}

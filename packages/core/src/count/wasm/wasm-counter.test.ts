@@ -1,5 +1,6 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { factorial } from "../../../../../test/support/combinatorics.js";
+import { digraphOf } from "../../../../../test/support/known-graphs.js";
 import { elementary, type Mode, multipartite } from "../../../../../test/support/multipartite.js";
 import { fromEdgeList } from "../../graph/from-edge-list.js";
 import { countSimplices } from "../count-simplices.js";
@@ -282,13 +283,7 @@ describe("the WebAssembly counting kernel", () => {
       [5, 7],
       [6, 7],
     ];
-    const g = fromEdgeList({
-      n: 8,
-      directed: true,
-      sources: arcs.map((a) => a[0]),
-      targets: arcs.map((a) => a[1]),
-      weights: arcs.map(() => 1),
-    });
+    const g = digraphOf(arcs, 8);
     expect(Array.from(countSimplices(g, { kernel: "webassembly" }).counts)).toEqual([8, 10, 5, 1]);
     let error: unknown;
     try {

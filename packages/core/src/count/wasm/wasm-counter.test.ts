@@ -263,6 +263,32 @@ describe("the WebAssembly counting kernel", () => {
     }
   });
 
+  it("keeps its instance after a count whose memory is exactly 64 MiB", () => {
+    // The bound is inclusive: memory of 1,024 pages is kept. Worked by hand from countWithWasm's layout: a
+    // directed star with 16 320 arcs out of its hub (rows of 255 words; the rows and the re-packed rows
+    // 2 · 16 320 · 255 · 8 bytes) and 20 000 more isolated vertices (offsets and marks, 8 bytes each) need
+    // 67 073 128 bytes, 1,023.45 pages, so a fresh instance grows to 1,024 pages = 64 MiB. The memory size
+    // is asserted first, so a change of layout that misses the bound fails here instead of passing.
+    const leaves = 16_320;
+    const n = leaves + 1 + 20_000;
+    const g = fromEdgeList({
+      n,
+      directed: true,
+      sources: new Array<number>(leaves).fill(0),
+      targets: Array.from({ length: leaves }, (_, i) => i + 1),
+      weights: new Array<number>(leaves).fill(1),
+    });
+    try {
+      discardKernel();
+      const instance = countKernel();
+      expect(Array.from(countSimplices(g, { kernel: "webassembly", maxDim: 1 }).counts)).toEqual([n, leaves]);
+      expect(instance?.memory.buffer.byteLength).toBe(64 * 2 ** 20);
+      expect(countKernel()).toBe(instance);
+    } finally {
+      discardKernel();
+    }
+  });
+
   it("takes a directed graph's roots in breadth-first order", () => {
     // Worked by hand. Arcs 0 → 2, 2 → 3, 2 → 4, 3 → 4 (the triangle (2, 3, 4), from root 2) and the
     // transitive tournament on 1, 5, 6, 7 (three triangles and a tetrahedron from root 1, a triangle from

@@ -1,6 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { seededRandom } from "../../../../test/support/random.js";
-import { EdgeLayer } from "./edge-layer.js";
+import { EdgeLayer, SETTLE_MS } from "./edge-layer.js";
 
 /**
  * A stand-in for a 2-D canvas that records which edges its pixels hold: a stroked path adds the edges it
@@ -17,6 +17,8 @@ class RecordingCanvas {
   held = new Map<number, number>();
   /** Lines traced so far, drawn or not. */
   traced = 0;
+  /** The last transform set (a, b, c, d, e, f). */
+  transform: number[] = [1, 0, 0, 1, 0, 0];
   private path: number[] = [];
   private from = -1;
   constructor(private readonly edgeAt: (s: number, t: number) => number) {}
@@ -28,7 +30,9 @@ class RecordingCanvas {
       strokeStyle: "",
       fillStyle: "",
       lineCap: "",
-      setTransform() {},
+      setTransform(...matrix: number[]) {
+        canvas.transform = matrix;
+      },
       clearRect() {
         canvas.held.clear();
       },
@@ -81,9 +85,9 @@ describe("EdgeLayer", () => {
   });
   afterEach(() => vi.unstubAllGlobals());
 
-  function layer(): { edges: EdgeLayer; canvas: RecordingCanvas } {
+  function layer(pixelRatio = 1): { edges: EdgeLayer; canvas: RecordingCanvas } {
     const container = { append() {} } as unknown as HTMLElement;
-    const edges = new EdgeLayer(container, { sources, targets, directed: false, n: m + 1 }, 1);
+    const edges = new EdgeLayer(container, { sources, targets, directed: false, n: m + 1 }, pixelRatio);
     const xy = new Float64Array(2 * (m + 1));
     for (let v = 0; v <= m; v++) xy[2 * v] = v;
     edges.setNodes(xy, new Float64Array(m + 1).fill(4.5));
@@ -130,5 +134,69 @@ describe("EdgeLayer", () => {
     edges.flush();
     expect(canvas.traced - traced).toBe(500);
     expectFirst(canvas, 8500);
+  });
+
+  describe("while the viewport moves", () => {
+    beforeEach(() => vi.useFakeTimers({ toFake: ["setTimeout", "clearTimeout"] }));
+    afterEach(() => vi.useRealTimers());
+    const runFrames = () => {
+      for (const frame of frames.splice(0)) frame();
+    };
+
+    it("moves the drawing as a picture, and strokes the edges again once the viewport is still", () => {
+      const { edges, canvas } = layer();
+      edges.show(9000);
+      edges.flush();
+      const traced = canvas.traced;
+      // From zoom 1, pan (0, 0): zoom 2 and pan (10, −5) scale the picture by 2 and shift it by the pan.
+      edges.setViewport({ zoom: 2, pan: { x: 10, y: -5 } });
+      runFrames();
+      expect(canvas.traced).toBe(traced);
+      expect(canvas.transform).toEqual([2, 0, 0, 2, 10, -5]);
+      expectFirst(canvas, 9000);
+      // Each move within SETTLE_MS of the last puts the stroking off again.
+      vi.advanceTimersByTime(SETTLE_MS - 50);
+      edges.setViewport({ zoom: 2, pan: { x: 20, y: -5 } });
+      runFrames();
+      expect(canvas.transform).toEqual([2, 0, 0, 2, 20, -5]);
+      vi.advanceTimersByTime(SETTLE_MS - 50);
+      runFrames();
+      expect(canvas.traced).toBe(traced);
+      vi.advanceTimersByTime(50);
+      runFrames();
+      expect(canvas.traced).toBe(traced + 9000);
+      expect(canvas.transform).toEqual([2, 0, 0, 2, 20, -5]);
+      expectFirst(canvas, 9000);
+    });
+
+    it("maps the picture through the pixel ratio and the zoom it was drawn at", () => {
+      // Worked by hand: a model x is at pixel (0.5 x + 4) · 2 = x + 8 before and (x + 10) · 2 = 2x + 20
+      // after, which is 2 · (x + 8) + 4: scale 2, shift 4; in y, (0.5 y + 6) · 2 = y + 12 goes to
+      // 2y = 2 · (y + 12) − 24.
+      const { edges, canvas } = layer(2);
+      edges.setViewport({ zoom: 0.5, pan: { x: 4, y: 6 } });
+      edges.show(100);
+      edges.flush();
+      edges.setViewport({ zoom: 1, pan: { x: 10, y: 0 } });
+      runFrames();
+      expect(canvas.transform).toEqual([2, 0, 0, 2, 4, -24]);
+    });
+
+    it("strokes at once the edges of a threshold moved during a pan, and not again when it settles", () => {
+      const { edges, canvas } = layer();
+      edges.show(9000);
+      edges.flush();
+      edges.setViewport({ zoom: 1, pan: { x: 30, y: 0 } });
+      runFrames();
+      edges.show(5000);
+      runFrames();
+      expectFirst(canvas, 5000);
+      expect(canvas.transform).toEqual([1, 0, 0, 1, 30, 0]);
+      const traced = canvas.traced;
+      vi.advanceTimersByTime(2 * SETTLE_MS);
+      runFrames();
+      expect(canvas.traced).toBe(traced);
+      expectFirst(canvas, 5000);
+    });
   });
 });

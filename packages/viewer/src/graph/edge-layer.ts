@@ -14,6 +14,12 @@ const EDGES_PER_PATH = 2000;
  * many edges, plus the edges it adds. About 2 MB of pixels per picture at 1000 × 500.
  */
 const CHECKPOINT_EDGES = 4000;
+/**
+ * While the view pans or zooms, the drawing is moved as a picture (as cytoscape moves its nodes' texture),
+ * and the edges are stroked again once the viewport has been still this long: stroking 40,000 edges takes
+ * about 50 ms, longer than a frame.
+ */
+export const SETTLE_MS = 150;
 /** Arrowheads as cytoscape draws `triangle` at arrow-scale 0.7 on a 1-unit edge: about 6 units long and wide. */
 const ARROW_LENGTH = 6;
 const ARROW_HALF_WIDTH = 3;
@@ -45,6 +51,10 @@ export class EdgeLayer {
   private frame = 0;
   /** checkpoints[k]: the canvas's pixels with the first k × CHECKPOINT_EDGES edges drawn (k ≥ 1). */
   private checkpoints: (OffscreenCanvas | undefined)[] = [];
+  /** While the viewport moves: the complete drawing as it was when the move began, and its viewport. */
+  private still: OffscreenCanvas | null = null;
+  private stillViewport: Viewport = { zoom: 1, pan: { x: 0, y: 0 } };
+  private settleTimer: ReturnType<typeof setTimeout> | null = null;
 
   constructor(
     container: HTMLElement,
@@ -70,9 +80,49 @@ export class EdgeLayer {
     this.invalidate();
   }
 
+  /**
+   * Follows a pan or zoom. A complete drawing is moved as a picture at each frame, and stroked again once
+   * the viewport has been still for SETTLE_MS.
+   */
   setViewport(viewport: Viewport): void {
+    if (this.still === null && this.count > 0 && this.drawn === this.count && this.frame === 0) {
+      this.still = new OffscreenCanvas(this.canvas.width, this.canvas.height);
+      this.still.getContext("2d")!.drawImage(this.canvas, 0, 0);
+      this.stillViewport = this.viewport;
+    }
     this.viewport = { zoom: viewport.zoom, pan: { ...viewport.pan } };
+    if (this.still === null) {
+      this.invalidate();
+      return;
+    }
+    this.drawn = null;
+    this.checkpoints = [];
+    if (this.settleTimer !== null) clearTimeout(this.settleTimer);
+    this.settleTimer = setTimeout(() => this.settle(), SETTLE_MS);
+    this.schedule();
+  }
+
+  /** Ends a move of the viewport: the edges are stroked again at the next frame. */
+  private settle(): void {
+    if (this.settleTimer !== null) clearTimeout(this.settleTimer);
+    this.settleTimer = null;
+    if (this.still === null) return;
+    this.still = null;
     this.invalidate();
+  }
+
+  /** Draws the picture taken when the move began where the current viewport puts it. */
+  private drawStill(): void {
+    const context = this.context;
+    const r = this.pixelRatio;
+    const from = this.stillViewport;
+    const to = this.viewport;
+    // A model point at pixel p before is at p · s + (pan − pan_before · s) · r now, s the zoom's ratio.
+    const s = to.zoom / from.zoom;
+    context.setTransform(1, 0, 0, 1, 0, 0);
+    context.clearRect(0, 0, this.canvas.width, this.canvas.height);
+    context.setTransform(s, 0, 0, s, (to.pan.x - from.pan.x * s) * r, (to.pan.y - from.pan.y * s) * r);
+    context.drawImage(this.still as OffscreenCanvas, 0, 0);
   }
 
   /** Matches the canvas to its box (CSS pixels times the pixel ratio). */
@@ -88,6 +138,8 @@ export class EdgeLayer {
   /** Shows exactly the first `count` edges; drawn at the next animation frame. */
   show(count: number): void {
     if (count === this.count) return;
+    // The moving picture holds the old edges: stroke the new ones at once.
+    this.settle();
     // Fewer edges than drawn: start again from a kept picture or a clear canvas.
     if (this.drawn !== null && count < this.drawn) this.drawn = null;
     this.count = count;
@@ -96,6 +148,7 @@ export class EdgeLayer {
 
   /** How many edges are drawn (drawing now what is pending). */
   drawnEdges(): number {
+    this.settle();
     this.flush();
     return this.drawn ?? 0;
   }
@@ -104,6 +157,10 @@ export class EdgeLayer {
   flush(): void {
     if (this.frame) cancelAnimationFrame(this.frame);
     this.frame = 0;
+    if (this.still !== null) {
+      this.drawStill();
+      return;
+    }
     const count = this.count;
     if (this.drawn === count) return;
     const context = this.context;
@@ -224,6 +281,12 @@ export class EdgeLayer {
   }
 
   private invalidate(): void {
+    // New nodes or a new size: the moving picture no longer matches.
+    if (this.still !== null) {
+      this.still = null;
+      if (this.settleTimer !== null) clearTimeout(this.settleTimer);
+      this.settleTimer = null;
+    }
     this.drawn = null;
     this.checkpoints = [];
     this.schedule();
@@ -239,6 +302,7 @@ export class EdgeLayer {
 
   destroy(): void {
     if (this.frame) cancelAnimationFrame(this.frame);
+    if (this.settleTimer !== null) clearTimeout(this.settleTimer);
     this.canvas.remove();
   }
 }

@@ -1,4 +1,5 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
+import { randomArcs } from "../../../../test/support/random-arcs.js";
 import { seededRandom } from "../../../../test/support/random.js";
 import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
@@ -114,6 +115,43 @@ describe("reduceDimension's progress", () => {
       expect(reports[0].total).toBe(dim === 1 ? 465 : 4495);
       expectMonotoneWithinTotal(reports);
     }
+  });
+
+  it("checks the clock at least once per 8,192 simplices while choosing, and far less often than per simplex, column or addition", () => {
+    // WorkMonitor's contract: callers check every few thousand units of work, never per simplex. The
+    // reduction's documented stride is one check per 4,096 simplices while it chooses the columns to
+    // reduce, then one per 64 columns and per 64 additions; the bounds below leave a factor 2 (and the
+    // upper one far more) so that a retuned stride passes. K_40, distances 1–1000 (test/support/
+    // random-arcs.ts, seed 1): C(40, 3) = 9,880 triangle columns, hundreds reduced, a thousand additions.
+    let clock = 0;
+    vi.spyOn(Date, "now").mockImplementation(() => {
+      clock += 1100;
+      return clock;
+    });
+    const seen: WorkProgress[] = [];
+    const graph = fromEdgeList(randomArcs(40, 1, 1000, 1, false));
+    const barcode = computeBarcode(graph, {
+      semantics: "distance",
+      maxDim: 2,
+      onProgress: (p) => seen.push(p),
+    });
+    const stats = barcode.stats;
+    const reports = seen.filter((p) => p.stage === "reducing columns" && p.dim === 2);
+    expect(stats.simplices[2]).toBe(9880);
+    // Columns settled while choosing (cleared or apparent), then the ones reduced (emergent or not): the
+    // reduction's reports count columns done, so its first report past the choice is the settled count.
+    const columns = stats.emergentPairs[2] + stats.columnsReduced[2];
+    const settled = stats.simplices[2] - columns;
+    expect(columns).toBeGreaterThan(256);
+    expect(stats.columnAdditions[2]).toBeGreaterThan(512);
+    const firstOfLoop = reports.findIndex((p) => p.done >= settled);
+    expect(firstOfLoop).toBeGreaterThan(0);
+    const choosing = firstOfLoop - 1; // after the report of the stage's begin
+    const reducing = reports.length - firstOfLoop;
+    expect(choosing).toBeGreaterThanOrEqual(Math.ceil(stats.simplices[2] / 8192));
+    expect(choosing).toBeLessThan(stats.simplices[2] / 100);
+    expect(reducing).toBeGreaterThanOrEqual(Math.ceil(columns / 128));
+    expect(reducing).toBeLessThanOrEqual((columns + stats.columnAdditions[2]) / 32 + 2);
   });
 
   it("also when many of the columns past 4,096 need work (G(100, 0.85), edges)", () => {

@@ -1,6 +1,7 @@
 import { describe, expect, it, vi } from "vitest";
 import { randomArcs } from "../../../../test/support/random-arcs.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
+import type { WorkProgress } from "../work/work-control.js";
 import { bettiAt } from "./betti-at.js";
 import { bettiFromBarcode } from "./betti-curves.js";
 import { computeBarcode } from "./compute-barcode.js";
@@ -49,6 +50,42 @@ describe("stored entries without room", () => {
       }
     },
   );
+
+  it("checks the clock at the same points, after the same additions, whether or not columns keep their entries", () => {
+    // Reading a stored column instead of regenerating its chain changes how an addition is made, not which
+    // additions are made (the working column's entries are the same sums): so the additions counted and
+    // the clock checks, made every so many columns and additions (WorkMonitor's contract: a time limit
+    // noticed within a bounded amount of work), must be the same with room for entries as with none. K_40,
+    // distances 1–1000 (seed 1): more than 64 additions in each dimension, of stored and of other columns.
+    const graph = fromEdgeList(randomArcs(40, 1, 1000, 1, false));
+    const checks = (maxEntries: number) => {
+      // A clock that moves 1.1 s per reading, so that every check reports (the default interval is 1 s).
+      let clock = 0;
+      const now = vi.spyOn(Date, "now").mockImplementation(() => {
+        clock += 1100;
+        return clock;
+      });
+      const seen: WorkProgress[] = [];
+      room.maxEntries = maxEntries;
+      const barcode = computeBarcode(graph, {
+        semantics: "distance",
+        maxDim: 2,
+        prime: 2,
+        onProgress: (p) => seen.push(p),
+      });
+      room.maxEntries = Number.POSITIVE_INFINITY;
+      now.mockRestore();
+      return { barcode, reports: seen.filter((p) => p.stage === "reducing columns") };
+    };
+    const roomy = checks(Number.POSITIVE_INFINITY);
+    const none = checks(0);
+    expect(roomy.barcode.stats.storedColumns[1]).toBeGreaterThan(0);
+    expect(roomy.barcode.stats.storedColumns[2]).toBeGreaterThan(0);
+    expect(none.barcode.stats.storedColumns).toEqual([0, 0, 0]);
+    expect(roomy.barcode.stats.columnAdditions[1]).toBeGreaterThan(64);
+    expect(none.barcode.stats.columnAdditions).toEqual(roomy.barcode.stats.columnAdditions);
+    expect(none.reports.map((p) => [p.dim, p.done])).toEqual(roomy.reports.map((p) => [p.dim, p.done]));
+  });
 
   it("an extension without room for the entries of its first value pushes the chain band by band instead (ties, Z/3)", () => {
     // Complete graph of 40 vertices with distances 1–4 only (test/support/random-arcs.ts, seed 2), room for

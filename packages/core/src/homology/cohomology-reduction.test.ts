@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { randomArcs } from "../../../../test/support/random-arcs.js";
 import { seededRandom } from "../../../../test/support/random.js";
+import { randomArcs } from "../../../../test/support/random-arcs.js";
 import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";

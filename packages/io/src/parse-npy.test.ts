@@ -286,3 +286,53 @@ describe("npyHeaderEnd: where the data start, from the first bytes only (NEP 1 l
     expect(npyHeaderEnd(other)).toBeUndefined();
   });
 });
+
+/**
+ * A .npy file as the NumPy format specification lays it out (NEP 1, "A simple file format for NumPy arrays";
+ * numpy.lib.format): magic "\x93NUMPY", major and minor version bytes, the header length as a little-endian
+ * uint16 (1.0) or uint32 (2.0, 3.0), then the header, padded with spaces and ended by "\n" so that magic,
+ * version, length and header together fill a multiple of 64 bytes, then the data. `header` is bytes, so a
+ * test can write latin-1 (1.0, 2.0) or UTF-8 (3.0) itself.
+ */
+function specNpy(header: Uint8Array, major: number, data: ArrayLike<number> = []): Uint8Array {
+  const lengthBytes = major === 1 ? 2 : 4;
+  const unpadded = 8 + lengthBytes + header.length + 1;
+  const headerLength = header.length + ((64 - (unpadded % 64)) % 64) + 1;
+  const out = new Uint8Array(8 + lengthBytes + headerLength + data.length);
+  out.set([0x93, 0x4e, 0x55, 0x4d, 0x50, 0x59, major, 0]);
+  const view = new DataView(out.buffer);
+  if (major === 1) view.setUint16(8, headerLength, true);
+  else view.setUint32(8, headerLength, true);
+  out.set(header, 8 + lengthBytes);
+  out.fill(0x20, 8 + lengthBytes + header.length, 8 + lengthBytes + headerLength - 1);
+  out[8 + lengthBytes + headerLength - 1] = 0x0a;
+  out.set(Array.from(data), 8 + lengthBytes + headerLength);
+  return out;
+}
+
+const ascii = (text: string) => new TextEncoder().encode(text);
+const F8_2x2 = "{'descr': '<f8', 'fortran_order': False, 'shape': (2, 2), }";
+
+describe("parseNpy: mistakes found by mutation testing to be untested (third round)", () => {
+  it("the padding helper follows the specification: the data start at a multiple of 64", () => {
+    for (const major of [1, 2, 3]) {
+      const bytes = specNpy(ascii(F8_2x2), major, new Uint8Array(32));
+      expect(npyHeaderEnd(bytes), `version ${major}`).toBe(128);
+      expect(Array.from(npyValues(parseNpy(bytes, "a.npy")))).toEqual([0, 0, 0, 0]);
+    }
+    // The same bytes as our writer, which io-npy-numpy.test.ts checks byte for byte against np.save.
+    expect(specNpy(ascii(F8_2x2), 1, new Uint8Array(32))).toEqual(encodeNpy([0, 0, 0, 0], [2, 2]));
+  });
+
+  it("a parse error after a multi-byte UTF-8 character names its byte, not its character index", () => {
+    // "{'é': 1, 'descr': ]}": the "]" is character 18 of the header but byte 19 ('é' takes two bytes);
+    // the 3.0 header starts at byte 12, so the "]" is byte 31. In latin-1 (2.0) 'é' is one byte: byte 30.
+    const v3 = failure(specNpy(ascii("{'é': 1, 'descr': ]}"), 3));
+    expect(v3.message).toBe('a.npy: byte 31: header is not a valid dictionary: unexpected "]"');
+    expect(specNpy(ascii("{'é': 1, 'descr': ]}"), 3)[31]).toBe(0x5d); // "]"
+    const latin1 = Uint8Array.from([...ascii("{'"), 0xe9, ...ascii("': 1, 'descr': ]}")]);
+    expect(failure(specNpy(latin1, 2)).message).toBe(
+      'a.npy: byte 30: header is not a valid dictionary: unexpected "]"',
+    );
+  });
+});

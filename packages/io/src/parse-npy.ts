@@ -122,7 +122,10 @@ export function parseNpyHeader(bytes: Uint8Array, file: string): NpyHeader {
     header = parsePythonLiteral(headerText);
   } catch (error) {
     if (!(error instanceof PythonLiteralError)) throw error;
-    return fail("bad-npy", `header is not a valid dictionary: ${error.message}`, headerStart + error.offset);
+    // The parser counts characters; a UTF-8 (3.0) header may spend several bytes on one.
+    const before = headerText.slice(0, error.offset);
+    const byte = headerStart + (major === 3 ? new TextEncoder().encode(before).length : before.length);
+    return fail("bad-npy", `header is not a valid dictionary: ${error.message}`, byte);
   }
   if (header === null || typeof header !== "object" || Array.isArray(header)) {
     return fail("bad-npy", "header is not a dictionary", headerStart);

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { encodeNpy } from "./encode-npy.js";
 import { InputFileError } from "./input-file-error.js";
 import { npyToGraphs } from "./npy-graphs.js";
-import { npyHeaderEnd, npyValues, parseNpy } from "./parse-npy.js";
+import { npyHeaderEnd, npyValues, parseNpy, parseNpyHeader } from "./parse-npy.js";
 import type { GraphReadOptions } from "./read-options.js";
 
 /**
@@ -324,6 +324,61 @@ describe("parseNpy: mistakes found by mutation testing to be untested (third rou
     expect(specNpy(ascii(F8_2x2), 1, new Uint8Array(32))).toEqual(encodeNpy([0, 0, 0, 0], [2, 2]));
   });
 
+  it("cut after the magic, before or inside the header length: the byte count, and no byte named", () => {
+    const v1 = specNpy(ascii(F8_2x2), 1, new Uint8Array(32));
+    const v2 = specNpy(ascii(F8_2x2), 2, new Uint8Array(32));
+    const cases: [Uint8Array, string][] = [
+      [v1.subarray(0, 6), "file is truncated: 6 bytes, before the version number"],
+      [v1.subarray(0, 7), "file is truncated: 7 bytes, before the version number"],
+      // The version is there: the cut is inside the 2-byte (1.0) or 4-byte (2.0) length field.
+      [v1.subarray(0, 8), "file is truncated: 8 bytes, inside the header length field"],
+      [v1.subarray(0, 9), "file is truncated: 9 bytes, inside the header length field"],
+      [v2.subarray(0, 11), "file is truncated: 11 bytes, inside the header length field"],
+    ];
+    for (const [bytes, reason] of cases) {
+      const error = failure(bytes);
+      expect(error.message).toBe(`a.npy: ${reason}`);
+      expect(error.problem).toBe("truncated");
+      // No byte is named: the position carries no byteOffset key at all, not one set to undefined.
+      expect(error.position).toStrictEqual({});
+    }
+  });
+
+  it("cut right after the length field: the header length is read and found past the end", () => {
+    // 118 (1.0) or 116 (2.0) bytes of padded header after 10 or 12 bytes of magic, version and length.
+    expect(failure(specNpy(ascii(F8_2x2), 1).subarray(0, 10)).message).toBe(
+      "a.npy: byte 8: file is truncated: the header claims 118 bytes, ending at byte 128, but the file has 10",
+    );
+    expect(failure(specNpy(ascii(F8_2x2), 2).subarray(0, 12)).message).toBe(
+      "a.npy: byte 8: file is truncated: the header claims 116 bytes, ending at byte 128, but the file has 12",
+    );
+  });
+
+  it("versions 0.0 and 1.1 are unknown, at byte 6", () => {
+    for (const [major, minor] of [
+      [0, 0],
+      [1, 1],
+    ]) {
+      const bytes = specNpy(ascii(F8_2x2), 1, new Uint8Array(32));
+      bytes[6] = major;
+      bytes[7] = minor;
+      expect(failure(bytes).message).toBe(
+        `a.npy: byte 6: unsupported .npy format version ${major}.${minor} (this reader knows 1.0, 2.0 and 3.0)`,
+      );
+    }
+  });
+
+  it("a 3.0 header is UTF-8 and a 2.0 header latin-1: a non-ASCII key is named as written", () => {
+    // 'é' is C3 A9 in UTF-8 and E9 in latin-1 (ISO/IEC 8859-1; Unicode U+00E9).
+    const keys =
+      "header keys are 'descr', 'fortran_order', 'shape', 'é'; a .npy header has exactly 'descr', 'fortran_order' and 'shape' (numpy refuses any other set)";
+    const v3 = failure(specNpy(ascii(`${F8_2x2.slice(0, -1)}'é': 1}`), 3, new Uint8Array(32)));
+    expect(v3.message).toBe(`a.npy: byte 12: ${keys}`);
+    const latin1 = Uint8Array.from([...ascii(`${F8_2x2.slice(0, -1)}'`), 0xe9, ...ascii("': 1}")]);
+    const v2 = failure(specNpy(latin1, 2, new Uint8Array(32)));
+    expect(v2.message).toBe(`a.npy: byte 12: ${keys}`);
+  });
+
   it("a parse error after a multi-byte UTF-8 character names its byte, not its character index", () => {
     // "{'é': 1, 'descr': ]}": the "]" is character 18 of the header but byte 19 ('é' takes two bytes);
     // the 3.0 header starts at byte 12, so the "]" is byte 31. In latin-1 (2.0) 'é' is one byte: byte 30.
@@ -334,5 +389,65 @@ describe("parseNpy: mistakes found by mutation testing to be untested (third rou
     expect(failure(specNpy(latin1, 2)).message).toBe(
       'a.npy: byte 30: header is not a valid dictionary: unexpected "]"',
     );
+  });
+
+  it("headers that are not a dict, an empty dict, a descr that is no string, a shape that is no tuple", () => {
+    const cases: [string, string][] = [
+      ["[1, 2]", "header is not a dictionary"],
+      ["None", "header is not a dictionary"],
+      [
+        "{}",
+        "header keys are none; a .npy header has exactly 'descr', 'fortran_order' and 'shape' (numpy refuses any other set)",
+      ],
+      ["{'descr': 8, 'fortran_order': False, 'shape': (2, 2)}", "header has no 'descr' string"],
+      ["{'descr': '<f8', 'fortran_order': False, 'shape': 4}", "header 'shape' is not a tuple"],
+    ];
+    for (const [header, reason] of cases) {
+      const error = failure(specNpy(ascii(header), 1));
+      expect(error.message, header).toBe(`a.npy: byte 10: ${reason}`);
+      expect(error.problem).toBe("bad-npy");
+    }
+  });
+
+  it("a one-dimensional shape is written with its trailing comma, as Python writes a 1-tuple", () => {
+    expect(
+      failure(specNpy(ascii("{'descr': '<f8', 'fortran_order': False, 'shape': (-1,), }"), 1)).message,
+    ).toBe("a.npy: byte 10: header 'shape' (-1,) is not a tuple of non-negative integers");
+  });
+
+  it("a dimension below -2^53 is not 'too large' but not a non-negative integer", () => {
+    const error = failure(
+      specNpy(ascii("{'descr': '<f8', 'fortran_order': False, 'shape': (-18446744073709551617, 2), }"), 1),
+    );
+    expect(error.problem).toBe("bad-npy");
+    expect(error.message).toBe(
+      "a.npy: byte 10: header 'shape' (-18446744073709551617, 2) is not a tuple of non-negative integers",
+    );
+  });
+
+  it("the size limit counts bytes, elements × itemsize, and 2^53 - 1 bytes is still allowed", () => {
+    // 2^50 float64 elements are 2^53 bytes: one over Number.MAX_SAFE_INTEGER (2^53 - 1, ECMA-262).
+    const over = failure(
+      specNpy(ascii("{'descr': '<f8', 'fortran_order': False, 'shape': (1125899906842624,), }"), 1),
+    );
+    expect(over.problem).toBe("too-large");
+    expect(over.message).toBe(
+      "a.npy: byte 10: header shape (1125899906842624,) describes more data than any file can hold",
+    );
+    // 2^53 - 1 one-byte elements: exactly at the limit, so the header is accepted (the data then is missing).
+    const header = parseNpyHeader(
+      specNpy(ascii("{'descr': '|u1', 'fortran_order': False, 'shape': (9007199254740991,), }"), 1),
+      "a.npy",
+    );
+    expect(header.dataBytes).toBe(Number.MAX_SAFE_INTEGER);
+    expect(header.dataOffset).toBe(128);
+  });
+
+  it("an array with a zero dimension has no values, and reading them reads no byte", () => {
+    for (const shape of ["(0, 3)", "(0,)", "(2, 0)"]) {
+      const bytes = specNpy(ascii(`{'descr': '<f8', 'fortran_order': False, 'shape': ${shape}, }`), 1);
+      expect(npyHeaderEnd(bytes)).toBe(bytes.length); // no data at all
+      expect(npyValues(parseNpy(bytes, "a.npy")), shape).toEqual(new Float64Array(0));
+    }
   });
 });

@@ -1,4 +1,4 @@
-import { fromDenseMatrix } from "@cliquescape/core";
+import { fromDenseMatrix, GraphInputError } from "@cliquescape/core";
 import { describe, expect, it } from "vitest";
 import { InputFileError } from "./input-file-error.js";
 import { type DenseMatrixTextOptions, parseDenseMatrixText } from "./parse-dense-matrix.js";
@@ -317,5 +317,77 @@ describe("parseDenseMatrixText: mistakes found by mutation testing to be unteste
     expect(error.problem).toBe("bad-labels");
     expect(error.reason).toBe("the labels option differs from the labels in the file");
     expect(edges("a,b\n0,1\n1,0\n", { labels: ["a", "b"] })).toHaveLength(1);
+  });
+});
+
+// Third round of the readers' mutation run: each case fails with one surviving mutant applied by hand.
+describe("parseDenseMatrixText: mistakes found by mutation testing to be untested (third round)", () => {
+  it("a label row with a corner cell over rows without labels is a miscount, not a label column", () => {
+    expect(failure(",a,b\n0,1\n1,0\n").message).toBe(
+      "m.csv:1: label row has 3 cells but the matrix has 2 columns",
+    );
+  });
+
+  it("a label column and nothing else names the first matrix row", () => {
+    // "a" alone is a label row; "b" is then a row holding only its label.
+    expect(failure("a\nb\n").message).toBe("m.csv:2: matrix has no columns");
+  });
+
+  it("a ragged row in a comma file with a space inside a cell gets no tabs-and-spaces hint", () => {
+    expect(failure("0,1,2\n1 0,3\n2,3,0\n").message).toBe("m.csv:2: row has 2 cells but line 1 has 3");
+  });
+
+  it("a file with a label row is a matrix even when it looks like an edge list", () => {
+    // Read as a headerless table, rows 1,2 and 2,3 start with node numbers and the diagonal 1, 3 varies.
+    const { graph } = parseDenseMatrixText("a,b\n1,2\n2,3\n", "m.csv");
+    expect(graph.labels).toEqual(["a", "b"]);
+    expect(edges("a,b\n1,2\n2,3\n")).toEqual(["0-1:2"]);
+  });
+
+  it("a labelled matrix one row short gets no edge-list hint", () => {
+    expect(failure("a,b,c\n0,1,2\n1,0,3\n").message).toBe(
+      "m.csv:3: matrix is not square: 2 rows but 3 columns",
+    );
+  });
+
+  it("an empty diagonal cell is not the same diagonal value as a 0", () => {
+    // Diagonal 0, 0, empty: not one value repeated, so the node-number table is refused as an edge list.
+    const error = failure("0,1,2\n1,0,3\n2,3,\n");
+    expect(error.problem).toBe("bad-header");
+    expect(error.message).toMatch(
+      /^m\.csv:1: this looks like an edge list without a header line, not a 3×3 matrix/,
+    );
+    // With the diagonal written alike it is a matrix.
+    expect(edges("0,1,2\n1,0,3\n2,3,0\n")).toEqual(["0-1:1", "0-2:2", "1-2:3"]);
+  });
+
+  it("a one-cell file is a 1×1 matrix, not a label row", () => {
+    const { graph } = parseDenseMatrixText("0\n", "m.csv");
+    expect(graph.n).toBe(1);
+    expect(graph.labels).toBeUndefined();
+  });
+
+  it("a labelled first node without edges: its empty cells are no edges, not an empty label row", () => {
+    const text = "a,,,\nb,,,2\nc,,2,\n";
+    expect(parseDenseMatrixText(text, "m.csv").graph.labels).toEqual(["a", "b", "c"]);
+    expect(edges(text)).toEqual(["1-2:2"]);
+  });
+
+  it("an empty or repeated name in a label column names its line and the first one's", () => {
+    expect(failure("a,0,1\n,1,0\n").message).toBe("m.csv:2:1: empty node label");
+    expect(failure("a,0,1\na,1,0\n").message).toBe(
+      'm.csv:2:1: node label "a" appears twice; first at line 1, column 1',
+    );
+  });
+
+  it("errors restated from the core keep the core's error as their cause", () => {
+    const asymmetric = failure("0,1\n2,0\n");
+    expect(asymmetric.cause).toBeInstanceOf(GraphInputError);
+    expect((asymmetric.cause as GraphInputError).problem).toBe("asymmetric");
+    expect((asymmetric.cause as GraphInputError).location).toEqual({ row: 0, col: 1 });
+    const negative = failure("0,-1\n-1,0\n", { negative: "error" });
+    expect((negative.cause as GraphInputError).problem).toBe("negative-weight");
+    const infinite = failure("0,1e999\n1e999,0\n");
+    expect((infinite.cause as GraphInputError).problem).toBe("not-finite");
   });
 });

@@ -145,6 +145,8 @@ describe("parseEdgeListText: errors", () => {
     const error = failure(text);
     expect(error.message).toBe('e.csv:5:1: edge "b" – "a" is listed twice: first on line 2, again on line 5');
     expect(error.problem).toBe("duplicate-edge");
+    // The core's error stays as the cause, as for negative weights below.
+    expect(error.cause).toMatchObject({ problem: "duplicate-edge", location: { edge: 2, firstEdge: 0 } });
     expect(failure("source,target\na,b\na,b\n", { directed: true }).reason).toBe(
       'edge "a" → "b" is listed twice: first on line 2, again on line 3',
     );

@@ -1,7 +1,7 @@
 import { parentPort } from "node:worker_threads";
 import { readDatasetConnectivity } from "@cliquescape/io";
 import { graphFailureOf } from "../extract/graph-failure.js";
-import { serveBatches } from "../extract/worker-batches.js";
+import { serveBatches } from "../parallel/serve-batches.js";
 import type { ConnectReply, ConnectSetup, ConnectTask } from "./connect-messages.js";
 import { measureOptions, recordingOptions } from "./connectivity-spec.js";
 

@@ -11,8 +11,8 @@ import { type ErrorRow, errorRow, problemRow } from "../extract/assemble-tables.
 import { hashInputs } from "../extract/input-hashes.js";
 import { startProgress } from "../extract/progress.js";
 import { fileStem } from "../extract/run-folder.js";
-import { runOnWorkerScript } from "../extract/worker-pool.js";
 import { UsageError } from "../options/graph-options.js";
+import { runOnWorkerScript } from "../parallel/worker-pool.js";
 import { VERSION } from "../version.js";
 import { claimConnectFolder } from "./connect-folder.js";
 import type { ConnectReply, ConnectSetup, ConnectTask } from "./connect-messages.js";

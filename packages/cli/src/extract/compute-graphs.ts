@@ -2,12 +2,12 @@ import type { WorkProgress } from "@cliquescape/core";
 import type { DatasetEntry } from "@cliquescape/io";
 import { progressLine } from "../work-progress.js";
 import { labelCoder } from "./assemble-tables.js";
+import { runOnWorkers } from "./graph-pool.js";
 import { type GraphRecord, readRecord } from "./graph-record.js";
 import { startProgress } from "./progress.js";
 import { graphPaths, type RunFolder } from "./run-folder.js";
 import type { ResolvedRunSpec } from "./run-spec.js";
 import { outputsIntact, saveGraph } from "./save-graph.js";
-import { runOnWorkers } from "./worker-pool.js";
 
 export interface ComputeRequest {
   /** Where the per-graph files go: the run folder, or a shard's part of it. */

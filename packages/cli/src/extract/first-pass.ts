@@ -1,11 +1,11 @@
 import type { Dataset } from "@cliquescape/io";
 import type { GraphFailure } from "./graph-failure.js";
+import { runOnWorkers } from "./graph-pool.js";
 import { InterruptedError } from "./interrupted-error.js";
 import { noEdgeError } from "./no-edge-error.js";
 import { startProgress } from "./progress.js";
 import type { RunSpec } from "./run-spec.js";
 import type { GraphSize } from "./worker-messages.js";
-import { runOnWorkers } from "./worker-pool.js";
 
 /** All edge values the first pass may hold at once, over the whole dataset (128 MiB of float64). */
 const FIRST_PASS_VALUES = 2 ** 24;

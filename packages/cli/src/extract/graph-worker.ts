@@ -1,12 +1,13 @@
 import { parentPort } from "node:worker_threads";
 import { edgeCount, type WorkControl } from "@cliquescape/core";
+import type { WorkerProgress } from "../parallel/pool-messages.js";
+import { serveBatches } from "../parallel/serve-batches.js";
 import { edgeValues } from "./edge-values.js";
 import { graphFailureOf } from "./graph-failure.js";
 import { computeGraph } from "./graph-job.js";
 import { readPreparedGraph } from "./read-prepared-graph.js";
 import { strideSample } from "./weight-quantiles.js";
-import { serveBatches } from "./worker-batches.js";
-import type { WorkerProgress, WorkerReply, WorkerSetup, WorkerTask } from "./worker-messages.js";
+import type { WorkerReply, WorkerSetup, WorkerTask } from "./worker-messages.js";
 
 /*
  * Worker thread entry: computes the graphs of each batch in order and posts the results back. It writes no

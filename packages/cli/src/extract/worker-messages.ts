@@ -1,4 +1,3 @@
-import type { WorkProgress } from "@cliquescape/core";
 import type { DatasetEntry } from "@cliquescape/io";
 import type { GraphFailure } from "./graph-failure.js";
 import type { GraphOutcome } from "./graph-job.js";
@@ -26,13 +25,6 @@ export type WorkerTask =
   | { kind: "sample"; index: number; entry: DatasetEntry; limit: number }
   | { kind: "extract"; index: number; entry: DatasetEntry; relativeFile: string; labelCode: number };
 
-/** Sent by a worker while it computes task `index` (at most once a second). */
-export interface WorkerProgress {
-  kind: "progress";
-  index: number;
-  progress: WorkProgress;
-}
-
 /** A worker's answer to one task, tagged with the task's index. */
 export type WorkerReply =
   | {
@@ -44,12 +36,3 @@ export type WorkerReply =
       failure: GraphFailure | null;
     }
   | { kind: "extract"; index: number; outcome: GraphOutcome };
-
-/**
- * Tasks for one worker, done in order (see worker-batches.ts). Answers come back as arrays of replies,
- * gathered for at most a few tens of milliseconds.
- */
-export interface WorkerBatch<Task = WorkerTask> {
-  kind: "batch";
-  tasks: Task[];
-}

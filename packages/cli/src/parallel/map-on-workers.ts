@@ -1,9 +1,23 @@
-import { Worker } from "node:worker_threads";
+import type { MessagePort } from "node:worker_threads";
+import { serveBatches } from "./serve-batches.js";
+import { runOnWorkerScript } from "./worker-pool.js";
+
+/** What a worker of mapOnWorkers answers for one task: the reply, or the error the task threw. */
+type TaskAnswer<Reply> =
+  | { kind: "reply"; reply: Reply; transfer: ArrayBuffer[] }
+  | { kind: "error"; name: string; message: string; transfer: ArrayBuffer[] };
+
+interface TaskSetup<Setup> {
+  kind: "setup";
+  setup: Setup;
+}
 
 /**
- * Runs numbered tasks on `size` worker threads running `script`: each worker gets `setup` once, then one
- * task at a time; each reply goes to `onReply` as it arrives. A worker error rejects the whole run (the
- * tasks here are pure computations on data already checked: a failure is a bug or a budget, not a file).
+ * Runs tasks on `size` worker threads running `script` (whose side is serveTasks), on the pool of
+ * worker-pool.ts: each worker gets `setup` once; each reply goes to `onReply` as it arrives. An error a task
+ * throws stops the run and is thrown here (the tasks are pure computations on data already checked: a
+ * failure is a bug or a budget, not a file); a worker that dies is replaced, and the task that killed it
+ * fails the run with what became of the worker.
  */
 export async function mapOnWorkers<Task, Reply>(
   script: URL,
@@ -12,63 +26,52 @@ export async function mapOnWorkers<Task, Reply>(
   size: number,
   onReply: (reply: Reply) => void,
 ): Promise<void> {
-  if (tasks.length === 0) return;
-  let next = 0;
-  let running = 0;
-  const workers: Worker[] = [];
-  try {
-    await new Promise<void>((resolve, reject) => {
-      const start = () => {
-        const worker = new Worker(script);
-        workers.push(worker);
-        const feed = () => {
-          if (next >= tasks.length) {
-            if (running === 0) resolve();
-            return;
-          }
-          running++;
-          worker.postMessage({ task: tasks[next++] });
-        };
-        worker.on("message", (message: { reply?: Reply; error?: { name: string; message: string } }) => {
-          running--;
-          if (message.error) {
-            const error = new Error(message.error.message);
-            error.name = message.error.name;
-            reject(error);
-            return;
-          }
-          onReply(message.reply as Reply);
-          feed();
-        });
-        worker.on("error", reject);
-        worker.postMessage({ setup });
-        feed();
-      };
-      for (let i = 0; i < Math.max(1, Math.min(size, tasks.length)); i++) start();
-    });
-  } finally {
-    await Promise.all(workers.map((w) => w.terminate()));
-  }
+  const stop = new AbortController();
+  let failure: Error | null = null;
+  await runOnWorkerScript<Task, TaskAnswer<Reply>, TaskSetup<unknown>>(
+    script,
+    tasks,
+    (answer) => {
+      if (failure !== null) return;
+      if (answer.kind === "reply") {
+        onReply(answer.reply);
+        return;
+      }
+      failure = new Error(answer.message);
+      failure.name = answer.name;
+      stop.abort();
+    },
+    {
+      size,
+      setup: { kind: "setup", setup },
+      signal: stop.signal,
+      timeLimitSeconds: null,
+      failedReply: (_task, message) => ({ kind: "error", name: "Error", message, transfer: [] }),
+    },
+  );
+  if (failure !== null) throw failure;
 }
 
 /** The worker side: answers each task with `handle(setup, task)`, errors passed back by name and message. */
 export function serveTasks<Setup, Task, Reply>(
-  port: import("node:worker_threads").MessagePort | null,
+  port: MessagePort | null,
   handle: (setup: Setup, task: Task) => { reply: Reply; transfer?: ArrayBuffer[] },
 ): void {
   if (!port) throw new Error("this script runs as a worker thread");
   let setup: Setup | undefined;
-  port.on("message", (message: { setup?: Setup; task?: Task }) => {
-    if (message.setup !== undefined) {
+  serveBatches<TaskSetup<Setup>, Task, TaskAnswer<Reply>>(port, {
+    setup(message) {
       setup = message.setup;
-      return;
-    }
-    try {
-      const { reply, transfer } = handle(setup as Setup, message.task as Task);
-      port.postMessage({ reply }, transfer ?? []);
-    } catch (error) {
-      const e = error instanceof Error ? error : new Error(String(error));
-      port.postMessage({ error: { name: e.name, message: e.message } });
-    }
+    },
+    handle(task) {
+      try {
+        const { reply, transfer } = handle(setup as Setup, task);
+        return { kind: "reply", reply, transfer: transfer ?? [] };
+      } catch (error) {
+        const e = error instanceof Error ? error : new Error(String(error));
+        return { kind: "error", name: e.name, message: e.message, transfer: [] };
+      }
+    },
+    transfer: (answer) => answer.transfer,
   });
 }

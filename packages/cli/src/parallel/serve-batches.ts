@@ -1,5 +1,5 @@
 import type { MessagePort } from "node:worker_threads";
-import type { WorkerBatch } from "./worker-messages.js";
+import type { WorkerBatch } from "./pool-messages.js";
 
 /** Replies wait at most this long to be sent together: one message per tiny graph costs more than the graph. */
 const GATHER_MS = 50;

@@ -1,20 +1,17 @@
 import { Worker } from "node:worker_threads";
 import type { WorkProgress } from "@cliquescape/core";
-import type { WorkerBatch, WorkerProgress, WorkerReply, WorkerSetup, WorkerTask } from "./worker-messages.js";
-
-/** The compiled worker script next to this file in dist/. */
-const WORKER_SCRIPT = new URL("./graph-worker.js", import.meta.url);
+import type { WorkerBatch, WorkerProgress } from "./pool-messages.js";
 
 /** Most tasks one message carries: enough that a million tiny graphs are not a million round trips. */
 const MAX_BATCH = 256;
 
-export interface PoolOptions<Task = WorkerTask, Reply = WorkerReply, Setup = WorkerSetup> {
+export interface PoolOptions<Task, Reply, Setup> {
   size: number;
   setup: Setup;
   /** Interrupts the run: no new task starts and the tasks in flight are abandoned at once. */
   signal: AbortSignal;
   /**
-   * The per-graph time limit, which the core enforces itself with a message saying how far it got. A task
+   * The per-task time limit, which the core enforces itself with a message saying how far it got. A task
    * still running well past it (code that cannot check the clock) has its worker terminated and replaced.
    */
   timeLimitSeconds: number | null;
@@ -25,22 +22,13 @@ export interface PoolOptions<Task = WorkerTask, Reply = WorkerReply, Setup = Wor
 }
 
 /**
- * Runs tasks on worker threads and hands each reply to `onReply` in the order replies arrive (the caller
- * puts results in dataset order). Tasks go out in batches (worker-batches.ts), sized so that each worker
- * gets several before the end and the last ones go singly, to even out the finish; answers come back at
- * least every few tens of milliseconds. A worker that dies (a crash, its heap limit) is replaced and the
+ * Runs tasks on worker threads running `script` (whose side is serveBatches) and hands each reply to
+ * `onReply` in the order replies arrive (the caller puts results in dataset order). Tasks go out in
+ * batches, sized so that each worker gets several before the end and the last ones go singly, to even out
+ * the finish; answers come back at least every few tens of milliseconds. A worker that dies (a crash, its heap limit) is replaced and the
  * unanswered tasks of its batch are run again one by one, so the one that killed it fails alone; so is a
  * worker whose task runs well past the time limit. One pathological graph cannot end or stall the run.
  */
-export function runOnWorkers(
-  tasks: readonly WorkerTask[],
-  onReply: (reply: WorkerReply) => void,
-  options: PoolOptions,
-): Promise<"finished" | "stopped"> {
-  return runOnWorkerScript(WORKER_SCRIPT, tasks, onReply, options);
-}
-
-/** The same pool for another worker script and its own task, reply and setup messages (`connect`). */
 export async function runOnWorkerScript<Task, Reply extends { kind: string }, Setup>(
   script: URL,
   tasks: readonly Task[],

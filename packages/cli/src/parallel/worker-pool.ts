@@ -90,7 +90,10 @@ export async function runOnWorkerScript<Task, Reply extends { kind: string }, Se
       // The worker is lost. The task it was on fails with `message` when that task is known (it ran alone, or
       // was the last unanswered of its batch); otherwise every unanswered task of the batch goes back to run
       // alone, where the one at fault fails again and is named. A fresh worker takes its place.
+      let lost = false;
       const lose = (message: string) => {
+        if (lost) return; // an error is followed by an exit; a terminated worker exits too
+        lost = true;
         clearTimeout(timer);
         workers.delete(worker);
         if (settled) return;
@@ -122,6 +125,9 @@ export async function runOnWorkerScript<Task, Reply extends { kind: string }, Se
         feed();
       });
       worker.on("error", (error) => lose(`worker stopped: ${error.message}`));
+      // A worker can also end with no error (process.exit in its code): without this the run would wait
+      // for its answers for ever.
+      worker.on("exit", (code) => lose(`worker exited with code ${code}`));
       feed();
     };
     signal.addEventListener("abort", () => settle("stopped"), { once: true });

@@ -222,6 +222,16 @@ describe("the WebAssembly counting kernel", () => {
     expect(r.truncated).toBe(false);
   });
 
+  /** A directed star: arcs from vertex 0 to 1 … leaves, and `isolated` more vertices after them. */
+  const star = (leaves: number, isolated = 0) =>
+    fromEdgeList({
+      n: leaves + 1 + isolated,
+      directed: true,
+      sources: new Array<number>(leaves).fill(0),
+      targets: Array.from({ length: leaves }, (_, i) => i + 1),
+      weights: new Array<number>(leaves).fill(1),
+    });
+
   it("keeps its instance after a count that fits in 64 MiB and makes a new one after a larger count", () => {
     // countWithWasm keeps the kernel's memory for the next count up to 64 MiB. Worked by hand: the path on
     // 100 000 vertices needs about 1.3 MB of tables (offsets, later neighbours and marks, 4 bytes each, and
@@ -232,14 +242,6 @@ describe("the WebAssembly counting kernel", () => {
     // (313 words). Counts: n and n − 1 (no triangle), d + 1 and d.
     const n = 100_000;
     const path = pathGraph(n);
-    const star = (leaves: number) =>
-      fromEdgeList({
-        n: leaves + 1,
-        directed: true,
-        sources: new Array<number>(leaves).fill(0),
-        targets: Array.from({ length: leaves }, (_, i) => i + 1),
-        weights: new Array<number>(leaves).fill(1),
-      });
     try {
       discardKernel();
       const instance = countKernel();
@@ -271,13 +273,7 @@ describe("the WebAssembly counting kernel", () => {
     // is asserted first, so a change of layout that misses the bound fails here instead of passing.
     const leaves = 16_320;
     const n = leaves + 1 + 20_000;
-    const g = fromEdgeList({
-      n,
-      directed: true,
-      sources: new Array<number>(leaves).fill(0),
-      targets: Array.from({ length: leaves }, (_, i) => i + 1),
-      weights: new Array<number>(leaves).fill(1),
-    });
+    const g = star(leaves, 20_000);
     try {
       discardKernel();
       const instance = countKernel();

@@ -137,6 +137,17 @@ function rowValueAbove(c: Case, s: number[], f: number, horizon: number, random:
   return values.length === 0 ? 0 : values[Math.floor(random() * values.length)];
 }
 
+/** A clique of `count` vertices grown from a random vertex by random common neighbours; null if none found. */
+function growClique(c: Case, count: number, random: () => number): number[] | null {
+  const n = c.graph.n;
+  const s = [Math.floor(random() * n)];
+  for (let tries = 0; tries < 4 * n && s.length < count; tries++) {
+    const v = Math.floor(random() * n);
+    if (!s.includes(v) && s.every((u) => c.value(u, v) !== Infinity)) s.push(v);
+  }
+  return s.length === count ? s.sort((a, b) => a - b) : null;
+}
+
 function keyOf(s: number[]): number {
   return s.reduce((sum, x, i) => sum + binomial(x, i + 1), 0);
 }
@@ -222,6 +233,90 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
     expect(taken.checked).toBeGreaterThan(2000);
     expect(taken.finiteHorizon).toBeGreaterThan(500);
     expect(taken.bandAbove).toBeGreaterThan(300);
+  });
+
+  it("sends each coface once when the horizon is raised to +∞ above σ's value and σ's rows are short (worked by hand)", () => {
+    // A column whose horizon was raised to +∞ pushes its chain again for the entries above the old horizon
+    // (bandLow) only. With σ's rows short against n / 2 the dense layout sweeps σ's rows run by run, each
+    // run starting above bandLow: a run started lower holds cofaces that another run sends too.
+    // n = 20; σ = {3, 7} of value 1; v = 5: edges 1 and 3, coface value 3; v = 10: edges 5 and 2, value 5;
+    // v = 9 touches 7 only. Cofaces above bandLow = 2, by the definition (header): {3, 5, 7}, key
+    // C(3, 1) + C(5, 2) + C(7, 3) = 48, one vertex of σ below 5, coefficient −1 = 2 mod 3; {3, 7, 10}, key
+    // 3 + C(7, 2) + C(10, 3) = 144, coefficient +1.
+    const graph = fromEdgeList({
+      n: 20,
+      sources: [3, 3, 5, 3, 7, 7],
+      targets: [7, 5, 7, 10, 10, 9],
+      weights: [1, 1, 3, 5, 2, 4],
+      directed: false,
+    });
+    for (const layout of ["dense", "sparse"] as const) {
+      const model = new CliqueCoboundaries(
+        graph,
+        edgeFiltration(graph, "distance"),
+        4,
+        layout,
+        new ByteLedger(undefined),
+        new WorkMonitor(undefined),
+        new SimplexQuota(undefined, 3),
+      );
+      const got: string[] = [];
+      model.pushCoboundary(1, keyOf([3, 7]), 1, 1, 3, {
+        bandLow: 2,
+        push(fv, key, coef) {
+          if (fv > 2) got.push(`${fv} ${key} ${coef}`);
+        },
+      });
+      expect(got.sort(), layout).toEqual(["3 48 2", "5 144 1"]);
+    }
+  });
+
+  it("sends every coface above a band once on sparse graphs in the dense layout, the horizon unset or finite", () => {
+    // Rows short against n / 2: the band sweeps run by run even when the horizon is +∞ (a column whose
+    // horizon was raised to +∞ and is pushed again above its old horizon), which the dense graphs above
+    // never reach. Simplices are grown as cliques, so that sparse graphs have them.
+    const random = generator(20261203);
+    let checked = 0;
+    for (let g = 0; g < 16; g++) {
+      const n = 30 + Math.floor(random() * 91);
+      const c = randomCase(n, 0.03 + 0.1 * random(), [3, 12, 5000][g % 3], random);
+      const levels = [3, 12, 5000][g % 3];
+      const model = new CliqueCoboundaries(
+        c.graph,
+        edgeFiltration(c.graph, "distance"),
+        5,
+        "dense",
+        new ByteLedger(undefined),
+        new WorkMonitor(undefined),
+        new SimplexQuota(undefined, 4),
+      );
+      for (let t = 0; t < 100; t++) {
+        const count = 2 + (t % 3);
+        const s = growClique(c, count, random);
+        if (s === null) continue;
+        let f = Number.NEGATIVE_INFINITY;
+        for (let a = 0; a < count; a++) for (let b = a + 1; b < count; b++) f = Math.max(f, c.value(s[a], s[b]));
+        const horizon = t % 2 === 0 ? Infinity : Math.ceil(f + random() * (levels + 1));
+        // On an edge value of σ's rows above f half the time: ties at the band's lower end.
+        const low = (random() < 0.5 && rowValueAbove(c, s, f, Infinity, random)) || f + random() * (levels + 1 - f);
+        const band =
+          t % 4 < 2
+            ? { floor: Number.NEGATIVE_INFINITY, bandLow: low, horizon }
+            : { floor: low, bandLow: Number.NEGATIVE_INFINITY, horizon };
+        const expected = expectedEntries(c, s, f, 1, 5, band);
+        const got: string[] = [];
+        model.pushCoboundary(count - 1, keyOf(s), f, 1, 5, {
+          ...(horizon === Infinity ? { floor: band.floor, bandLow: band.bandLow } : band),
+          push(fv, key, coef) {
+            if (fv < band.floor || fv <= band.bandLow || fv > band.horizon) return;
+            got.push(`${fv} ${key} ${coef}`);
+          },
+        });
+        expect(got.sort(), `n=${n}, σ=${s}, f=${f}, band ${JSON.stringify(band)}`).toEqual(expected);
+        checked++;
+      }
+    }
+    expect(checked).toBeGreaterThan(500);
   });
 });
 

@@ -271,6 +271,42 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
     }
   });
 
+  it("keeps edges of the largest finite value in a triangle's cofaces above a band, the horizon unset (worked by hand)", () => {
+    // Weights may be any finite number, Number.MAX_VALUE too; only an absent edge (+∞) is no edge. n = 20,
+    // σ = {2, 5, 9} of value 1 (its three edges 1); bandLow = 1.5, no horizon; σ's rows are short, so the
+    // triangle's band is swept run by run. v = 11: edges 2, MAX, MAX; v = 7: edges 1, 3, MAX. Both cofaces
+    // have value MAX > bandLow. By the definition (header): {2, 5, 7, 9}, key C(2, 1) + C(5, 2) + C(7, 3) +
+    // C(9, 4) = 173, two vertices of σ below 7, coefficient +1; {2, 5, 9, 11}, key 2 + 10 + C(9, 3) +
+    // C(11, 4) = 426, three below 11, coefficient −1 = 2 mod 3.
+    const max = Number.MAX_VALUE;
+    const graph = fromEdgeList({
+      n: 20,
+      sources: [2, 2, 5, 2, 5, 9, 2, 5, 7],
+      targets: [5, 9, 9, 11, 11, 11, 7, 7, 9],
+      weights: [1, 1, 1, 2, max, max, 1, 3, max],
+      directed: false,
+    });
+    for (const layout of ["dense", "sparse"] as const) {
+      const model = new CliqueCoboundaries(
+        graph,
+        edgeFiltration(graph, "distance"),
+        5,
+        layout,
+        new ByteLedger(undefined),
+        new WorkMonitor(undefined),
+        new SimplexQuota(undefined, 4),
+      );
+      const got: string[] = [];
+      model.pushCoboundary(2, keyOf([2, 5, 9]), 1, 1, 3, {
+        bandLow: 1.5,
+        push(fv, key, coef) {
+          if (fv > 1.5) got.push(`${fv} ${key} ${coef}`);
+        },
+      });
+      expect(got.sort(), layout).toEqual([`${max} 173 1`, `${max} 426 2`]);
+    }
+  });
+
   it("sends every coface above a band once on sparse graphs in the dense layout, the horizon unset or finite", () => {
     // Rows short against n / 2: the band sweeps run by run even when the horizon is +∞ (a column whose
     // horizon was raised to +∞ and is pushed again above its old horizon), which the dense graphs above

@@ -315,8 +315,8 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
     let checked = 0;
     for (let g = 0; g < 16; g++) {
       const n = 30 + Math.floor(random() * 91);
-      const c = randomCase(n, 0.03 + 0.1 * random(), [3, 12, 5000][g % 3], random);
       const levels = [3, 12, 5000][g % 3];
+      const c = randomCase(n, 0.03 + 0.1 * random(), levels, random);
       const model = new CliqueCoboundaries(
         c.graph,
         edgeFiltration(c.graph, "distance"),
@@ -331,10 +331,12 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
         const s = growClique(c, count, random);
         if (s === null) continue;
         let f = Number.NEGATIVE_INFINITY;
-        for (let a = 0; a < count; a++) for (let b = a + 1; b < count; b++) f = Math.max(f, c.value(s[a], s[b]));
+        for (let a = 0; a < count; a++)
+          for (let b = a + 1; b < count; b++) f = Math.max(f, c.value(s[a], s[b]));
         const horizon = t % 2 === 0 ? Infinity : Math.ceil(f + random() * (levels + 1));
         // On an edge value of σ's rows above f half the time: ties at the band's lower end.
-        const low = (random() < 0.5 && rowValueAbove(c, s, f, Infinity, random)) || f + random() * (levels + 1 - f);
+        const low =
+          (random() < 0.5 && rowValueAbove(c, s, f, Infinity, random)) || f + random() * (levels + 1 - f);
         const band =
           t % 4 < 2
             ? { floor: Number.NEGATIVE_INFINITY, bandLow: low, horizon }

@@ -124,6 +124,18 @@ describe("textRows: quoted records, their edges and their line numbers", () => {
     expect(error('h,h\n"x\ny"z,1\n')).toBe('t.csv:3:1: unexpected "z" after the closing quote of a cell');
   });
 
+  it("a lone carriage return after a closing quote is text after the quote, not a line break", () => {
+    // RFC 4180 ends records with CRLF; a lone CR (old Mac line endings) is not a line break in an unquoted
+    // record either (it stays in its cell). It used to end a quoted record and count a line it did not
+    // consume, so every later line number was one too high.
+    expect(error('h,h\n"a"\rb,c\n')).toBe('t.csv:2:1: unexpected "\\r" after the closing quote of a cell');
+    expect(error('h,h\n"a"\r')).toBe('t.csv:2:1: unexpected "\\r" after the closing quote of a cell');
+    expect(rows('"a"\r\n"b"\r\n', ",")).toEqual([
+      { line: 1, cells: ["a"] },
+      { line: 2, cells: ["b"] },
+    ]);
+  });
+
   it("a comma between digits with no semicolon on the line is a delimiter", () => {
     expect(detectDelimiter("1,5\n")).toBe(",");
     expect(detectDelimiter("1,5;2,5\n")).toBe(";");

@@ -120,7 +120,9 @@ function readQuotedRecord(
       }
       while (text[pos] === " " || (text[pos] === "\t" && delimiter !== "\t")) pos++;
       const after = text[pos];
-      if (pos < text.length && after !== delimiter && after !== "\n" && after !== "\r") {
+      // A carriage return ends a record only as part of CRLF (RFC 4180); a lone one is text after the quote.
+      const lineBreak = after === "\n" || (after === "\r" && text[pos + 1] === "\n");
+      if (pos < text.length && after !== delimiter && !lineBreak) {
         throw new InputFileError(
           file,
           "bad-quoting",

@@ -25,9 +25,10 @@ export interface PoolOptions<Task, Reply, Setup> {
  * Runs tasks on worker threads running `script` (whose side is serveBatches) and hands each reply to
  * `onReply` in the order replies arrive (the caller puts results in dataset order). Tasks go out in
  * batches, sized so that each worker gets several before the end and the last ones go singly, to even out
- * the finish; answers come back at least every few tens of milliseconds. A worker that dies (a crash, its heap limit) is replaced and the
- * unanswered tasks of its batch are run again one by one, so the one that killed it fails alone; so is a
- * worker whose task runs well past the time limit. One pathological graph cannot end or stall the run.
+ * the finish; answers come back at least every few tens of milliseconds. A worker that dies (a crash, its
+ * heap limit, an exit) is replaced and the unanswered tasks of its batch are run again one by one, so the
+ * one that killed it fails alone; so is a worker whose task runs well past the time limit. One
+ * pathological graph cannot end or stall the run.
  */
 export async function runOnWorkerScript<Task, Reply extends { kind: string }, Setup>(
   script: URL,

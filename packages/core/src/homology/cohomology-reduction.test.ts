@@ -1,6 +1,7 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { seededRandom } from "../../../../test/support/random.js";
 import { randomArcs } from "../../../../test/support/random-arcs.js";
+import { tickingClock } from "../../../../test/support/ticking-clock.js";
 import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
@@ -106,12 +107,7 @@ describe("reduceDimension's progress", () => {
 
   /** Progress reports of "reducing columns" while computing the barcode, with a clock that reports at every check. */
   function reductionProgress(graph: WeightedGraph, maxDim: number): WorkProgress[] {
-    // A clock that moves 1.1 s per reading, so that every check reports (the default interval is 1 s).
-    let clock = 0;
-    vi.spyOn(Date, "now").mockImplementation(() => {
-      clock += 1100;
-      return clock;
-    });
+    tickingClock();
     const seen: WorkProgress[] = [];
     computeBarcode(graph, { semantics: "distance", maxDim, onProgress: (p) => seen.push(p) });
     return seen.filter((p) => p.stage === "reducing columns");
@@ -141,11 +137,7 @@ describe("reduceDimension's progress", () => {
     // reduce, then one per 64 columns and per 64 additions; the bounds below leave a factor 2 (and the
     // upper one far more) so that a retuned stride passes. K_40, distances 1–1000 (test/support/
     // random-arcs.ts, seed 1): C(40, 3) = 9,880 triangle columns, hundreds reduced, a thousand additions.
-    let clock = 0;
-    vi.spyOn(Date, "now").mockImplementation(() => {
-      clock += 1100;
-      return clock;
-    });
+    tickingClock();
     const seen: WorkProgress[] = [];
     const graph = fromEdgeList(randomArcs(40, 1, 1000, 1, false));
     const barcode = computeBarcode(graph, {

@@ -1,5 +1,6 @@
 import { describe, expect, it, vi } from "vitest";
 import { randomArcs } from "../../../../test/support/random-arcs.js";
+import { tickingClock } from "../../../../test/support/ticking-clock.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WorkProgress } from "../work/work-control.js";
 import { bettiAt } from "./betti-at.js";
@@ -64,12 +65,7 @@ describe("stored entries without room", () => {
     // distances 1–1000 (seed 1): more than 64 additions in each dimension, of stored and of other columns.
     const graph = fromEdgeList(randomArcs(40, 1, 1000, 1, false));
     const checks = (maxEntries: number) => {
-      // A clock that moves 1.1 s per reading, so that every check reports (the default interval is 1 s).
-      let clock = 0;
-      const now = vi.spyOn(Date, "now").mockImplementation(() => {
-        clock += 1100;
-        return clock;
-      });
+      const now = tickingClock();
       const seen: WorkProgress[] = [];
       room.maxEntries = maxEntries;
       const barcode = computeBarcode(graph, {

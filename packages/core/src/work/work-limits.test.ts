@@ -1,4 +1,5 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
+import { tickingClock } from "../../../../test/support/ticking-clock.js";
 import { countSimplices } from "../count/count-simplices.js";
 import { SimplexBudgetError } from "../count/simplex-budget-error.js";
 import { sweepSimplexCounts } from "../count/sweep-simplex-counts.js";
@@ -101,12 +102,7 @@ describe("time limits", () => {
 
 describe("progress", () => {
   it("reports each stage with counts that only grow within it, at most once per interval", () => {
-    // A clock that moves 1.1 s per reading: every check passes the 1 s default interval and reports.
-    let clock = 0;
-    vi.spyOn(Date, "now").mockImplementation(() => {
-      clock += 1100;
-      return clock;
-    });
+    tickingClock();
     const seen: WorkProgress[] = [];
     computeBarcode(completeGraph(30), {
       semantics: "distance",

@@ -152,6 +152,31 @@ function keyOf(s: number[]): number {
   return s.reduce((sum, x, i) => sum + binomial(x, i + 1), 0);
 }
 
+/** The model of `graph` read as distances, to maxDim, with no budget. */
+function distanceModel(graph: WeightedGraph, maxDim: number, layout: CliqueLayout): CliqueCoboundaries {
+  return new CliqueCoboundaries(
+    graph,
+    edgeFiltration(graph, "distance"),
+    maxDim,
+    layout,
+    new ByteLedger(undefined),
+    new WorkMonitor(undefined),
+    new SimplexQuota(undefined, maxDim - 1),
+  );
+}
+
+/** The cofaces (value, key, coefficient mod 3) that σ's coboundary sends above `bandLow`, sorted. */
+function cofacesAbove(model: CliqueCoboundaries, s: number[], f: number, bandLow: number): string[] {
+  const got: string[] = [];
+  model.pushCoboundary(s.length - 1, keyOf(s), f, 1, 3, {
+    bandLow,
+    push(fv, key, coef) {
+      if (fv > bandLow) got.push(`${fv} ${key} ${coef}`);
+    },
+  });
+  return got.sort();
+}
+
 describe("CliqueCoboundaries.pushCoboundary against the definition of the coboundary", () => {
   it("sends every coface inside the band once, with its value, key and sign, in both layouts", () => {
     // Sizes from 20 to 140 vertices so that the dense layout takes each of its sweeps: the sorted-prefix
@@ -164,19 +189,7 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
       const p = g % 3 === 0 ? 1 : 0.6 + 0.4 * random();
       const levels = [12, 40, 5000, 5000][g % 4];
       const c = randomCase(n, p, levels, random);
-      const edgeF = edgeFiltration(c.graph, "distance");
-      const models = layouts.map(
-        (layout) =>
-          new CliqueCoboundaries(
-            c.graph,
-            edgeF,
-            5,
-            layout,
-            new ByteLedger(undefined),
-            new WorkMonitor(undefined),
-            new SimplexQuota(undefined, 4),
-          ),
-      );
+      const models = layouts.map((layout) => distanceModel(c.graph, 5, layout));
       let band = { floor: Number.NEGATIVE_INFINITY, bandLow: Number.NEGATIVE_INFINITY, horizon: Infinity };
       let previous: number[] = [];
       for (let t = 0; t < 150; t++) {
@@ -251,23 +264,10 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
       directed: false,
     });
     for (const layout of ["dense", "sparse"] as const) {
-      const model = new CliqueCoboundaries(
-        graph,
-        edgeFiltration(graph, "distance"),
-        4,
-        layout,
-        new ByteLedger(undefined),
-        new WorkMonitor(undefined),
-        new SimplexQuota(undefined, 3),
-      );
-      const got: string[] = [];
-      model.pushCoboundary(1, keyOf([3, 7]), 1, 1, 3, {
-        bandLow: 2,
-        push(fv, key, coef) {
-          if (fv > 2) got.push(`${fv} ${key} ${coef}`);
-        },
-      });
-      expect(got.sort(), layout).toEqual(["3 48 2", "5 144 1"]);
+      expect(cofacesAbove(distanceModel(graph, 4, layout), [3, 7], 1, 2), layout).toEqual([
+        "3 48 2",
+        "5 144 1",
+      ]);
     }
   });
 
@@ -287,23 +287,10 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
       directed: false,
     });
     for (const layout of ["dense", "sparse"] as const) {
-      const model = new CliqueCoboundaries(
-        graph,
-        edgeFiltration(graph, "distance"),
-        5,
-        layout,
-        new ByteLedger(undefined),
-        new WorkMonitor(undefined),
-        new SimplexQuota(undefined, 4),
-      );
-      const got: string[] = [];
-      model.pushCoboundary(2, keyOf([2, 5, 9]), 1, 1, 3, {
-        bandLow: 1.5,
-        push(fv, key, coef) {
-          if (fv > 1.5) got.push(`${fv} ${key} ${coef}`);
-        },
-      });
-      expect(got.sort(), layout).toEqual([`${max} 173 1`, `${max} 426 2`]);
+      expect(cofacesAbove(distanceModel(graph, 5, layout), [2, 5, 9], 1, 1.5), layout).toEqual([
+        `${max} 173 1`,
+        `${max} 426 2`,
+      ]);
     }
   });
 
@@ -317,15 +304,7 @@ describe("CliqueCoboundaries.pushCoboundary against the definition of the coboun
       const n = 30 + Math.floor(random() * 91);
       const levels = [3, 12, 5000][g % 3];
       const c = randomCase(n, 0.03 + 0.1 * random(), levels, random);
-      const model = new CliqueCoboundaries(
-        c.graph,
-        edgeFiltration(c.graph, "distance"),
-        5,
-        "dense",
-        new ByteLedger(undefined),
-        new WorkMonitor(undefined),
-        new SimplexQuota(undefined, 4),
-      );
+      const model = distanceModel(c.graph, 5, "dense");
       for (let t = 0; t < 100; t++) {
         const count = 2 + (t % 3);
         const s = growClique(c, count, random);

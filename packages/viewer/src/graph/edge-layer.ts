@@ -104,11 +104,7 @@ export class EdgeLayer {
 
   /** Ends a move of the viewport: the edges are stroked again at the next frame. */
   private settle(): void {
-    if (this.settleTimer !== null) clearTimeout(this.settleTimer);
-    this.settleTimer = null;
-    if (this.still === null) return;
-    this.still = null;
-    this.invalidate();
+    if (this.still !== null) this.invalidate();
   }
 
   /** Draws the picture taken when the move began where the current viewport puts it. */
@@ -281,12 +277,10 @@ export class EdgeLayer {
   }
 
   private invalidate(): void {
-    // New nodes or a new size: the moving picture no longer matches.
-    if (this.still !== null) {
-      this.still = null;
-      if (this.settleTimer !== null) clearTimeout(this.settleTimer);
-      this.settleTimer = null;
-    }
+    // New nodes, a new size or the end of a move: no moving picture any more.
+    this.still = null;
+    if (this.settleTimer !== null) clearTimeout(this.settleTimer);
+    this.settleTimer = null;
     this.drawn = null;
     this.checkpoints = [];
     this.schedule();

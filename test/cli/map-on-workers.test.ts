@@ -34,6 +34,19 @@ function workerScript(body: string): URL {
   return pathToFileURL(file);
 }
 
+/** The error that mapOnWorkers ends with on tasks 0 … count − 1 and two workers (an Error, or the test fails). */
+async function failureOf(script: URL, count: number): Promise<Error> {
+  const outcome = await mapOnWorkers(
+    script,
+    null,
+    Array.from({ length: count }, (_, i) => i),
+    2,
+    () => {},
+  ).catch((e: unknown) => e);
+  expect(outcome).toBeInstanceOf(Error);
+  return outcome as Error;
+}
+
 describe("mapOnWorkers", () => {
   it("answers every task once, each with the setup its worker was given", async () => {
     const script = workerScript("return { reply: { task, value: task * setup.factor } };");
@@ -64,28 +77,13 @@ describe("mapOnWorkers", () => {
     const script = workerScript(
       'if (task === 37) { const e = new Error("task 37 is out of budget"); e.name = "BudgetError"; throw e; } return { reply: task };',
     );
-    const error = await mapOnWorkers(
-      script,
-      null,
-      Array.from({ length: 100 }, (_, i) => i),
-      2,
-      () => {},
-    ).catch((e: Error) => e);
-    expect(error).toBeInstanceOf(Error);
-    expect((error as Error).name).toBe("BudgetError");
-    expect((error as Error).message).toBe("task 37 is out of budget");
+    const error = await failureOf(script, 100);
+    expect(error.name).toBe("BudgetError");
+    expect(error.message).toBe("task 37 is out of budget");
   });
 
   it("fails the run, naming what happened, when a worker dies on a task", async () => {
     const script = workerScript("if (task === 5) process.exit(3); return { reply: task };");
-    const error = await mapOnWorkers(
-      script,
-      null,
-      Array.from({ length: 20 }, (_, i) => i),
-      2,
-      () => {},
-    ).catch((e: Error) => e);
-    expect(error).toBeInstanceOf(Error);
-    expect((error as Error).message).toBe("worker exited with code 3");
+    expect((await failureOf(script, 20)).message).toBe("worker exited with code 3");
   }, 60_000);
 });

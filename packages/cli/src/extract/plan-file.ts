@@ -6,7 +6,11 @@ import { UsageError } from "../options/graph-options.js";
 import type { ErrorRow } from "./assemble-tables.js";
 import { describeIssues } from "./load-spec.js";
 
-export const PLAN_FORMAT = "cliquescape-shard-plan/1";
+/**
+ * /2: graphs of equal cost are dealt out in the order of a hash of their id, no longer by id (shard-plan.ts),
+ * so shards and a merge of this version would not find the shares a /1 plan's shards computed.
+ */
+export const PLAN_FORMAT = "cliquescape-shard-plan/2";
 
 /**
  * plan.json, written once by `extract --plan` beside spec.json: what every shard and the merge need besides

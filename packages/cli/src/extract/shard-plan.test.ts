@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { seededRandom } from "../../../../test/support/random.js";
-import { estimatedCost, type PlannedGraph, parseShard, partitionGraphs } from "./shard-plan.js";
+import { estimatedCost, idHash, type PlannedGraph, parseShard, partitionGraphs } from "./shard-plan.js";
 
 const loads = (graphs: readonly PlannedGraph[], parts: number[][]) =>
   parts.map((part) => part.reduce((sum, i) => sum + graphs[i].cost, 0));
@@ -94,9 +94,46 @@ describe("partitionGraphs", () => {
     expect(sizes.reduce((a, b) => a + b, 0)).toBe(37);
   });
 
+  it("equal costs: a dataset whose rows alternate between kinds gives each shard a mix, not one kind", () => {
+    // Rows as a study lists them (each subject's runs in turn). Dealt out in id order, shard 0 of 2 got every
+    // "rest" graph and shard 1 every "task" graph (and with 3 kinds and 3 shards, one kind each); when the
+    // kinds differ in cost, one shard then runs far longer. In a random share of n = 500 of the N graphs, the
+    // count of a kind with K = 500 graphs is hypergeometric: mean nK/N, variance n(K/N)(1 − K/N)(N − n)/(N − 1)
+    // (common practice; 7.9² for two shards, 8.6² for three). The bound is 5 standard deviations.
+    const kinds = ["rest", "task", "memory"];
+    for (const k of [2, 3]) {
+      const graphs = Array.from({ length: 500 * k }, (_, i) => ({
+        id: `sub-${String(Math.floor(i / k)).padStart(3, "0")}_${kinds[i % k]}`,
+        cost: 4087975,
+      }));
+      const parts = partitionGraphs(graphs, k);
+      const N = 500 * k;
+      const expected = (500 * 500) / N;
+      const spread = 5 * Math.sqrt(((500 * 500) / N) * (1 - 500 / N) * ((N - 500) / (N - 1)));
+      for (const part of parts) {
+        expect(part.length).toBe(500);
+        for (const kind of kinds.slice(0, k)) {
+          const count = part.filter((i) => graphs[i].id.endsWith(kind)).length;
+          expect(Math.abs(count - expected)).toBeLessThan(spread);
+        }
+      }
+    }
+  });
+
   it("refuses a shard count that is not a positive integer", () => {
     expect(() => partitionGraphs([], 0)).toThrow(/positive integer/);
     expect(() => partitionGraphs([], 1.5)).toThrow(/positive integer/);
+  });
+});
+
+describe("idHash", () => {
+  it("is 32-bit FNV-1a: the reference's test vectors", () => {
+    // FNV-1a, 32 bits: offset basis 2166136261, prime 16777619 (Fowler, Noll, Vo; IETF
+    // draft-eastlake-fnv). Vectors recalled from memory of the FNV reference test suite: "" → 0x811c9dc5,
+    // "a" → 0xe40c292c, "foobar" → 0xbf9cf968.
+    expect(idHash("")).toBe(0x811c9dc5);
+    expect(idHash("a")).toBe(0xe40c292c);
+    expect(idHash("foobar")).toBe(0xbf9cf968);
   });
 });
 

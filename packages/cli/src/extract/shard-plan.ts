@@ -38,18 +38,22 @@ export function estimatedCost(
 
 /**
  * Greedy longest-processing-time partition (Graham, "Bounds on multiprocessing timing anomalies", SIAM J.
- * Appl. Math. 17, 1969: within 4/3 − 1/(3N) of the best makespan): graphs by decreasing cost, ties by id
- * then dataset position, each to the shard with the least cost so far (ties: the lowest shard number).
- * Returns, per shard, the dataset positions of its graphs in dataset order. Every graph is in exactly one
- * shard; the result depends only on the costs, the ids and N.
+ * Appl. Math. 17, 1969: within 4/3 − 1/(3N) of the best makespan): graphs by decreasing cost, each to the
+ * shard with the least cost so far (ties: the lowest shard number). Graphs of equal estimated cost are
+ * taken in the order of a hash of their id (then by id, then dataset position): in id order they would be
+ * dealt out in turn, and a dataset listed as subject 1 rest, subject 1 task, subject 2 rest, … gave every
+ * "rest" graph to one of two shards. Returns, per shard, the dataset positions of its graphs in dataset
+ * order. Every graph is in exactly one shard; the result depends only on the costs, the ids and N.
  */
 export function partitionGraphs(graphs: readonly PlannedGraph[], shards: number): number[][] {
   if (!Number.isInteger(shards) || shards < 1)
     throw new RangeError(`shard count ${shards}: not a positive integer`);
   const order = graphs.map((_, i) => i);
+  const mixed = Uint32Array.from(graphs, (g) => idHash(g.id));
   order.sort((a, b) => {
     const byCost = graphs[b].cost - graphs[a].cost;
     if (byCost !== 0) return byCost;
+    if (mixed[a] !== mixed[b]) return mixed[a] - mixed[b];
     const x = graphs[a].id;
     const y = graphs[b].id;
     return x < y ? -1 : x > y ? 1 : a - b;
@@ -60,6 +64,17 @@ export function partitionGraphs(graphs: readonly PlannedGraph[], shards: number)
   const parts: number[][] = Array.from({ length: shards }, () => []);
   for (let i = 0; i < graphs.length; i++) parts[owner[i]].push(i);
   return parts;
+}
+
+/**
+ * 32-bit FNV-1a of the id's UTF-16 code units (Fowler, Noll, Vo; the parameters of the FNV reference,
+ * IETF draft-eastlake-fnv): ids that differ in one character land far apart, so the order it gives has no
+ * period a dataset's layout could share.
+ */
+export function idHash(id: string): number {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < id.length; i++) h = Math.imul(h ^ id.charCodeAt(i), 0x01000193);
+  return h >>> 0;
 }
 
 /** The shards' loads in a binary min-heap ordered by (load, shard number), so N may be large. */

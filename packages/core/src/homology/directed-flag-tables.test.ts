@@ -271,6 +271,19 @@ describe("DirectedFlagTables", () => {
     expect(stageAt(256 * 12 - 1)).toBe("listing directed 0-simplices");
     expect(() => build(graph, top, undefined, ledger.held)).not.toThrow();
   });
+
+  it("charges what the links keep for tables of a few simplices too (worked by hand)", () => {
+    // The path 0 → 1 → 2 → 3, dimensions 0 … 3: 4 vertices, 3 arcs, no 2- or 3-simplex. The link of
+    // dimension 1 keeps the arcs' facets (3 × 2 × 4 = 24 bytes), the vertices' row starts (5 × 4 = 20) and
+    // their rows (6 entries × 5 bytes = 30); the links of dimensions 2 and 3 keep only row starts, over the 3
+    // arcs (4 × 4 = 16) and over no 2-simplex (1 × 4 = 4): 94 bytes. The listing holds 256 entries a
+    // dimension (TupleTableBuilder's first size, 8 bytes a value and 4 a vertex): 256 × (12 + 16 + 20 + 24).
+    // None of it is given back while the tables are built, so the ledger must hold both.
+    const path: Arcs = { n: 4, sources: [0, 1, 2], targets: [1, 2, 3], weights: [1, 2, 3] };
+    const ledger = new ByteLedger(undefined);
+    expect(buildWith(ledger, graphOf(path), 3).counts()).toEqual([4, 3, 0, 0]);
+    expect(ledger.held - 256 * (12 + 16 + 20 + 24)).toBeGreaterThanOrEqual(94);
+  });
 });
 
 describe("the clock while the tables are built", () => {

@@ -1,10 +1,11 @@
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { explicitGrid } from "../filtration/threshold-grid.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import { bettiAt } from "./betti-at.js";
 import { bettiCurves, bettiFromBarcode } from "./betti-curves.js";
+import { CliqueCoboundaries } from "./clique-coboundaries.js";
 import { computeBarcode } from "./compute-barcode.js";
-import { HomologyBudgetError } from "./homology-budget.js";
+import { ByteLedger, HomologyBudgetError } from "./homology-budget.js";
 
 function graph(n: number, edges: [number, number, number][], directed = false) {
   return fromEdgeList({
@@ -177,6 +178,52 @@ describe("stored reduced entries under a tight memory budget", () => {
     }
     expect(finished).toBeGreaterThan(0);
     expect(stopped).toBeGreaterThan(0);
+  });
+});
+
+describe("the simplex lists in the ledger", () => {
+  it("gives each dimension's list back as soon as no later dimension needs it (K_10 to H4)", () => {
+    // The clique model builds the list of dimension d + 1 from the list of dimension d (CliqueCoboundaries
+    // .listSimplices), and the reduction of d + 1 reads only its own list: once d + 1 is listed, the list of
+    // d − 1 is needed by no later dimension (CoboundaryModel.releaseSimplices: its memory goes back to the
+    // budget). So when a list is built the ledger may hold the one it is built from and no other. Lists
+    // are seen where they are charged (the stage "listing the d-simplices") and given back
+    // (releaseSimplices of a list held).
+    const edges: [number, number, number][] = [];
+    for (let u = 0; u < 10; u++)
+      for (let v = u + 1; v < 10; v++) edges.push([u, v, 1 + ((u * 7 + v * 13) % 41)]);
+    const held = new Set<number>();
+    const heldWhenBuilt: number[][] = [];
+    const reserve = ByteLedger.prototype.reserve;
+    const reserveSpy = vi.spyOn(ByteLedger.prototype, "reserve").mockImplementation(function (
+      this: ByteLedger,
+      bytes: number,
+      stage: string,
+    ) {
+      const listing = /^listing the (\d+)-simplices$/.exec(stage);
+      if (listing !== null && !held.has(Number(listing[1]))) {
+        heldWhenBuilt.push([Number(listing[1]), ...[...held].sort((a, b) => a - b)]);
+        held.add(Number(listing[1]));
+      }
+      reserve.call(this, bytes, stage);
+    });
+    const release = CliqueCoboundaries.prototype.releaseSimplices;
+    const releaseSpy = vi
+      .spyOn(CliqueCoboundaries.prototype, "releaseSimplices")
+      .mockImplementation(function (this: CliqueCoboundaries, dim: number) {
+        held.delete(dim);
+        release.call(this, dim);
+      });
+    try {
+      const barcode = computeBarcode(graph(10, edges), { semantics: "distance", maxDim: 4 });
+      expect(barcode.stats.simplices).toEqual([10, 45, 120, 210, 252]);
+    } finally {
+      reserveSpy.mockRestore();
+      releaseSpy.mockRestore();
+    }
+    // [list built, lists held then]: the edges (for union–find, then dimension 1), each higher list next to
+    // the one below only.
+    expect(heldWhenBuilt).toEqual([[1], [2, 1], [3, 2], [4, 3]]);
   });
 });
 

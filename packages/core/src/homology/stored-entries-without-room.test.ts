@@ -5,7 +5,9 @@ import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WorkProgress } from "../work/work-control.js";
 import { bettiAt } from "./betti-at.js";
 import { bettiFromBarcode } from "./betti-curves.js";
+import { ChainBuilder } from "./chain-builder.js";
 import { CliqueCoboundaries } from "./clique-coboundaries.js";
+import { ColumnStore } from "./column-store.js";
 import { computeBarcode } from "./compute-barcode.js";
 
 /**
@@ -28,6 +30,83 @@ vi.mock("./reduced-entries.js", async (original) => {
   }
   return { ...module, ReducedEntries: LimitedEntries };
 });
+
+/**
+ * What the working column's chain (ChainBuilder) goes through in a run: columns started (`clear`),
+ * compactions with the chain's length before and after, the length after each entry appended (not while a
+ * tally is open, when entries go to its table), and the chains columns keep (`ColumnStore.setChain`: a
+ * compaction followed at once by one is the kept chain's, made whatever its length).
+ */
+type ChainEvent =
+  | { kind: "clear" }
+  | { kind: "compact"; before: number; after: number }
+  | { kind: "push"; size: number }
+  | { kind: "keep"; size: number };
+
+function chainEvents(run: () => void): ChainEvent[] {
+  const events: ChainEvent[] = [];
+  const builder = ChainBuilder.prototype;
+  const { clear, compact, push } = builder;
+  const setChain = ColumnStore.prototype.setChain;
+  const spies = [
+    vi.spyOn(builder, "clear").mockImplementation(function (this: ChainBuilder) {
+      clear.call(this);
+      events.push({ kind: "clear" });
+    }),
+    vi.spyOn(builder, "compact").mockImplementation(function (this: ChainBuilder, p: number) {
+      const before = this.size;
+      compact.call(this, p);
+      events.push({ kind: "compact", before, after: this.size });
+    }),
+    vi.spyOn(builder, "push").mockImplementation(function (
+      this: ChainBuilder,
+      key: number,
+      f: number,
+      coef: number,
+    ) {
+      push.call(this, key, f, coef);
+      if (!(this as unknown as { tallying: boolean }).tallying)
+        events.push({ kind: "push", size: this.size });
+    }),
+    vi.spyOn(ColumnStore.prototype, "setChain").mockImplementation(function (
+      this: ColumnStore,
+      ...args: Parameters<ColumnStore["setChain"]>
+    ) {
+      events.push({ kind: "keep", size: args[4] });
+      setChain.apply(this, args);
+    }),
+  ];
+  try {
+    run();
+  } finally {
+    for (const spy of spies) spy.mockRestore();
+  }
+  return events;
+}
+
+/**
+ * The contract of the chain's compaction in cohomology-reduction.ts: a working column's chain is compacted
+ * (sorted, equal simplices summed) only once it is longer than its threshold — 1,024 entries, or twice its
+ * length after its last compaction if that is more — so that each entry pushed costs O(1) compaction work
+ * amortised; and it is checked after every addition of a column's chain, so that it never holds more than
+ * its threshold and about one added chain. Walks the events column by column: each compaction not followed
+ * by a kept chain with its length before, and each length reached, with the threshold then.
+ */
+function compactionsAndLengths(events: ChainEvent[]) {
+  const compactions: { before: number; threshold: number }[] = [];
+  const lengths: { size: number; threshold: number }[] = [];
+  let threshold = 1024;
+  events.forEach((event, i) => {
+    if (event.kind === "clear") threshold = 1024;
+    else if (event.kind === "push") lengths.push({ size: event.size, threshold });
+    else if (event.kind === "compact" && events[i + 1]?.kind !== "keep") {
+      compactions.push({ before: event.before, threshold });
+      threshold = Math.max(1024, 2 * event.after);
+    }
+  });
+  const longestKept = Math.max(...events.map((event) => (event.kind === "keep" ? event.size : 0)));
+  return { compactions, lengths, longestKept };
+}
 
 describe("stored entries without room", () => {
   // Complete graphs of 64 vertices, distances 1–1000 (test/support/random-arcs.ts). With room for 4,000
@@ -130,6 +209,40 @@ describe("stored entries without room", () => {
     room.maxEntries = Number.POSITIVE_INFINITY;
     expect(tight.stats.storedColumns).toEqual([0, 0, 0]);
     expect(tight.stats.columnAdditions[2]).toBeGreaterThan(10_000);
+  });
+
+  describe("the working column's chain, with no room for entries (K_64, distances 1–1000, seed 3)", () => {
+    // Without stored entries every addition appends the added column's chain to the working column's, so
+    // chains grow past 1,024 entries and are compacted on the way (at main 073d58c: 15 compactions before a
+    // column's end, chains of up to 1,281 entries, the longest kept 586). Same bars either way.
+    const graph = fromEdgeList(randomArcs(64, 1, 1000, 3, false));
+    const traced = () => {
+      room.maxEntries = 0;
+      let stored: number[] = [];
+      const events = chainEvents(() => {
+        stored = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2 }).stats.storedColumns;
+      });
+      room.maxEntries = Number.POSITIVE_INFINITY;
+      expect(stored).toEqual([0, 0, 0]);
+      return compactionsAndLengths(events);
+    };
+
+    it("compacts a chain only once it is past 1,024 entries and twice its length after its last compaction", () => {
+      const { compactions } = traced();
+      expect(compactions.length).toBeGreaterThan(0);
+      const early = compactions.filter((c) => c.before <= c.threshold);
+      expect(early, "compactions at or below the threshold").toEqual([]);
+    });
+
+    it("compacts it before it grows past its threshold by more than one added chain", () => {
+      // After each addition of a column's chain the chain is compacted if it is past its threshold, so it
+      // exceeds the threshold by at most the chain just added (at most the longest chain a column keeps)
+      // and the single entries of apparent pairs added since (measured: at most 257 past the threshold).
+      const { lengths, longestKept } = traced();
+      expect(Math.max(...lengths.map((l) => l.size))).toBeGreaterThan(1024);
+      const over = lengths.filter((l) => l.size > l.threshold + longestKept);
+      expect(over.length, `lengths past threshold + ${longestKept}`).toBe(0);
+    });
   });
 
   it("an extension without room for the entries of its first value pushes the chain band by band instead (ties, Z/3)", () => {

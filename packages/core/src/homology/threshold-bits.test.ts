@@ -102,6 +102,43 @@ describe("ThresholdBits", () => {
     expect(members(bits, bits.row(bits.use(0), 0), n)).toEqual([]);
   });
 
+  it("hands out stamps that its Int32Array stamps hold exactly across the wrap after 2^31 − 1 thresholds (white-box)", () => {
+    // A set is current when its stamp equals its slot's (Int32Array), and each new threshold takes the next
+    // stamp, so a stamp must never be handed out again while an old set may still hold it. The counter
+    // counts new thresholds; after 2^31 − 1 of them it restarts with every stamp cleared. Were it to run on,
+    // the stored stamps would go negative and, 2^32 thresholds from the start, repeat ones still held (0,
+    // a set never built, first): a stale set read as current. From the state set here that is 2^31 + 5 more
+    // thresholds, about 30 s of calls (measured at 13–15 ns a call), so this test puts the counter 4 short of
+    // the wrap (through a cast) and checks, across the wrap, that each slot's stamp is the counter itself
+    // and every set asked for equals the direct filter.
+    const n = 45;
+    const { m, order, sorted } = rows(n, 9, generator(31));
+    const bits = new ThresholdBits(n, order, sorted, new ByteLedger(undefined));
+    const inside = bits as unknown as { stamp: number; slotStamp: Int32Array };
+    const check = (t: number, vertices: number[]) => {
+      const slot = bits.use(t);
+      expect(inside.slotStamp[slot], `the stamp of threshold ${t}'s slot`).toBe(inside.stamp);
+      for (const u of vertices) {
+        const expected = [];
+        for (let v = 0; v < n; v++) if (m[u * n + v] <= t) expected.push(v);
+        expect(members(bits, bits.row(slot, u), n), `t=${t}, u=${u}`).toEqual(expected);
+      }
+      return inside.stamp;
+    };
+    const all = Array.from({ length: n }, (_, u) => u);
+    const even = all.filter((u) => u % 2 === 0);
+    // Stamps 1–4 in the four slots, every set built.
+    expect([-2, 0, 2, 4].map((t) => check(t, all))).toEqual([1, 2, 3, 4]);
+    // As after 2^31 − 5 thresholds: the four slots pass to new thresholds (only the even vertices' sets
+    // built again), then the counter wraps, and the first slot comes back with stamp 1, which its odd
+    // vertices' sets still hold from threshold −2 unless the wrap cleared them.
+    inside.stamp = 0x7fffffff - 4;
+    expect([-3, -1, 1, 3].map((t) => check(t, even))).toEqual([
+      0x7ffffffc, 0x7ffffffd, 0x7ffffffe, 0x7fffffff,
+    ]);
+    expect([5, -4, 1e300, 0.5, -2].map((t) => check(t, all))).toEqual([1, 2, 3, 4, 5]);
+  });
+
   it("charges its sets and stamps to the budget, naming the stage", () => {
     const { order, sorted } = rows(70, 5, generator(9));
     const ledger = new ByteLedger(undefined);

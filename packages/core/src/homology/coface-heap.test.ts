@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { seededRandom } from "../../../../test/support/random.js";
 import { CofaceHeap } from "./coface-heap.js";
 import { ByteLedger, HomologyBudgetError } from "./homology-budget.js";
 
@@ -19,6 +20,46 @@ describe("CofaceHeap", () => {
       heap.pop();
     }
     expect(popped).toEqual(entries);
+  });
+
+  it("keeps (f, key) order under pushes and pops interleaved at random (a sorted list as reference)", () => {
+    // A heap must give the least entry after any sequence of operations, not only after pushing all first
+    // (common practice); filling then emptying leaves whole regions of the four-ary tree untried.
+    const random = seededRandom(2024);
+    for (let round = 0; round < 10; round++) {
+      const heap = new CofaceHeap(new ByteLedger(undefined), 4);
+      const sorted: number[] = []; // f * 10,000 + key, ascending
+      for (let step = 0; step < 3000; step++) {
+        if (sorted.length === 0 || random() < 0.55) {
+          const f = Math.floor(random() * 1000);
+          const key = Math.floor(random() * 10000);
+          heap.push(f, key, 1);
+          const packed = f * 10000 + key;
+          let at = sorted.length;
+          while (at > 0 && sorted[at - 1] > packed) at--;
+          sorted.splice(at, 0, packed);
+        } else {
+          const least = sorted.shift() as number;
+          expect([heap.f[0], heap.key[0]], `round ${round}, step ${step}`).toEqual([
+            Math.floor(least / 10000),
+            least % 10000,
+          ]);
+          heap.pop();
+        }
+        expect(heap.size).toBe(sorted.length);
+      }
+    }
+  });
+
+  it("is empty after clear(), and pops only what is pushed after it", () => {
+    const heap = new CofaceHeap(new ByteLedger(undefined), 4);
+    for (let i = 0; i < 10; i++) heap.push(i, i, 1);
+    heap.clear();
+    expect(heap.size).toBe(0);
+    heap.push(5, 50, 2);
+    heap.push(3, 30, 1);
+    expect([heap.f[0], heap.key[0], heap.popMerged()]).toEqual([3, 30, 1]);
+    expect([heap.f[0], heap.key[0], heap.popMerged(), heap.size]).toEqual([5, 50, 2, 0]);
   });
 
   it("sums the copies of the top key", () => {

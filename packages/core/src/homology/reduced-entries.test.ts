@@ -152,4 +152,26 @@ describe("ReducedEntries", () => {
       /storing reduced entries/,
     );
   });
+
+  it("names it too when the segments' table cannot grow", () => {
+    // Room for the first 256 segments and for the entries (a quarter of the budget is 383 of them), not
+    // for doubling the segments' table (256 × 12 bytes more): the 257th extension must fail with the stage.
+    const ledger = new ByteLedger({ maxBytes: START + 1000 });
+    const store = new ReducedEntries(ledger);
+    store.reserveEntries(1);
+    store.append(1, 1, 1);
+    store.close(0, 0, 1);
+    const more = new ReducedEntries(new ByteLedger(undefined));
+    more.reserveEntries(1);
+    more.append(2, 2, 1);
+    for (let s = 0; s < 256; s++) expect(store.extend(0, more, 2)).toBe(s);
+    let error: unknown;
+    try {
+      store.extend(0, more, 2);
+    } catch (e) {
+      error = e;
+    }
+    expect(error).toBeInstanceOf(HomologyBudgetError);
+    expect((error as HomologyBudgetError).stage).toBe("storing reduced entries");
+  });
 });

@@ -118,6 +118,12 @@ describe("parseNpy: errors", () => {
     expect(failure(whole.subarray(0, whole.length - 1)).message).toBe(
       "a.npy: byte 159: file is truncated: shape (2, 2) of <f8 needs 32 bytes of data after byte 128, but only 31 are there",
     );
+    // One dimension is written as Python writes a 1-tuple, as in the header (numpy.lib.format writes
+    // 'shape': (3,)), and as the header errors quote it.
+    const vector = encodeNpy([1, 2, 3], [3]);
+    expect(failure(vector.subarray(0, vector.length - 8)).reason).toBe(
+      "file is truncated: shape (3,) of <f8 needs 24 bytes of data after byte 128, but only 16 are there",
+    );
   });
 
   it("refuses a forged huge shape before allocating anything", () => {

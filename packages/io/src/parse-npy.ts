@@ -45,7 +45,7 @@ export function parseNpy(bytes: Uint8Array, file: string): NpyArray {
     throw new InputFileError(
       file,
       "truncated",
-      `file is truncated: shape (${header.shape.join(", ")}) of ${header.dtype.descr} needs ${header.dataBytes} bytes of data after ` +
+      `file is truncated: shape ${tupleText(header.shape)} of ${header.dtype.descr} needs ${header.dataBytes} bytes of data after ` +
         `byte ${header.dataOffset}, but only ${available} are there`,
       { byteOffset: bytes.length },
     );
@@ -157,7 +157,7 @@ export function parseNpyHeader(bytes: Uint8Array, file: string): NpyHeader {
   if (typeof fortranOrder !== "boolean")
     fail("bad-npy", "header has no 'fortran_order' True/False", headerStart);
   if (!Array.isArray(shape)) return fail("bad-npy", "header 'shape' is not a tuple", headerStart);
-  const shapeText = `(${shape.map(String).join(", ")}${shape.length === 1 ? "," : ""})`;
+  const shapeText = tupleText(shape);
   if (shape.some((d) => typeof d === "bigint" && d > 0n)) {
     fail(
       "too-large",
@@ -189,6 +189,11 @@ export function parseNpyHeader(bytes: Uint8Array, file: string): NpyHeader {
     dataOffset,
     dataBytes: elements * dtype.size,
   };
+}
+
+/** A shape as Python writes a tuple, as the header does: "(3,)" for one dimension, "()" for none. */
+function tupleText(shape: readonly unknown[]): string {
+  return `(${shape.map(String).join(", ")}${shape.length === 1 ? "," : ""})`;
 }
 
 /** Element strides per axis: how many elements apart neighbours along each axis lie, in C or Fortran order. */

@@ -55,3 +55,70 @@ describe("persistence images (Adams et al. 2017)", () => {
     expect(image[0 * 2 + 0]).toBeCloseTo(q * q, 14);
   });
 });
+
+describe("persistence images: the grid's far edges are the ranges' ends", () => {
+  // Adams et al. (2017), Section 4: the pixels split the ranges [b0, b1] × [p0, p1]. A Gaussian centred on
+  // a pixel's edge keeps half its mass on each side, however small σ (worked by hand), so a point at
+  // (b1, p1) puts 1/2 × 1/2 in the last pixel. With [0.1, 1] split in 3, 0.1 + 3 × 0.3 is
+  // 0.9999999999999999 in floating point: the last edge must be the range's end itself, not a sum of
+  // widths. σ = 1e-320 (subnormal) makes the normal masses of the other pixels erf(±∞) differences.
+  it("a point on the ranges' ends keeps a quarter of its mass in the last pixel", () => {
+    const image = persistenceImage([1], [2], {
+      birthRange: [0.1, 1],
+      persistenceRange: [0.1, 1],
+      resolution: [3, 3],
+      sigma: 1e-320,
+      weighting: "none",
+    });
+    expect(Array.from(image)).toEqual([0, 0, 0, 0, 0, 0, 0, 0, 0.25]);
+  });
+});
+
+describe("persistence images: the options are checked", () => {
+  const options = {
+    birthRange: [0, 1],
+    persistenceRange: [0, 1],
+    resolution: [2, 2],
+    sigma: 0.5,
+    weighting: "none",
+  } as const;
+  const image = (change: object) => () => persistenceImage([0], [1], { ...options, ...change });
+
+  it("accepts one pixel along either axis", () => {
+    expect(image({ resolution: [1, 3] })()).toHaveLength(3);
+    expect(image({ resolution: [3, 1] })()).toHaveLength(3);
+    expect(image({ resolution: [1, 1] })()).toHaveLength(1);
+  });
+
+  it("refuses pixel counts below 1 or not integers, naming them", () => {
+    for (const [nb, np] of [
+      [0, 3],
+      [3, 0],
+      [-1, 3],
+      [1.5, 3],
+      [3, 1.5],
+      [Number.NaN, 3],
+    ])
+      expect(image({ resolution: [nb, np] }), `${nb} × ${np}`).toThrow(
+        new RangeError(`resolution must be two integers ≥ 1, got ${nb} × ${np}`),
+      );
+  });
+
+  it("refuses empty or reversed pixel ranges along either axis", () => {
+    for (const change of [
+      { birthRange: [1, 1] },
+      { birthRange: [1, 0] },
+      { persistenceRange: [2, 2] },
+      { persistenceRange: [2, 1] },
+    ])
+      expect(image(change), JSON.stringify(change)).toThrow(
+        new RangeError("pixel ranges must be increasing"),
+      );
+  });
+
+  it("refuses a deviation that is not positive and finite, naming it", () => {
+    for (const sigma of [0, -1, Number.POSITIVE_INFINITY, Number.NaN])
+      expect(image({ sigma }), `${sigma}`).toThrow(new RangeError(`sigma must be positive, got ${sigma}`));
+    expect(image({ sigma: Number.MIN_VALUE })()).toHaveLength(4);
+  });
+});

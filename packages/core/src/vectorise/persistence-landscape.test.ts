@@ -28,7 +28,11 @@ describe("persistence landscapes (Bubenik 2015, Definition 3)", () => {
     expect(Array.from(out.subarray(2 * T))).toEqual(new Array(T).fill(0));
   });
 
-  it("refuses a layer count below 1", () => {
-    expect(() => persistenceLandscape([0], [1], 0, [0])).toThrow(/layers/);
+  it("one layer is λ1 alone; a layer count below 1 or not an integer is refused", () => {
+    // λ1 of the two bars above: the upper envelope of the tents, worked by hand.
+    const out = persistenceLandscape([0, 2], [6, 8], 1, samples);
+    expect(Array.from(out)).toEqual([0, 1, 2, 3, 2, 3, 2, 1, 0]);
+    expect(() => persistenceLandscape([0], [1], 0, [0])).toThrow("layers must be an integer ≥ 1, got 0");
+    expect(() => persistenceLandscape([0], [1], 1.5, [0])).toThrow("layers must be an integer ≥ 1, got 1.5");
   });
 });

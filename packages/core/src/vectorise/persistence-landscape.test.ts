@@ -28,6 +28,12 @@ describe("persistence landscapes (Bubenik 2015, Definition 3)", () => {
     expect(Array.from(out.subarray(2 * T))).toEqual(new Array(T).fill(0));
   });
 
+  it("every layer is right at the first sample too, where both bars are alive", () => {
+    // The bars above sampled at t = 3, 4, 5 only (f1 = 3 2 1, f2 = 1 2 3): λ2(3) = 1 is not 0.
+    const out = persistenceLandscape([0, 2], [6, 8], 2, [3, 4, 5]);
+    expect(Array.from(out)).toEqual([3, 2, 3, 1, 2, 1]);
+  });
+
   it("one layer is λ1 alone; a layer count below 1 or not an integer is refused", () => {
     // λ1 of the two bars above: the upper envelope of the tents, worked by hand.
     const out = persistenceLandscape([0, 2], [6, 8], 1, samples);

@@ -116,6 +116,37 @@ describe("persistence images: the options are checked", () => {
       );
   });
 
+  it("refuses ranges whose width is not finite: their pixels would have no edges (0 × ∞ is NaN)", () => {
+    for (const [birthRange, persistenceRange] of [
+      [
+        [0, Number.POSITIVE_INFINITY],
+        [0, 1],
+      ],
+      [
+        [Number.NEGATIVE_INFINITY, 0],
+        [0, 1],
+      ],
+      [
+        [0, 1],
+        [0, Number.POSITIVE_INFINITY],
+      ],
+      [
+        [-1e308, 1e308],
+        [0, 1],
+      ], // both ends finite, the width 2e308 is not
+      [
+        [0, 1],
+        [-1e308, 1e308],
+      ],
+    ])
+      expect(image({ birthRange, persistenceRange }), `${birthRange} × ${persistenceRange}`).toThrow(
+        new RangeError(
+          `pixel ranges must have finite widths, got [${birthRange[0]}, ${birthRange[1]}] × [${persistenceRange[0]}, ${persistenceRange[1]}]`,
+        ),
+      );
+    expect(image({ birthRange: [-1e307, 1e307], persistenceRange: [-1e307, 1e307] })()).toHaveLength(4);
+  });
+
   it("refuses a deviation that is not positive and finite, naming it", () => {
     for (const sigma of [0, -1, Number.POSITIVE_INFINITY, Number.NaN])
       expect(image({ sigma }), `${sigma}`).toThrow(new RangeError(`sigma must be positive, got ${sigma}`));

@@ -38,6 +38,9 @@ export function persistenceImage(
   if (!(Number.isInteger(nb) && Number.isInteger(np) && nb >= 1 && np >= 1))
     throw new RangeError(`resolution must be two integers ≥ 1, got ${nb} × ${np}`);
   if (!(b1 > b0 && p1 > p0)) throw new RangeError("pixel ranges must be increasing");
+  // An infinite width (an infinite end, or finite ends 2e308 apart) makes every pixel edge NaN (0 × ∞).
+  if (!(Number.isFinite(b1 - b0) && Number.isFinite(p1 - p0)))
+    throw new RangeError(`pixel ranges must have finite widths, got [${b0}, ${b1}] × [${p0}, ${p1}]`);
   if (!(sigma > 0 && Number.isFinite(sigma))) throw new RangeError(`sigma must be positive, got ${sigma}`);
   const rampEnd = options.rampEnd ?? p1;
   const image = new Float64Array(nb * np);

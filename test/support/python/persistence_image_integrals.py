@@ -1,7 +1,7 @@
 """Persistence image pixels as integrals of the persistence surface, for
 test/reference/vectorise-image-scipy.test.ts.
 
-H. Adams et al., "Persistence images: a stable vector representation of persistent homology", JMLR 18
+"Persistence images: a stable vector representation of persistent homology", JMLR 18
 (2017), Section 4: each point (b, d) goes to (b, p = d - b); the surface is the sum of w(p) times the
 normal density of deviation sigma centred there; a pixel holds the surface's integral over its square.
 Here every pixel is integrated in two dimensions by scipy.integrate.dblquad, without using that the

@@ -57,11 +57,12 @@ describe("persistence images (Adams et al. 2017)", () => {
 });
 
 describe("persistence images: the grid's far edges are the ranges' ends", () => {
-  // Adams et al. (2017), Section 4: the pixels split the ranges [b0, b1] × [p0, p1]. A Gaussian centred on
-  // a pixel's edge keeps half its mass on each side, however small σ (worked by hand), so a point at
-  // (b1, p1) puts 1/2 × 1/2 in the last pixel. With [0.1, 1] split in 3, 0.1 + 3 × 0.3 is
-  // 0.9999999999999999 in floating point: the last edge must be the range's end itself, not a sum of
-  // widths. σ = 1e-320 (subnormal) makes the normal masses of the other pixels erf(±∞) differences.
+  // "Persistence images: a stable vector representation of persistent homology" (JMLR 18, 2017),
+  // Section 4: the pixels split the ranges [b0, b1] × [p0, p1]. A Gaussian centred on a pixel's edge keeps
+  // half its mass on each side, however small σ (worked by hand), so a point at (b1, p1) puts 1/2 × 1/2 in
+  // the last pixel. With [0.1, 1] split in 3, 0.1 + 3 × 0.3 is 0.9999999999999999 in floating point: the
+  // last edge must be the range's end itself, not a sum of widths. σ = 1e-320 (subnormal) makes the normal
+  // masses of the other pixels erf(±∞) differences.
   it("a point on the ranges' ends keeps a quarter of its mass in the last pixel", () => {
     const image = persistenceImage([1], [2], {
       birthRange: [0.1, 1],

@@ -21,12 +21,21 @@ suite(`erf equals Python's math.erf${missing ? ` (skipped: ${missing})` : ""}`, 
     });
   });
 
-  it("at the ends: erf(±∞) = ±1 and erf(0) = +0, as math.erf gives them", () => {
-    // JSON has no infinities: Python reads the strings with float().
-    const [plus, minus, zero] = runPythonScript<number[]>("erf_values.py", ["inf", "-inf", 0]);
+  it("at the ends: erf(±∞) = ±1 and erf(±0) = ±0, as math.erf gives them", () => {
+    // JSON has no infinities and no −0 on the way in: Python reads the strings with float(). Its json
+    // writes −0.0 back, which JSON.parse reads as −0.
+    const [plus, minus, zero, minusZero] = runPythonScript<number[]>("erf_values.py", [
+      "inf",
+      "-inf",
+      0,
+      "-0.0",
+    ]);
     expect(erf(Number.POSITIVE_INFINITY)).toBe(plus);
     expect(erf(Number.NEGATIVE_INFINITY)).toBe(minus);
-    expect(Object.is(erf(0), zero), `erf(0) = ${Object.is(erf(0), -0) ? "-0" : erf(0)}`).toBe(true);
+    const sign = (v: number) => (Object.is(v, -0) ? "-0" : String(v));
+    expect(Object.is(erf(0), zero), `erf(0) = ${sign(erf(0))}`).toBe(true);
+    expect(Object.is(minusZero, -0), "math.erf(-0.0) is -0.0").toBe(true);
+    expect(Object.is(erf(-0), minusZero), `erf(-0) = ${sign(erf(-0))}`).toBe(true);
   });
 
   it("at |x| = 2.5 the continued fraction is used: within 2.2e-16 of math.erf there", () => {

@@ -9,6 +9,8 @@ const TWO_OVER_SQRT_PI = 1.1283791670955126;
  */
 export function erf(x: number): number {
   if (Number.isNaN(x)) return Number.NaN;
+  // erf is odd, so erf(−0) = −0 (as C's erf and Python's math.erf give it); the sign test below sees −0 as 0.
+  if (x === 0) return x;
   const ax = Math.abs(x);
   if (ax < 2.5) {
     let term = ax;

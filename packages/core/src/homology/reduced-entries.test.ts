@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { errorOf } from "../../../../test/support/error-of.js";
 import { ByteLedger, HomologyBudgetError } from "./homology-budget.js";
 import { ReducedEntries } from "./reduced-entries.js";
 
@@ -165,13 +166,7 @@ describe("ReducedEntries", () => {
     more.reserveEntries(1);
     more.append(2, 2, 1);
     for (let s = 0; s < 256; s++) expect(store.extend(0, more, 2)).toBe(s);
-    let error: unknown;
-    try {
-      store.extend(0, more, 2);
-    } catch (e) {
-      error = e;
-    }
-    expect(error).toBeInstanceOf(HomologyBudgetError);
-    expect((error as HomologyBudgetError).stage).toBe("storing reduced entries");
+    const error = errorOf(() => store.extend(0, more, 2), HomologyBudgetError);
+    expect(error.stage).toBe("storing reduced entries");
   });
 });

@@ -19,9 +19,14 @@ beforeAll(() => buildCore(), 120_000);
 describe("differential: barcode layouts, rank path, counts and sweep agree, each case time-bounded", () => {
   it("2,000 undirected graphs: dense and sparse clique layouts", async () => {
     const cases = differentialCases(2000, BASE_SEED, false);
+    // Over Z/2 the sweep over bands is forced too, each way it can end (test/support/band-sweep-policies.ts).
     const { outcomes, failures, ranked, dims, usedDim, withClass } = await runDifferentialCases(cases, [
       "dense",
       "sparse",
+      "dense/wholeFiltration",
+      "sparse/earlyHandOff",
+      "dense/oneBand",
+      "sparse/entryCap",
     ]);
     expect(failures.slice(0, 20)).toEqual([]);
     expect(outcomes).toHaveLength(2000);
@@ -36,7 +41,12 @@ describe("differential: barcode layouts, rank path, counts and sweep agree, each
 
   it("800 directed graphs: flag tables against the rank path", async () => {
     const cases = differentialCases(800, BASE_SEED + 100_000, true);
-    const { outcomes, failures, dims, withClass } = await runDifferentialCases(cases, ["tables"]);
+    const { outcomes, failures, dims, withClass } = await runDifferentialCases(cases, [
+      "tables",
+      "tables/wholeFiltration",
+      "tables/earlyHandOff",
+      "tables/oneBand",
+    ]);
     expect(failures.slice(0, 20)).toEqual([]);
     expect(outcomes).toHaveLength(800);
     expect(dims).toBe(5);

@@ -14,8 +14,10 @@
  * The graphs are networkx's G(n, p) (networkx.gnp_random_graph, weights rounded to 0.01 so that many
  * simplices tie) and their simplex counts networkx.enumerate_all_cliques (test/support/python/clique_counts.py).
  */
+
 import { type Barcode, computeBarcode, fromEdgeList, type WeightedGraph } from "@cliquescape/core";
 import { describe, expect, it } from "vitest";
+import { sweepPolicies } from "../support/band-sweep-policies.js";
 import { missingPythonModules, runPythonScript } from "../support/python.js";
 
 interface Reference {
@@ -43,19 +45,25 @@ function checkPairingLaws(barcode: Barcode, reference: Reference): void {
     stats.columnsReduced,
     stats.columnAdditions,
     stats.storedColumns,
+    stats.sweptColumns,
   ]) {
     expect(counter).toHaveLength(maxDim + 1);
     expect(counter[0]).toBe(0);
   }
   for (let d = 1; d <= maxDim; d++) {
+    // Every column is cleared, apparent, emergent, reduced one by one, or settled by the sweep over bands.
     const kinds =
-      stats.clearedColumns[d] + stats.apparentPairs[d] + stats.emergentPairs[d] + stats.columnsReduced[d];
+      stats.clearedColumns[d] +
+      stats.apparentPairs[d] +
+      stats.emergentPairs[d] +
+      stats.columnsReduced[d] +
+      stats.sweptColumns[d];
     expect(stats.simplices[d], `simplices of dimension ${d}`).toBe(reference.all[d] ?? 0);
     expect(kinds, `columns of dimension ${d} sorted into kinds`).toBe(stats.simplices[d]);
     const killersBelow = barsOf(d - 1).filter((b) => b.death !== null).length;
     expect(stats.clearedColumns[d], `cleared columns of dimension ${d}`).toBe(killersBelow);
     expect(
-      stats.apparentPairs[d] + stats.emergentPairs[d] + stats.columnsReduced[d],
+      stats.apparentPairs[d] + stats.emergentPairs[d] + stats.columnsReduced[d] + stats.sweptColumns[d],
       `bars of dimension ${d}`,
     ).toBe(barsOf(d).length);
     // Additions are counted, never taken away.
@@ -95,19 +103,33 @@ suite(`the barcode's column counters follow the birth-or-death law${skipNote}`, 
       const { reference, graph } = fetchCase(n, p, seed, directed);
       const layouts = directed ? ["auto" as const] : (["dense", "sparse"] as const);
       for (const prime of [2, 5]) {
+        // Over Z/2 also with the sweep over bands forced (test/support/band-sweep-policies.ts).
+        const sweeps =
+          prime === 2
+            ? ["auto" as const, sweepPolicies.wholeFiltration, sweepPolicies.earlyHandOff]
+            : ["auto" as const];
         for (const cliqueLayout of layouts) {
-          const kept = computeBarcode(graph, {
-            semantics: "distance",
-            maxDim,
-            prime,
-            keepZeroLength: true,
-            cliqueLayout,
-          });
-          checkPairingLaws(kept, reference);
-          // Dropping zero-length bars changes the bars, not the work.
-          const plain = computeBarcode(graph, { semantics: "distance", maxDim, prime, cliqueLayout });
-          expect(plain.stats).toEqual(kept.stats);
-          expect(plain.bars).toEqual(kept.bars.filter((b) => b.birth !== b.death));
+          for (const bandSweep of sweeps) {
+            const kept = computeBarcode(graph, {
+              semantics: "distance",
+              maxDim,
+              prime,
+              keepZeroLength: true,
+              cliqueLayout,
+              bandSweep,
+            });
+            checkPairingLaws(kept, reference);
+            // Dropping zero-length bars changes the bars, not the work.
+            const plain = computeBarcode(graph, {
+              semantics: "distance",
+              maxDim,
+              prime,
+              cliqueLayout,
+              bandSweep,
+            });
+            expect(plain.stats).toEqual(kept.stats);
+            expect(plain.bars).toEqual(kept.bars.filter((b) => b.birth !== b.death));
+          }
         }
       }
     });

@@ -5,6 +5,7 @@
  * WebAssembly counts) equals the one-pass annotated TypeScript sweep and separate counts at each threshold, and χ = Σ(−1)^k c_k = Σ(−1)^k β_k where every dimension is covered (Euler–Poincaré;
  * common practice, e.g. A. Hatcher, Algebraic Topology, 2002, Theorem 2.44).
  */
+import { sweepPolicies } from "./band-sweep-policies.js";
 import { BUILT_CORE_URL } from "./built-core.js";
 import { type DifferentialCase, describeCase } from "./differential-cases.js";
 import { runTimeBounded } from "./time-bounded-worker.js";
@@ -79,6 +80,7 @@ export async function runDifferentialCases(
     maxDim: c.maxDim,
     thresholds: c.thresholds,
     layouts,
+    sweepPolicies,
     rank: true,
     simplexLimit,
   }));

@@ -28,12 +28,15 @@ function computeCase(task) {
     }
   }
   const barcodes = {};
+  // A layout may name a policy of the sweep over bands after a slash ("dense/earlyHandOff").
   for (const layout of layouts) {
+    const [name, sweep] = layout.split("/");
     const barcode = core.computeBarcode(graph, {
       semantics,
       maxDim,
       prime,
-      ...(graph.directed ? {} : { cliqueLayout: layout }),
+      ...(graph.directed ? {} : { cliqueLayout: name }),
+      ...(sweep === undefined ? {} : { bandSweep: task.sweepPolicies[sweep] }),
     });
     barcodes[layout] = {
       bars: barcode.bars.map((b) => [b.dim, b.birth, b.death, b.birthSimplex, b.deathSimplex]),

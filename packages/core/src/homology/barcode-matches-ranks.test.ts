@@ -1,5 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { sweepPolicies } from "../../../../test/support/band-sweep-policies.js";
 import { seededRandom } from "../../../../test/support/random.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
@@ -58,11 +59,15 @@ function checkAllThresholds(
 ) {
   const thresholds = [...new Set([...graph.weights, 0])];
   const layouts = graph.directed ? (["auto"] as const) : (["dense", "sparse"] as const);
+  // Over Z/2 also with the sweep over bands forced, each way it can end.
+  const sweeps = prime === 2 ? ["off" as const, ...Object.values(sweepPolicies)] : ["off" as const];
   for (const cliqueLayout of layouts) {
-    const barcode = computeBarcode(graph, { semantics, maxDim, prime, cliqueLayout });
-    for (const threshold of thresholds) {
-      const direct = bettiAt(graph, { threshold, semantics, maxDim, prime });
-      expect(bettiFromBarcode(barcode, threshold)).toEqual(direct);
+    for (const bandSweep of sweeps) {
+      const barcode = computeBarcode(graph, { semantics, maxDim, prime, cliqueLayout, bandSweep });
+      for (const threshold of thresholds) {
+        const direct = bettiAt(graph, { threshold, semantics, maxDim, prime });
+        expect(bettiFromBarcode(barcode, threshold)).toEqual(direct);
+      }
     }
   }
 }
@@ -110,9 +115,19 @@ describe("barcode against direct ranks on larger complete graphs", () => {
       const g = randomGraph(n, 1, 1000, seed, false);
       const sorted = [...new Set(g.weights)].sort((a, b) => a - b);
       const thresholds = sorted.filter((_, i) => i % Math.ceil(sorted.length / 12) === 0);
-      const dense = computeBarcode(g, { semantics: "distance", maxDim: 2, prime, cliqueLayout: "dense" });
-      const sparse = computeBarcode(g, { semantics: "distance", maxDim: 2, prime, cliqueLayout: "sparse" });
+      // The implicit reduction (the sweep over bands is compared with it below).
+      const implicit = { semantics: "distance", maxDim: 2, prime, bandSweep: "off" } as const;
+      const dense = computeBarcode(g, { ...implicit, cliqueLayout: "dense" });
+      const sparse = computeBarcode(g, { ...implicit, cliqueLayout: "sparse" });
       expect(sparse.bars).toEqual(dense.bars);
+      if (prime === 2) {
+        for (const policy of Object.values(sweepPolicies)) {
+          const swept = computeBarcode(g, { semantics: "distance", maxDim: 2, prime, bandSweep: policy });
+          expect(swept.bars).toEqual(dense.bars);
+          // The sweep makes the additions of the same reduction, whichever columns it settles.
+          expect(swept.stats.columnAdditions).toEqual(dense.stats.columnAdditions);
+        }
+      }
       expect(dense.stats.columnAdditions[2]).toBeGreaterThan(0);
       if (n >= 30) expect(dense.stats.storedColumns[2]).toBeGreaterThan(0);
       for (const threshold of thresholds) {
@@ -203,8 +218,21 @@ describe("long filtrations found by replaying changes of the reduction on random
     // A hang fails the test, but the bound is generous: a mutation run instruments the reduction and runs it
     // about ten times slower (G(200, 0.2) took over 20 s there, against 1–3 s here).
     const budget = maxBytes === undefined ? undefined : { maxBytes };
-    const options = { semantics, maxDim, prime, cliqueLayout, timeLimitMs: 90_000, budget };
+    // These graphs were found with the implicit reduction; the sweep over bands is checked on them too.
+    const options = {
+      semantics,
+      maxDim,
+      prime,
+      cliqueLayout,
+      timeLimitMs: 90_000,
+      budget,
+      bandSweep: "off" as const,
+    };
     const barcode = computeBarcode(graph, options);
+    if (prime === 2) {
+      const swept = computeBarcode(graph, { ...options, bandSweep: sweepPolicies.earlyHandOff });
+      expect(swept.bars).toEqual(barcode.bars);
+    }
     const inRange = [...new Set(graph.weights)]
       .filter((w) => w >= range[0] && w <= range[1])
       .sort((a, b) => a - b);

@@ -37,6 +37,11 @@ export interface BarcodeStats {
    * entries instead of regenerating the coboundaries of their chains.
    */
   readonly storedColumns: number[];
+  /**
+   * Columns settled by the sweep over bands of values (apparent pairs not included: they are counted as
+   * such); the sweep's column additions are counted in columnAdditions.
+   */
+  readonly sweptColumns: number[];
   /** Highest number of bytes held in tables, heaps and columns. */
   readonly peakBytes: number;
   /** How coboundaries were produced. */

@@ -1,4 +1,5 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
+import { sweepPolicies } from "../../../../test/support/band-sweep-policies.js";
 import { seededRandom } from "../../../../test/support/random.js";
 import { randomArcs } from "../../../../test/support/random-arcs.js";
 import { tickingClock } from "../../../../test/support/ticking-clock.js";
@@ -9,7 +10,7 @@ import type { WorkProgress } from "../work/work-control.js";
 import { WorkMonitor } from "../work/work-monitor.js";
 import { CliqueCoboundaries } from "./clique-coboundaries.js";
 import { reduceDimension } from "./cohomology-reduction.js";
-import { computeBarcode } from "./compute-barcode.js";
+import { type BarcodeOptions, computeBarcode } from "./compute-barcode.js";
 import { ByteLedger } from "./homology-budget.js";
 import { primeField } from "./prime-field.js";
 import { SimplexQuota } from "./simplex-quota.js";
@@ -106,10 +107,15 @@ describe("reduceDimension's progress", () => {
   });
 
   /** Progress reports of "reducing columns" while computing the barcode, with a clock that reports at every check. */
-  function reductionProgress(graph: WeightedGraph, maxDim: number): WorkProgress[] {
+  function reductionProgress(
+    graph: WeightedGraph,
+    maxDim: number,
+    bandSweep: BarcodeOptions["bandSweep"] = "auto",
+  ): WorkProgress[] {
     tickingClock();
     const seen: WorkProgress[] = [];
-    computeBarcode(graph, { semantics: "distance", maxDim, onProgress: (p) => seen.push(p) });
+    computeBarcode(graph, { semantics: "distance", maxDim, bandSweep, onProgress: (p) => seen.push(p) });
+    vi.restoreAllMocks();
     return seen.filter((p) => p.stage === "reducing columns");
   }
 
@@ -122,12 +128,15 @@ describe("reduceDimension's progress", () => {
 
   it("reports columns done between 0 and the column count, never going back", () => {
     // K_31: 465 edge columns and 4,495 triangle columns (C(31, 3)), more than one 4,096-column stride.
-    const seen = reductionProgress(completeGraph(31, 9), 2);
-    for (const dim of [1, 2]) {
-      const reports = seen.filter((p) => p.dim === dim);
-      expect(reports.length).toBeGreaterThan(2);
-      expect(reports[0].total).toBe(dim === 1 ? 465 : 4495);
-      expectMonotoneWithinTotal(reports);
+    // Also with the sweep over bands forced, each way it can end: it reports the columns it settles.
+    for (const bandSweep of ["off" as const, ...Object.values(sweepPolicies)]) {
+      const seen = reductionProgress(completeGraph(31, 9), 2, bandSweep);
+      for (const dim of [1, 2]) {
+        const reports = seen.filter((p) => p.dim === dim);
+        expect(reports.length).toBeGreaterThan(2);
+        expect(reports[0].total).toBe(dim === 1 ? 465 : 4495);
+        expectMonotoneWithinTotal(reports);
+      }
     }
   });
 
@@ -143,6 +152,7 @@ describe("reduceDimension's progress", () => {
     const barcode = computeBarcode(graph, {
       semantics: "distance",
       maxDim: 2,
+      bandSweep: "off", // the implicit reduction's strides (the sweep's below)
       onProgress: (p) => seen.push(p),
     });
     const stats = barcode.stats;
@@ -179,13 +189,36 @@ describe("reduceDimension's progress", () => {
         weights.push(1 + Math.floor(random() * 1000));
       }
     }
-    const reports = reductionProgress(
-      fromEdgeList({ n: 100, sources, targets, weights, directed: false }),
-      1,
-    );
-    expect(reports.length).toBeGreaterThan(2);
-    expect(reports[0].total).toBe(sources.length);
+    for (const bandSweep of ["off" as const, "auto" as const, sweepPolicies.earlyHandOff]) {
+      const reports = reductionProgress(
+        fromEdgeList({ n: 100, sources, targets, weights, directed: false }),
+        1,
+        bandSweep,
+      );
+      expect(reports.length).toBeGreaterThan(2);
+      expect(reports[0].total).toBe(sources.length);
+      expectMonotoneWithinTotal(reports);
+    }
     expect(sources.length).toBeGreaterThan(4096);
-    expectMonotoneWithinTotal(reports);
+  });
+
+  it("the sweep over bands checks the clock at least once per 64 columns and per 64 additions", () => {
+    // The sweep's contract is the implicit reduction's: a time limit is noticed within a bounded amount of
+    // work, here within a band too. K_40 as above, every column swept.
+    tickingClock();
+    let checks = 0;
+    const graph = fromEdgeList(randomArcs(40, 1, 1000, 1, false));
+    const barcode = computeBarcode(graph, {
+      semantics: "distance",
+      maxDim: 2,
+      bandSweep: sweepPolicies.wholeFiltration,
+      onProgress: (p) => {
+        if (p.stage === "reducing columns" && p.dim === 2) checks++;
+      },
+    });
+    const swept = barcode.stats.sweptColumns[2] + barcode.stats.apparentPairs[2];
+    expect(barcode.stats.sweptColumns[2]).toBeGreaterThan(256);
+    expect(checks).toBeGreaterThanOrEqual(Math.floor(swept / 64));
+    expect(checks).toBeLessThan(swept / 8);
   });
 });

@@ -1,5 +1,6 @@
 import { countAtMost } from "../filtration/count-at-most.js";
 import type { WorkMonitor } from "../work/work-monitor.js";
+import { type BandSweep, type BandSweepPolicy, sweepBands } from "./band-sweep.js";
 import { ChainBuilder } from "./chain-builder.js";
 import type { CoboundaryModel } from "./coboundary-model.js";
 import { ColumnStore } from "./column-store.js";
@@ -20,6 +21,8 @@ export interface ReductionCounters {
   reduced: number;
   additions: number;
   stored: number;
+  /** Columns that would have been reduced one by one, settled by the sweep over bands instead. */
+  swept: number;
 }
 
 /**
@@ -55,6 +58,7 @@ export function reduceDimension(
   sink: PairSink,
   keepZeroLength: boolean,
   monitor: WorkMonitor,
+  sweepPolicy: BandSweepPolicy | null = null,
 ): { pivots: KeyMap; counters: ReductionCounters } {
   const p = field.p;
   const inverse = field.inverse;
@@ -67,12 +71,20 @@ export function reduceDimension(
     reduced: 0,
     additions: 0,
     stored: 0,
+    swept: 0,
   };
 
   // Which columns need work.
   ledger.reserve(list.count * 4, `choosing the ${dim}-simplex columns`);
   const todo = new Int32Array(list.count);
   let todoCount = 0;
+  // The sweep over bands (Z/2 only) reduces every column not cleared, apparent ones included.
+  const sweeping =
+    sweepPolicy !== null && p === 2 && dim <= sweepPolicy.upToDim && list.count >= sweepPolicy.fromSimplices;
+  if (sweeping) ledger.reserve(list.count * 5, `choosing the ${dim}-simplex columns to sweep`);
+  const toSweep = sweeping ? new Int32Array(list.count) : null;
+  const apparent = sweeping ? new Uint8Array(list.count) : null;
+  let toSweepCount = 0;
   monitor.begin("reducing columns", dim, list.count);
   for (let i = 0; i < list.count; i++) {
     if ((i & 4095) === 0) monitor.check(i - todoCount); // columns settled without work so far
@@ -90,9 +102,14 @@ export function reduceDimension(
     if (settled === 2) {
       counters.apparent++;
       if (keepZeroLength) sink.pair(dim, key, f, model.apparentCoface as number, f);
+      if (toSweep !== null && apparent !== null) {
+        toSweep[toSweepCount++] = i;
+        apparent[i] = 1;
+      }
       continue;
     }
     if (settled === 0) {
+      if (toSweep !== null) toSweep[toSweepCount++] = i;
       todo[todoCount++] = i;
       continue;
     }
@@ -107,10 +124,30 @@ export function reduceDimension(
     if (coface >= 0 && model.zeroFacet(dim + 1, coface, f) === key) {
       counters.apparent++;
       if (keepZeroLength) sink.pair(dim, key, f, coface, f);
+      if (toSweep !== null && apparent !== null) {
+        toSweep[toSweepCount++] = i;
+        apparent[i] = 1;
+      }
       continue;
     }
+    if (toSweep !== null) toSweep[toSweepCount++] = i;
     todo[todoCount++] = i;
   }
+  // Columns entering up to the sweep's reach are settled by it; the loop below reduces the rest.
+  let swept: BandSweep | null = null;
+  if (toSweep !== null)
+    swept = sweepBands(
+      model,
+      dim,
+      list.key,
+      list.f,
+      toSweep.subarray(0, toSweepCount),
+      ledger,
+      monitor,
+      sweepPolicy ?? undefined,
+      { done: list.count - todoCount, counted: apparent as Uint8Array },
+    );
+  const reach = swept === null ? Number.NEGATIVE_INFINITY : swept.reach;
   // Latest simplex first: (f, key) descending.
   const columns = todo.subarray(0, todoCount);
   const lf = list.f;
@@ -232,20 +269,31 @@ export function reduceDimension(
     work.bandLow = Number.NEGATIVE_INFINITY;
   };
 
-  // Progress counts every column: those settled while choosing, then the ones reduced here.
-  const settledUpFront = list.count - todoCount;
-  for (let c = 0; c < todoCount; c++) {
+  // The loop reduces the columns entering after the sweep's reach (latest first), then those it handed back.
+  let lazyCount = todoCount;
+  while (lazyCount > 0 && lf[columns[lazyCount - 1]] <= reach) lazyCount--;
+  const handedOff = swept === null ? 0 : swept.handedOff;
+  // Progress counts every column: those settled while choosing or by the sweep, then the ones reduced here.
+  const settledUpFront = list.count - lazyCount - handedOff;
+  for (let c = 0; c < lazyCount + handedOff; c++) {
     if ((c & 63) === 0) monitor.check(settledUpFront + c);
-    const i = columns[c];
+    const handed = c - lazyCount; // ≥ 0 for a handed-back column
+    const i = handed < 0 ? columns[c] : (swept as BandSweep).handedOffColumn[handed];
     const key = lk[i];
     const f = lf[i];
     chain.clear();
-    chain.push(key, f, 1);
+    if (handed < 0) chain.push(key, f, 1);
+    else {
+      const from = (swept as BandSweep).handedOffChains.start[handed];
+      const to = from + (swept as BandSweep).handedOffChains.length[handed];
+      const pool = (swept as BandSweep).handedOffChains.pool;
+      for (let e = from; e < to; e++) chain.push(lk[pool[e]], lf[pool[e]], 1);
+    }
     compactAt = 1024;
     storedCount = 0;
 
     // Emergent pair: the earliest coface enters with σ and nobody has claimed it.
-    const first = model.zeroCoface(dim, key, f);
+    const first = handed < 0 ? model.zeroCoface(dim, key, f) : -1;
     if (first >= 0) {
       const firstCoef = modP(model.sign, p);
       if (pivots.get(first) < 0 && !claimedByApparentPair(model, dim, first, f, key)) {
@@ -264,9 +312,14 @@ export function reduceDimension(
     // dim-simplices); when the heap runs dry before a pivot shows up, the window doubles and the
     // chain is pushed again for the new band.
     window = firstWindow;
-    horizonRank = countAtMost(sortedF, f) + window;
+    horizonRank = countAtMost(sortedF, handed < 0 ? f : reach) + window;
     work.horizon = horizonRank < sortedCount ? sortedF[horizonRank] : Number.POSITIVE_INFINITY;
-    model.pushCoboundary(dim, key, f, 1, p, work);
+    if (handed < 0) model.pushCoboundary(dim, key, f, 1, p, work);
+    else {
+      work.bandLow = reach;
+      for (let e = 0; e < chain.size; e++) model.pushCoboundary(dim, chain.key[e], chain.f[e], 1, p, work);
+      work.bandLow = Number.NEGATIVE_INFINITY;
+    }
     for (;;) {
       if (!work.settle()) {
         if (work.deferred) {
@@ -361,6 +414,25 @@ export function reduceDimension(
       break;
     }
   }
+  if (swept !== null && apparent !== null) {
+    // The swept pairs, after the loop so that its columns never see them (their pivots lie above the reach).
+    for (let q = 0; q < swept.pairs; q++) {
+      const i = swept.column[q];
+      if (apparent[i] === 1) continue; // paired and counted while choosing
+      counters.swept++;
+      pivots.set(swept.pivotKey[q], 0);
+      if (swept.pivotF[q] > lf[i] || keepZeroLength)
+        sink.pair(dim, lk[i], lf[i], swept.pivotKey[q], swept.pivotF[q]);
+    }
+    for (let q = 0; q < swept.essential; q++) {
+      const i = swept.essentialColumn[q];
+      counters.swept++;
+      sink.essential(dim, lk[i], lf[i]);
+    }
+    counters.additions += swept.additions;
+    swept.handedOffChains.dispose();
+  }
+  if (sweeping) ledger.release(list.count * 5);
   work.dispose();
   extender.dispose();
   extension.dispose();

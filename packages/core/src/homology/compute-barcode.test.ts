@@ -1,4 +1,5 @@
 import { describe, expect, it, vi } from "vitest";
+import { sweepPolicies } from "../../../../test/support/band-sweep-policies.js";
 import { explicitGrid } from "../filtration/threshold-grid.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import { bettiAt } from "./betti-at.js";
@@ -159,25 +160,33 @@ describe("stored reduced entries under a tight memory budget", () => {
   it("gives the same bars under any budget it finishes in, and its own error below that", () => {
     // Stored entries take little room at this size (16 per column at first, the rest as read), so the
     // budget stops the run before their quarter share binds; columns without room for entries are
-    // checked in stored-entries-without-room.test.ts.
-    const reference = computeBarcode(g, { semantics: "distance", maxDim: 2 });
-    expect(reference.stats.storedColumns[2]).toBeGreaterThan(0);
-    let finished = 0;
-    let stopped = 0;
-    for (const share of [1.5, 1.3, 1.1, 1, 0.95, 0.9, 0.85, 0.8, 0.7]) {
-      const maxBytes = Math.round(reference.stats.peakBytes * share);
-      try {
-        const tight = computeBarcode(g, { semantics: "distance", maxDim: 2, budget: { maxBytes } });
-        expect(tight.bars).toEqual(reference.bars);
-        expect(tight.stats.peakBytes).toBeLessThanOrEqual(maxBytes);
-        finished++;
-      } catch (error) {
-        expect(error).toBeInstanceOf(HomologyBudgetError);
-        stopped++;
+    // checked in stored-entries-without-room.test.ts. The same with the sweep over bands forced.
+    for (const bandSweep of ["off" as const, sweepPolicies.earlyHandOff, sweepPolicies.wholeFiltration]) {
+      const reference = computeBarcode(g, { semantics: "distance", maxDim: 2, bandSweep });
+      if (bandSweep === "off") expect(reference.stats.storedColumns[2]).toBeGreaterThan(0);
+      else expect(reference.stats.sweptColumns[2]).toBeGreaterThan(0);
+      let finished = 0;
+      let stopped = 0;
+      for (const share of [1.5, 1.3, 1.1, 1, 0.95, 0.9, 0.85, 0.8, 0.7]) {
+        const maxBytes = Math.round(reference.stats.peakBytes * share);
+        try {
+          const tight = computeBarcode(g, {
+            semantics: "distance",
+            maxDim: 2,
+            bandSweep,
+            budget: { maxBytes },
+          });
+          expect(tight.bars).toEqual(reference.bars);
+          expect(tight.stats.peakBytes).toBeLessThanOrEqual(maxBytes);
+          finished++;
+        } catch (error) {
+          expect(error).toBeInstanceOf(HomologyBudgetError);
+          stopped++;
+        }
       }
+      expect(finished).toBeGreaterThan(0);
+      expect(stopped).toBeGreaterThan(0);
     }
-    expect(finished).toBeGreaterThan(0);
-    expect(stopped).toBeGreaterThan(0);
   });
 });
 

@@ -3,6 +3,7 @@ import { fromFiltrationValue, type WeightSemantics } from "../filtration/weight-
 import type { WeightedGraph } from "../graph/weighted-graph.js";
 import type { WorkControl } from "../work/work-control.js";
 import { WorkMonitor } from "../work/work-monitor.js";
+import { type BandSweepPolicy, DEFAULT_BAND_SWEEP } from "./band-sweep.js";
 import type { Bar, Barcode } from "./barcode.js";
 import { CliqueCoboundaries, type CliqueLayout } from "./clique-coboundaries.js";
 import type { CoboundaryModel } from "./coboundary-model.js";
@@ -34,6 +35,12 @@ export interface BarcodeOptions extends WorkControl {
    * very sparse. Both give identical barcodes.
    */
   readonly cliqueLayout?: "auto" | CliqueLayout;
+  /**
+   * Z/2 only: reduce the columns of the early part of the filtration explicitly, band of values by band
+   * (see sweepBands), before the implicit reduction of the rest. "auto" (default): with the default policy;
+   * "off": never; a policy: with it (tests use small bands). Both give identical barcodes.
+   */
+  readonly bandSweep?: "auto" | "off" | BandSweepPolicy;
 }
 
 /**
@@ -94,11 +101,15 @@ export function computeBarcode(graph: WeightedGraph, options: BarcodeOptions): B
     columnsReduced: zeros(),
     columnAdditions: zeros(),
     storedColumns: zeros(),
+    sweptColumns: zeros(),
     peakBytes: 0,
     representation,
   };
   stats.simplices[0] = graph.n;
 
+  const sweepOption = options.bandSweep ?? "auto";
+  const sweepPolicy =
+    sweepOption === "off" ? null : sweepOption === "auto" ? DEFAULT_BAND_SWEEP : sweepOption;
   let cleared = unionFindPairs(model, start, ledger, sink, monitor);
   for (let dim = 1; dim <= maxDim; dim++) {
     const { pivots, counters } = reduceDimension(
@@ -110,6 +121,7 @@ export function computeBarcode(graph: WeightedGraph, options: BarcodeOptions): B
       sink,
       keepZeroLength,
       monitor,
+      sweepPolicy,
     );
     cleared.dispose();
     cleared = pivots;
@@ -121,6 +133,7 @@ export function computeBarcode(graph: WeightedGraph, options: BarcodeOptions): B
     stats.columnsReduced[dim] = counters.reduced;
     stats.columnAdditions[dim] = counters.additions;
     stats.storedColumns[dim] = counters.stored;
+    stats.sweptColumns[dim] = counters.swept;
   }
   cleared.dispose();
   stats.peakBytes = ledger.peak;

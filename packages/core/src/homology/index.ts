@@ -1,3 +1,4 @@
+export type { BandSweepPolicy } from "./band-sweep.js";
 export type { Bar, Barcode, BarcodeStats } from "./barcode.js";
 export { type BettiAtOptions, bettiAt } from "./betti-at.js";
 export { bettiCurves, bettiFromBarcode } from "./betti-curves.js";

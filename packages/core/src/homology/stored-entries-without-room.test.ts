@@ -121,9 +121,9 @@ describe("stored entries without room", () => {
     (seed, maxEntries) => {
       const graph = fromEdgeList(randomArcs(64, 1, 1000, seed, false));
       room.maxEntries = Number.POSITIVE_INFINITY;
-      const roomy = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2 });
+      const roomy = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2, bandSweep: "off" });
       room.maxEntries = maxEntries;
-      const tight = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2 });
+      const tight = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2, bandSweep: "off" });
       room.maxEntries = Number.POSITIVE_INFINITY;
       expect(tight.stats.storedColumns[2]).toBeLessThan(roomy.stats.storedColumns[2]);
       expect(tight.bars).toEqual(roomy.bars);
@@ -151,6 +151,7 @@ describe("stored entries without room", () => {
         semantics: "distance",
         maxDim: 2,
         prime: 2,
+        bandSweep: "off",
         onProgress: (p) => seen.push(p),
       });
       room.maxEntries = Number.POSITIVE_INFINITY;
@@ -179,7 +180,7 @@ describe("stored entries without room", () => {
     const pushes = (extensions: boolean) => {
       room.extensions = extensions;
       const spy = vi.spyOn(CliqueCoboundaries.prototype, "pushCoboundary");
-      const barcode = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2 });
+      const barcode = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2, bandSweep: "off" });
       const count = spy.mock.calls.length;
       spy.mockRestore();
       room.extensions = true;
@@ -204,6 +205,7 @@ describe("stored entries without room", () => {
       semantics: "distance",
       maxDim: 2,
       prime: 2,
+      bandSweep: "off",
       budget: { maxBytes: 16 * 2 ** 20 },
     });
     room.maxEntries = Number.POSITIVE_INFINITY;
@@ -220,7 +222,8 @@ describe("stored entries without room", () => {
       room.maxEntries = 0;
       let stored: number[] = [];
       const events = chainEvents(() => {
-        stored = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2 }).stats.storedColumns;
+        stored = computeBarcode(graph, { semantics: "distance", maxDim: 2, prime: 2, bandSweep: "off" }).stats
+          .storedColumns;
       });
       room.maxEntries = Number.POSITIVE_INFINITY;
       expect(stored).toEqual([0, 0, 0]);

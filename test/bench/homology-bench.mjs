@@ -165,8 +165,8 @@ function main(args) {
       `${(totalmem() / 1024 ** 3).toFixed(0)} GiB, budget ${(budgetBytes / 1024 ** 3).toFixed(2)} GiB, timeout ${timeout} s`,
   );
   const header =
-    "| case | status | wall s | CPU s | peak RSS MiB | bars H0/H1/H2 | apparent | emergent | cleared | reduced | additions |\n" +
-    "|---|---|---|---|---|---|---|---|---|---|---|";
+    "| case | status | wall s | CPU s | peak RSS MiB | bars H0/H1/H2 | apparent | emergent | cleared | reduced | swept | additions |\n" +
+    "|---|---|---|---|---|---|---|---|---|---|---|---|";
   console.log(header);
   if (markdown) appendFileSync(markdown, `${header}\n`);
   for (const name of names) {
@@ -181,17 +181,17 @@ function main(args) {
     );
     let row;
     if (r.error?.code === "ETIMEDOUT" || r.signal === "SIGTERM") {
-      row = `| ${describe(name)} | timeout after ${timeout} s | — | — | — | — | — | — | — | — | — |`;
+      row = `| ${describe(name)} | timeout after ${timeout} s | — | — | — | — | — | — | — | — | — | — |`;
     } else if (r.status !== 0) {
-      row = `| ${describe(name)} | crashed: ${(r.stderr || "").trim().split("\n").pop()} | — | — | — | — | — | — | — | — | — |`;
+      row = `| ${describe(name)} | crashed: ${(r.stderr || "").trim().split("\n").pop()} | — | — | — | — | — | — | — | — | — | — |`;
     } else {
       const o = JSON.parse(r.stdout.trim().split("\n").pop());
       if (o.status === "budget") {
-        row = `| ${describe(name)} | budget: ${o.error} | ${fmt(o.wallSeconds)} | ${fmt(o.cpuSeconds)} | ${fmt(o.peakRssMiB, 0)} | — | — | — | — | — | — |`;
+        row = `| ${describe(name)} | budget: ${o.error} | ${fmt(o.wallSeconds)} | ${fmt(o.cpuSeconds)} | ${fmt(o.peakRssMiB, 0)} | — | — | — | — | — | — | — |`;
       } else {
         const s = o.stats;
         const list = (a) => a.join("/");
-        row = `| ${describe(name)} | ok | ${fmt(o.wallSeconds)} | ${fmt(o.cpuSeconds)} | ${fmt(o.peakRssMiB, 0)} | ${list(o.bars)} | ${list(s.apparentPairs)} | ${list(s.emergentPairs)} | ${list(s.clearedColumns)} | ${list(s.columnsReduced)} | ${list(s.columnAdditions)} |`;
+        row = `| ${describe(name)} | ok | ${fmt(o.wallSeconds)} | ${fmt(o.cpuSeconds)} | ${fmt(o.peakRssMiB, 0)} | ${list(o.bars)} | ${list(s.apparentPairs)} | ${list(s.emergentPairs)} | ${list(s.clearedColumns)} | ${list(s.columnsReduced)} | ${list(s.sweptColumns)} | ${list(s.columnAdditions)} |`;
       }
     }
     console.log(row);

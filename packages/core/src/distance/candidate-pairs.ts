@@ -1,3 +1,4 @@
+import { countBelow } from "../filtration/count-below.js";
 import { DEFAULT_DISTANCE_BYTES, DistanceBudgetError } from "./distance-budget-error.js";
 import type { PersistenceDiagram } from "./persistence-diagram.js";
 
@@ -37,7 +38,7 @@ export function candidatePairs(
     const bi = a.births[i];
     const di = a.deaths[i];
     const r = reach[i];
-    for (let k = firstAtLeast(sortedBirths, bi - r); k < m && sortedBirths[k] <= bi + r; k++) {
+    for (let k = countBelow(sortedBirths, bi - r); k < m && sortedBirths[k] <= bi + r; k++) {
       const j = order[k];
       const c = Math.max(Math.abs(bi - b.births[j]), Math.abs(di - b.deaths[j]));
       if (!keep(i, j, c)) continue;
@@ -60,17 +61,6 @@ export function diagonalDistances(d: PersistenceDiagram): Float64Array {
   const out = new Float64Array(d.births.length);
   for (let i = 0; i < out.length; i++) out[i] = (d.deaths[i] - d.births[i]) / 2;
   return out;
-}
-
-function firstAtLeast(sorted: Float64Array, x: number): number {
-  let lo = 0;
-  let hi = sorted.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (sorted[mid] < x) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
 }
 
 function grow<T extends Int32Array | Float64Array>(from: T, to: T): T {

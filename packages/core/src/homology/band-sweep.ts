@@ -1,4 +1,5 @@
 import { countAtMost } from "../filtration/count-at-most.js";
+import { countBelow } from "../filtration/count-below.js";
 import type { WorkMonitor } from "../work/work-monitor.js";
 import type { CoboundaryModel } from "./coboundary-model.js";
 import type { CofaceSink } from "./coface-sink.js";
@@ -115,7 +116,7 @@ export function sweepBands(
     for (let i = 0; i < total; i++) {
       const g = fs[columnsToReduce[i]];
       if (g <= from || g > to) continue;
-      const at = countLess(sortedF, g);
+      const at = countBelow(sortedF, g);
       ascending[at + placed[at]++] = columnsToReduce[i];
     }
     placedUpTo = countAtMost(sortedF, to);
@@ -495,18 +496,6 @@ class EntryCollector implements CofaceSink {
     ledger.release(used * 4 + 8 * distinct);
     return distinct;
   }
-}
-
-/** Number of entries < x in an ascending list. */
-function countLess(sorted: Float64Array, x: number): number {
-  let lo = 0;
-  let hi = sorted.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (sorted[mid] < x) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
 }
 
 function toggleRows(bits: Int32Array, rows: Int32Array, from: number, to: number): void {

@@ -14,10 +14,11 @@ import { matrixCsv, runCli, scratchFiles } from "./run-cli.js";
 const BIN = fileURLToPath(new URL("../../packages/cli/bin/cliquescape.js", import.meta.url));
 
 /**
- * A complete graph with uniform random weights, n = 180, to H3: H2 alone takes 12 s at n = 160 and 57 s at
- * n = 200 on an idle machine (docs/benchmarks.md, seventh round), H3 far more: past every limit below on
- * any machine.
+ * A complete graph with uniform random weights, n = 180, to H4 (`HEAVY_TOP_DIM`): to H3 it now takes about
+ * 4 s (docs/benchmarks.md, issue 11's twelfth round), to H4 more than 40 s on the idle project machine,
+ * still reducing its 42 million tetrahedron columns: past every limit below on any machine.
  */
+const HEAVY_TOP_DIM = "4";
 function heavyMatrix(n: number): (number | null)[][] {
   const random = seededRandom(180);
   const m = Array.from({ length: n }, () => Array<number | null>(n).fill(null));
@@ -47,7 +48,7 @@ function runBounded(args: string[], boundMs: number) {
 describe("--time-limit", () => {
   for (const command of ["barcode", "inspect", "sweep"]) {
     it(`${command} stops a graph past it with the stage, how far it got and the option to change`, () => {
-      const run = runBounded([command, heavy, "--top-dim", "3", "--time-limit", "2"], 60_000);
+      const run = runBounded([command, heavy, "--top-dim", HEAVY_TOP_DIM, "--time-limit", "2"], 60_000);
       expect(run.signal).toBeNull();
       expect(run.status).toBe(3);
       expect(run.stderr).toMatch(
@@ -66,7 +67,7 @@ describe("--time-limit", () => {
 
 describe("progress while one graph runs", () => {
   it("prints a plain line every five seconds when stderr is not a terminal", () => {
-    const run = runBounded(["barcode", heavy, "--top-dim", "3", "--time-limit", "11"], 90_000);
+    const run = runBounded(["barcode", heavy, "--top-dim", HEAVY_TOP_DIM, "--time-limit", "11"], 90_000);
     expect(run.status).toBe(3);
     const lines = run.stderr.split("\n").filter((line) => line.includes("heavy.csv: "));
     // From 5 s on, at most one line per five seconds (a loaded machine may reach the limit before the
@@ -106,11 +107,14 @@ describe("extract --time-limit", () => {
         "--threshold",
         "0.2,0.5,0.9",
         "--top-dim",
-        "3",
+        HEAVY_TOP_DIM,
         "--barcode-range",
         "full",
         "--workers",
         "1",
+        // The 42 million tetrahedra need more than the default 1,024 MiB: the time limit must stop it first.
+        "--memory",
+        "4096",
         "--time-limit",
         "11",
       ],

@@ -5,7 +5,7 @@ import { edgeFiltration } from "../filtration/edge-filtration.js";
 import { fromEdgeList } from "../graph/from-edge-list.js";
 import type { WeightedGraph } from "../graph/weighted-graph.js";
 import { WorkMonitor } from "../work/work-monitor.js";
-import { sweepBands } from "./band-sweep.js";
+import { DEFAULT_BAND_SWEEP, sweepBands } from "./band-sweep.js";
 import { CliqueCoboundaries } from "./clique-coboundaries.js";
 import type { CofaceSink } from "./coface-sink.js";
 import { reduceDimension } from "./cohomology-reduction.js";
@@ -137,6 +137,31 @@ describe("sweepBands", () => {
     const capped = run(sweepPolicies.entryCap);
     expect(capped.bands).toBeGreaterThan(1);
     expect(capped.reach).toBeLessThan(Number.POSITIVE_INFINITY);
+  });
+
+  it("with the default policy's wide bands, the implicit reduction's bars and pairs (K_64, uniform weights)", () => {
+    // The policies above keep bands of a few columns; the default one starts at 4,096 columns a band, where
+    // the order of the columns within a band matters (latest first). K_64 with random distances: 41,664
+    // triangles and 2,016 edges, both dimensions swept at sizes a test can afford (fromSimplices lowered).
+    const graph = fromEdgeList(randomArcs(64, 1, 1_000_000, 11, false));
+    const implicit = computeBarcode(graph, {
+      semantics: "distance",
+      maxDim: 2,
+      bandSweep: "off",
+      keepZeroLength: true,
+    });
+    for (const firstBandColumns of [4096, 256]) {
+      const policy = { ...DEFAULT_BAND_SWEEP, fromSimplices: 0, firstBandColumns };
+      const swept = computeBarcode(graph, {
+        semantics: "distance",
+        maxDim: 2,
+        bandSweep: policy,
+        keepZeroLength: true,
+      });
+      expect(swept.stats.sweptColumns[1]).toBeGreaterThan(0);
+      expect(swept.stats.sweptColumns[2]).toBeGreaterThan(100);
+      expect(swept.bars).toEqual(implicit.bars);
+    }
   });
 
   it("stops before a band that would not fit the budget, instead of failing", () => {

@@ -164,6 +164,32 @@ describe("sweepBands", () => {
     }
   });
 
+  it("reduces a band's own columns latest first in the order (f, key), ties in f by key", () => {
+    // The reduction's order (CoboundaryModel: (f, dimension, key)) must hold within a band too: which of
+    // tied simplices is paired follows it, and columns handed to the implicit reduction continue in it.
+    // Seen from outside: the sweep produces each new column's coboundary first, in the order it reduces
+    // them. K_30 with 3 distance levels (test/support/random-arcs.ts): bands of thousands of tied edges.
+    const graph = fromEdgeList(randomArcs(30, 1, 3, 6, false));
+    const { model, ledger, monitor, list, columns } = edgeColumns(graph);
+    const order: number[] = [];
+    const push = model.pushCoboundary.bind(model);
+    model.pushCoboundary = (dim, key, f, factor, p, sink) => {
+      order.push(key);
+      push(dim, key, f, factor, p, sink);
+    };
+    const policy = { ...sweepPolicies.wholeFiltration, firstBandColumns: 1 << 20 }; // one band: every column
+    const swept = sweepBands(model, 1, list.key, list.f, columns, ledger, monitor, policy);
+    swept.handedOffChains.dispose();
+    expect(swept.bands).toBe(1);
+    // The first push of each column's coboundary comes in the order it is reduced: (f, key) descending.
+    const firsts = [...new Set(order)];
+    const expected = Array.from(columns)
+      .sort((a, b) => (list.f[a] !== list.f[b] ? list.f[b] - list.f[a] : list.key[b] - list.key[a]))
+      .map((i) => list.key[i]);
+    expect(new Set(Array.from(columns, (i) => list.f[i])).size).toBe(3); // ties: 3 values for 400 columns
+    expect(firsts).toEqual(expected);
+  });
+
   it("stops before a band that would not fit the budget, instead of failing", () => {
     // K_24 with every distance equal: one value, so the first band would hold every coface entry (4 per
     // tetrahedron, C(24, 4) = 10,626 tetrahedra) — past the room left by a budget just over what the

@@ -162,7 +162,7 @@ export function sweepBands(
       band.sort((a, b) => (fs[a] !== fs[b] ? (fs[a] > fs[b] ? -1 : 1) : keys[b] - keys[a]));
       const columns = fresh + carried.count;
       // The band's columns in reduction order: its own, latest first, then the carried ones (kept latest first).
-      ledger.reserve(columns * 12, "sweeping bands of columns"); // these two and chainOf below
+      ledger.reserve(columns * 12, "sweeping bands of columns"); // these two and carryChains' chain ids
       const colIndex = new Int32Array(columns);
       const entryStart = new Int32Array(columns + 1);
       // Bytes per entry pushed, the band's tables included (rank's map, the rows, the reduced entries).
@@ -189,7 +189,6 @@ export function sweepBands(
         // Too many entries for one band: stop before it (its columns go to the caller, with those carried).
         ledger.release(columns * 12);
         handOff(out, carried, carriedColumn, lo);
-        carried = new IndexChains(ledger); // what the finally block disposes
         return out;
       }
       // Rows: the band's distinct cofaces in filtration order (f, key).
@@ -206,38 +205,12 @@ export function sweepBands(
         (c, pivot) => pushPair(out, colIndex[c], entries.rowKey[pivot], entries.rowF[pivot]),
       );
       out.additions += additions.count;
-      // Chains, for the columns carried on and those they added (and so on): its simplex, or the chain it
-      // was carried in with, plus the chains of the columns it added. Added columns come earlier in the band.
-      const { zero, addedStart, addedPool } = additions;
-      const needed = zero.slice();
-      for (let c = columns - 1; c >= 0; c--) {
-        if (needed[c] === 0) continue;
-        for (let e = addedStart[c]; e < addedStart[c + 1]; e++) needed[addedPool[e]] = 1;
-      }
-      const bandChains = new IndexChains(ledger);
-      const nextCarried = new IndexChains(ledger);
-      let nextColumn: Int32Array = new Int32Array(64);
-      const chainOf = new Int32Array(columns); // the chain id of a needed column that owns a pivot
-      for (let c = 0; c < columns; c++) {
-        if (needed[c] === 0) continue;
-        if (c < fresh) chain.toggle(colIndex[c]);
-        else chain.add(carried, c - fresh);
-        for (let e = addedStart[c]; e < addedStart[c + 1]; e++) chain.add(bandChains, chainOf[addedPool[e]]);
-        if (zero[c] === 0) {
-          chainOf[c] = chain.takeInto(bandChains);
-          continue;
-        }
-        // Zero within the band: carried on with its chain.
-        const id = chain.takeInto(nextCarried);
-        if (id === nextColumn.length) nextColumn = grownInt(nextColumn, id * 2);
-        nextColumn[id] = colIndex[c];
-      }
+      const onward = carryChains(additions, colIndex, fresh, carried, chain, ledger);
       additions.release();
       ledger.release(columns * 12);
-      bandChains.dispose();
       carried.dispose();
-      carried = nextCarried;
-      carriedColumn = nextColumn;
+      carried = onward.chains;
+      carriedColumn = onward.column;
       out.bands++;
       next = end;
       lo = hi;
@@ -253,14 +226,13 @@ export function sweepBands(
         rowsSoFar > policy.maxRows
       ) {
         handOff(out, carried, carriedColumn, hi);
-        carried = new IndexChains(ledger); // what the finally block disposes
         return out;
       }
       if (rows > 2 * policy.rowsPerBand && bandColumns > 1) bandColumns >>= 1;
       else if (rows < policy.rowsPerBand / 2) bandColumns *= 2;
     }
   } finally {
-    carried.dispose();
+    if (carried !== out.handedOffChains) carried.dispose(); // handed-off chains are the caller's to dispose
     chain.dispose();
     entries.dispose();
     ledger.release(total * 16);
@@ -369,6 +341,47 @@ function reduceBand(
     addedPool,
     release: () => ledger.release(fixedBytes + grownBytes),
   };
+}
+
+/**
+ * The chains of a band's zero columns, carried to the next band: each column's simplex (or the chain it was
+ * carried in with) plus the chains of the columns it added, formed only for the zero columns and the
+ * columns they added (and so on). Added columns come earlier in the band, so one pass in order suffices.
+ */
+function carryChains(
+  band: { zero: Uint8Array; addedStart: Int32Array; addedPool: Int32Array },
+  colIndex: Int32Array,
+  fresh: number,
+  carried: IndexChains,
+  chain: ChainSum,
+  ledger: ByteLedger,
+): { chains: IndexChains; column: Int32Array } {
+  const { zero, addedStart, addedPool } = band;
+  const columns = zero.length;
+  const needed = zero.slice();
+  for (let c = columns - 1; c >= 0; c--) {
+    if (needed[c] === 0) continue;
+    for (let e = addedStart[c]; e < addedStart[c + 1]; e++) needed[addedPool[e]] = 1;
+  }
+  const bandChains = new IndexChains(ledger);
+  const chains = new IndexChains(ledger);
+  let column: Int32Array = new Int32Array(64);
+  const chainOf = new Int32Array(columns); // the chain id of a needed column that owns a pivot
+  for (let c = 0; c < columns; c++) {
+    if (needed[c] === 0) continue;
+    if (c < fresh) chain.toggle(colIndex[c]);
+    else chain.add(carried, c - fresh);
+    for (let e = addedStart[c]; e < addedStart[c + 1]; e++) chain.add(bandChains, chainOf[addedPool[e]]);
+    if (zero[c] === 0) {
+      chainOf[c] = chain.takeInto(bandChains);
+      continue;
+    }
+    const id = chain.takeInto(chains);
+    if (id === column.length) column = grownInt(column, id * 2);
+    column[id] = colIndex[c];
+  }
+  bandChains.dispose();
+  return { chains, column };
 }
 
 /** Ends the sweep at `reach`, the columns still carried going to the caller. */

@@ -85,6 +85,11 @@ export function reduceDimension(
   const toSweep = sweeping ? new Int32Array(list.count) : null;
   const apparent = sweeping ? new Uint8Array(list.count) : null;
   let toSweepCount = 0;
+  const sweepLater = (i: number, isApparent: boolean): void => {
+    if (toSweep === null || apparent === null) return;
+    toSweep[toSweepCount++] = i;
+    if (isApparent) apparent[i] = 1;
+  };
   monitor.begin("reducing columns", dim, list.count);
   for (let i = 0; i < list.count; i++) {
     if ((i & 4095) === 0) monitor.check(i - todoCount); // columns settled without work so far
@@ -102,14 +107,11 @@ export function reduceDimension(
     if (settled === 2) {
       counters.apparent++;
       if (keepZeroLength) sink.pair(dim, key, f, model.apparentCoface as number, f);
-      if (toSweep !== null && apparent !== null) {
-        toSweep[toSweepCount++] = i;
-        apparent[i] = 1;
-      }
+      sweepLater(i, true);
       continue;
     }
     if (settled === 0) {
-      if (toSweep !== null) toSweep[toSweepCount++] = i;
+      sweepLater(i, false);
       todo[todoCount++] = i;
       continue;
     }
@@ -124,13 +126,10 @@ export function reduceDimension(
     if (coface >= 0 && model.zeroFacet(dim + 1, coface, f) === key) {
       counters.apparent++;
       if (keepZeroLength) sink.pair(dim, key, f, coface, f);
-      if (toSweep !== null && apparent !== null) {
-        toSweep[toSweepCount++] = i;
-        apparent[i] = 1;
-      }
+      sweepLater(i, true);
       continue;
     }
-    if (toSweep !== null) toSweep[toSweepCount++] = i;
+    sweepLater(i, false);
     todo[todoCount++] = i;
   }
   // Columns entering up to the sweep's reach are settled by it; the loop below reduces the rest.
@@ -273,21 +272,22 @@ export function reduceDimension(
   let lazyCount = todoCount;
   while (lazyCount > 0 && lf[columns[lazyCount - 1]] <= reach) lazyCount--;
   const handedOff = swept === null ? 0 : swept.handedOff;
+  const handedColumn = swept === null ? null : swept.handedOffColumn;
+  const handedChains = swept === null ? null : swept.handedOffChains;
   // Progress counts every column: those settled while choosing or by the sweep, then the ones reduced here.
   const settledUpFront = list.count - lazyCount - handedOff;
   for (let c = 0; c < lazyCount + handedOff; c++) {
     if ((c & 63) === 0) monitor.check(settledUpFront + c);
     const handed = c - lazyCount; // ≥ 0 for a handed-back column
-    const i = handed < 0 ? columns[c] : (swept as BandSweep).handedOffColumn[handed];
+    const i = handed < 0 || handedColumn === null ? columns[c] : handedColumn[handed];
     const key = lk[i];
     const f = lf[i];
     chain.clear();
-    if (handed < 0) chain.push(key, f, 1);
+    if (handed < 0 || handedChains === null) chain.push(key, f, 1);
     else {
-      const from = (swept as BandSweep).handedOffChains.start[handed];
-      const to = from + (swept as BandSweep).handedOffChains.length[handed];
-      const pool = (swept as BandSweep).handedOffChains.pool;
-      for (let e = from; e < to; e++) chain.push(lk[pool[e]], lf[pool[e]], 1);
+      const from = handedChains.start[handed];
+      const pool = handedChains.pool;
+      for (let e = from; e < from + handedChains.length[handed]; e++) chain.push(lk[pool[e]], lf[pool[e]], 1);
     }
     compactAt = 1024;
     storedCount = 0;
@@ -420,7 +420,7 @@ export function reduceDimension(
       const i = swept.column[q];
       if (apparent[i] === 1) continue; // paired and counted while choosing
       counters.swept++;
-      pivots.set(swept.pivotKey[q], 0);
+      pivots.set(swept.pivotKey[q], 0); // only whether it is a pivot is read (the next dimension's clearing)
       if (swept.pivotF[q] > lf[i] || keepZeroLength)
         sink.pair(dim, lk[i], lf[i], swept.pivotKey[q], swept.pivotF[q]);
     }
